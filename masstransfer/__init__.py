@@ -1,0 +1,85 @@
+"""masstransfer: diffusivities, heat-mass transfer analogies and correlations.
+
+Numbers in, numbers out (``fuller``, ``wilke_chang``, ...) for tight loops;
+names in (``gas_diffusivity("toluene", "air", T=...)``) for scripts.  SI
+units throughout.  The property databases of ``chemicals`` and ``thermo``
+are loaded on first use, not on import.
+"""
+
+from __future__ import annotations
+
+from . import data, diffusivity, errors, properties
+from .diffusivity import (
+    arrhenius_diffusivity,
+    blanc,
+    bosanquet,
+    brokaw,
+    chapman_enskog,
+    effective_diffusivity,
+    fuller,
+    fuller_volume,
+    gas_diffusivity,
+    gas_diffusivity_in_mixture,
+    hayduk_minhas,
+    hayduk_minhas_aqueous,
+    knudsen_diffusivity,
+    liquid_diffusivity,
+    rescale_gas_diffusivity,
+    stokes_einstein,
+    tyn_calus,
+    wilke_chang,
+    wilke_lee,
+)
+from .errors import (
+    EnvelopeWarning,
+    InputValueError,
+    MassTransferError,
+    MassTransferWarning,
+    MissingConstantError,
+    OutOfRangeError,
+    UnknownMethodError,
+    UnknownSpeciesError,
+)
+from .properties import gas_model, liquid_model
+from .species import Species, species
+
+__version__ = "0.1.0"
+
+__all__ = [
+    "EnvelopeWarning",
+    "InputValueError",
+    "MassTransferError",
+    "MassTransferWarning",
+    "MissingConstantError",
+    "OutOfRangeError",
+    "Species",
+    "UnknownMethodError",
+    "UnknownSpeciesError",
+    "__version__",
+    "arrhenius_diffusivity",
+    "blanc",
+    "bosanquet",
+    "brokaw",
+    "chapman_enskog",
+    "data",
+    "diffusivity",
+    "effective_diffusivity",
+    "errors",
+    "fuller",
+    "fuller_volume",
+    "gas_diffusivity",
+    "gas_diffusivity_in_mixture",
+    "gas_model",
+    "hayduk_minhas",
+    "hayduk_minhas_aqueous",
+    "knudsen_diffusivity",
+    "liquid_diffusivity",
+    "liquid_model",
+    "properties",
+    "rescale_gas_diffusivity",
+    "species",
+    "stokes_einstein",
+    "tyn_calus",
+    "wilke_chang",
+    "wilke_lee",
+]

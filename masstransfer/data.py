@@ -1,0 +1,134 @@
+"""Published constants used by the estimation methods, each table with its source.
+
+Every table lives here once.  Values are as printed in the cited source; the
+unit of each table is stated beside it.  Where a value was transcribed from
+the cited book without the book at hand it says "(from memory)", so that a
+reader can check it against the page.
+"""
+
+from __future__ import annotations
+
+from types import MappingProxyType
+from typing import Final
+
+__all__ = [
+    "AIR",
+    "FULLER_ATOMIC_VOLUMES",
+    "FULLER_RING_INCREMENT",
+    "FULLER_SPECIAL_VOLUMES",
+    "LE_BAS_ATOMIC_VOLUMES",
+    "LE_BAS_RING_INCREMENTS",
+    "WILKE_CHANG_ASSOCIATION",
+]
+
+# --- Fuller, Schettler & Giddings diffusion volumes -----------------------
+# Set published by Fuller, Ensley & Giddings (1969), J. Phys. Chem. 73, 3679,
+# as tabulated in Poling, Prausnitz & O'Connell, The Properties of Gases and
+# Liquids, 5th ed. (2001), Table 11-1 (from memory).  Unit: cm^3/mol (the
+# method's nominal unit; the numbers are fitted parameters).
+FULLER_ATOMIC_VOLUMES: Final = MappingProxyType(
+    {
+        "C": 15.9,
+        "H": 2.31,
+        "O": 6.11,
+        "N": 4.54,
+        "F": 14.7,
+        "Cl": 21.0,
+        "Br": 21.9,
+        "I": 29.8,
+        "S": 22.9,
+    }
+)
+#: Increment per aromatic or heterocyclic ring, same source.  The table gives
+#: no increment for saturated carbocyclic rings; none is applied to them.
+FULLER_RING_INCREMENT: Final = -18.3
+
+# Diffusion volumes of simple molecules, same source, keyed by CAS number.
+FULLER_SPECIAL_VOLUMES: Final = MappingProxyType(
+    {
+        "7440-59-7": 2.67,  # He
+        "7440-01-9": 5.98,  # Ne
+        "7440-37-1": 16.2,  # Ar
+        "7439-90-9": 24.5,  # Kr
+        "7440-63-3": 32.7,  # Xe
+        "1333-74-0": 6.12,  # H2
+        "7782-39-0": 6.84,  # D2
+        "7727-37-9": 18.5,  # N2
+        "7782-44-7": 16.3,  # O2
+        "air": 19.7,  # air (pseudo-species)
+        "630-08-0": 18.0,  # CO
+        "124-38-9": 26.9,  # CO2
+        "10024-97-2": 35.9,  # N2O
+        "7664-41-7": 20.7,  # NH3
+        "7732-18-5": 13.1,  # H2O
+        "2551-62-4": 71.3,  # SF6
+        "7782-50-5": 38.4,  # Cl2
+        "7726-95-6": 69.0,  # Br2
+        "7446-09-5": 41.8,  # SO2
+    }
+)
+
+# --- Le Bas additive molar volumes at the normal boiling point ------------
+# Le Bas (1915), The Molecular Volumes of Liquid Chemical Compounds, as
+# tabulated in Reid, Prausnitz & Sherwood, The Properties of Gases and
+# Liquids, 3rd ed. (1977), Table 3-8, and in Treybal, Mass-Transfer
+# Operations, 3rd ed. (1980), Table 2.3 (from memory).  Unit: cm^3/mol.
+LE_BAS_ATOMIC_VOLUMES: Final = MappingProxyType(
+    {
+        "C": 14.8,
+        "H": 3.7,
+        "O": 7.4,  # general (carbonyl, hydroxyl of alcohols)
+        "O_methyl_ether": 9.1,  # in methyl esters and ethers
+        "O_ethyl_ether": 9.9,  # in ethyl esters and ethers
+        "O_higher_ether": 11.0,  # in higher esters and ethers
+        "O_acid": 12.0,  # in carboxylic acids
+        "O_to_SPN": 8.3,  # joined to S, P or N
+        "N": 15.6,  # double- or triple-bonded
+        "N_primary_amine": 10.5,
+        "N_secondary_amine": 12.0,
+        "Br": 27.0,
+        "Cl": 24.6,
+        "F": 8.7,
+        "I": 37.0,
+        "S": 25.6,
+        "P": 27.0,
+    }
+)
+#: Ring increments by ring size, same source (naphthalene -30.0 is two
+#: six-membered rings; anthracene's tabulated -47.5 is approximated as three).
+LE_BAS_RING_INCREMENTS: Final = MappingProxyType({3: -6.0, 4: -8.5, 5: -11.5, 6: -15.0})
+
+# --- Wilke-Chang association factors --------------------------------------
+# Wilke & Chang (1955), AIChE J. 1, 264; as given in Poling, Prausnitz &
+# O'Connell, 5th ed. (2001), Section 11-9 (from memory).  Keyed by CAS.
+# Unassociated solvents take 1.0.  Hayduk & Laudie (1974) recommend 2.26 for
+# water; the original 2.6 is kept as the default.
+WILKE_CHANG_ASSOCIATION: Final = MappingProxyType(
+    {
+        "7732-18-5": 2.6,  # water
+        "67-56-1": 1.9,  # methanol
+        "64-17-5": 1.5,  # ethanol
+    }
+)
+
+# --- Air as a pseudo-species ------------------------------------------------
+# Molar mass and composition: Lemmon, Jacobsen, Penoncello & Friend (2000),
+# J. Phys. Chem. Ref. Data 29, 331 (from memory).  Lennard-Jones parameters:
+# Svehla (1962), NASA TR R-132, as reprinted in Poling, Prausnitz & O'Connell
+# 5th ed., Appendix B (from memory).  Molar volume at the normal boiling
+# point: Treybal, 3rd ed., Table 2.3 (from memory).  SI units.
+AIR: Final = MappingProxyType(
+    {
+        "molar_mass": 0.0289586,  # kg/mol
+        "Tb": 78.9,  # K (dew point at 1 atm)
+        "Tc": 132.5306,  # K (maxcondentherm)
+        "Pc": 3.786e6,  # Pa
+        "omega": 0.0335,  # [-]
+        "sigma": 3.711e-10,  # m
+        "epsilon_k": 78.6,  # K
+        "Vb": 29.9e-6,  # m^3/mol
+        "dipole": 0.0,  # C m
+        # Mole fractions used for carrier-gas properties (CAS -> fraction).
+        "composition": (("7727-37-9", 0.7812), ("7782-44-7", 0.2096), ("7440-37-1", 0.0092)),
+    }
+)

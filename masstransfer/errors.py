@@ -1,0 +1,61 @@
+"""One exception family and one warning family for the whole library.
+
+Every error the library raises derives from :class:`MassTransferError` and
+also from the built-in exception it resembles, so callers may catch either
+``masstransfer.MassTransferError`` or, for example, ``ValueError``.
+Messages name the argument, the offending value and how to fix it.
+"""
+
+from __future__ import annotations
+
+__all__ = [
+    "EnvelopeWarning",
+    "InputShapeError",
+    "InputValueError",
+    "MassTransferError",
+    "MassTransferWarning",
+    "MissingConstantError",
+    "OutOfRangeError",
+    "UnknownMethodError",
+    "UnknownSpeciesError",
+]
+
+
+class MassTransferError(Exception):
+    """Base class of every error raised by ``masstransfer``."""
+
+
+class InputValueError(MassTransferError, ValueError):
+    """An argument has a value the method cannot accept (NaN, inf, <= 0, ...)."""
+
+
+class InputShapeError(InputValueError):
+    """Array arguments do not broadcast against each other."""
+
+
+class UnknownMethodError(InputValueError):
+    """A ``method=`` (or similar choice) is not one of the accepted names."""
+
+
+class UnknownSpeciesError(MassTransferError, LookupError, ValueError):
+    """A species name, CAS number or formula could not be resolved."""
+
+
+class MissingConstantError(MassTransferError, ValueError):
+    """A resolved species lacks a constant that the chosen method needs."""
+
+
+class OutOfRangeError(InputValueError):
+    """A state lies outside the range a property model or method covers.
+
+    Raised, for instance, when a solvent is asked for liquid properties at a
+    temperature at which it is not a liquid.
+    """
+
+
+class MassTransferWarning(UserWarning):
+    """Base class of every warning issued by ``masstransfer``."""
+
+
+class EnvelopeWarning(MassTransferWarning):
+    """An input lies outside the range over which a method was validated."""
