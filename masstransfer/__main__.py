@@ -1,0 +1,7 @@
+"""Allow ``python -m masstransfer``."""
+
+from __future__ import annotations
+
+from .cli import main
+
+raise SystemExit(main())
