@@ -35,6 +35,7 @@ import numpy as np
 from numpy.polynomial import chebyshev as _cheb
 
 from . import data
+from ._databases import quiet
 from ._typing import ArrayLike, FloatArray, FloatOrArray
 from ._validation import check_positive, check_shapes, finish
 from .errors import MissingConstantError, OutOfRangeError
@@ -333,6 +334,11 @@ def liquid_model(liquid: str | Species) -> LiquidModel:
 
 @functools.lru_cache(maxsize=128)
 def _gas_model(sp: Species) -> GasModel:
+    with quiet():
+        return _build_gas_model(sp)
+
+
+def _build_gas_model(sp: Species) -> GasModel:
     if sp.name == "air" and sp.CAS is None:
         return _air_model(sp)
     if not sp.CAS:
@@ -390,6 +396,11 @@ def _air_model(sp: Species) -> GasModel:
 
 @functools.lru_cache(maxsize=128)
 def _liquid_model(sp: Species) -> LiquidModel:
+    with quiet():
+        return _build_liquid_model(sp)
+
+
+def _build_liquid_model(sp: Species) -> LiquidModel:
     if not sp.CAS:
         raise MissingConstantError(
             f"species {sp.name!r} has no CAS number, so thermo has no liquid models for it; "
@@ -472,6 +483,11 @@ def parachor(liquid: str | Species) -> float:
 
 @functools.lru_cache(maxsize=256)
 def _parachor(sp: Species) -> float:
+    with quiet():
+        return _compute_parachor(sp)
+
+
+def _compute_parachor(sp: Species) -> float:
     if sp.parachor is not None:
         return sp.parachor
     if not sp.CAS:
@@ -494,10 +510,11 @@ def _parachor(sp: Species) -> float:
             f"thermo has no surface tension or liquid density for {sp.name!r}, so its parachor "
             "is unknown; supply Species(..., parachor=...) [N^0.25 m^2.75/mol]"
         )
+    lo1, hi1 = st.T_limits[st.method]
+    lo2, hi2 = vl.T_limits[vl.method]
     candidates = [_PARACHOR_T] + ([sp.Tb] if sp.Tb is not None else [])
+    candidates.append(0.5 * (max(lo1, lo2) + min(hi1, hi2)))
     for T in candidates:
-        lo1, hi1 = st.T_limits[st.method]
-        lo2, hi2 = vl.T_limits[vl.method]
         if (sp.Tm is None or T > sp.Tm) and max(lo1, lo2) <= T <= min(hi1, hi2):
             sigma = float(st.calculate(T, st.method))
             rho = sp.molar_mass / float(vl.calculate(T, vl.method))

@@ -22,6 +22,7 @@ from dataclasses import dataclass, field
 from typing import Any
 
 from . import data
+from ._databases import quiet
 from ._smiles import Molecule, parse_smiles
 from .errors import InputValueError, MissingConstantError, UnknownSpeciesError
 
@@ -344,6 +345,11 @@ def species(identifier: str | Species) -> Species:
 def _resolve(key: str) -> Species:
     if key.lower() in _AIR_NAMES:
         return _air()
+    with quiet():
+        return _lookup(key)
+
+
+def _lookup(key: str) -> Species:
     from chemicals.identifiers import search_chemical
 
     try:
@@ -357,6 +363,7 @@ def _resolve(key: str) -> Species:
     return _from_chemicals(meta)
 
 
+@functools.lru_cache(maxsize=1)
 def _air() -> Species:
     a = data.AIR
     src = "masstransfer.data.AIR (see its sources)"

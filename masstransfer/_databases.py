@@ -1,0 +1,29 @@
+"""Access to the ``chemicals``/``thermo`` databases without third-party noise.
+
+The databases are read with pandas on first use; some pandas releases warn
+about options those readers pass.  Those warnings concern the libraries, not
+the user's inputs, so they are silenced while the databases are read.
+"""
+
+from __future__ import annotations
+
+import contextlib
+import gc
+import warnings
+from collections.abc import Iterator
+
+__all__ = ["quiet"]
+
+
+@contextlib.contextmanager
+def quiet() -> Iterator[None]:
+    """Silence deprecation, future and resource warnings raised while reading databases."""
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore", DeprecationWarning)
+        warnings.simplefilter("ignore", FutureWarning)
+        warnings.simplefilter("ignore", PendingDeprecationWarning)
+        warnings.simplefilter("ignore", ResourceWarning)
+        try:
+            yield
+        finally:
+            gc.collect()  # finalise any file a database reader left open, while silenced
