@@ -32,6 +32,7 @@ from .diffusivity import (
 )
 from .errors import (
     EnvelopeWarning,
+    InputShapeError,
     InputValueError,
     MassTransferError,
     MassTransferWarning,
@@ -47,6 +48,7 @@ __version__ = "0.1.0"
 
 __all__ = [
     "EnvelopeWarning",
+    "InputShapeError",
     "InputValueError",
     "MassTransferError",
     "MassTransferWarning",

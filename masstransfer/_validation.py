@@ -119,7 +119,7 @@ def check_shapes(**arrays: FloatOrArray) -> None:
 def finish(value: FloatOrArray | FloatArray) -> FloatOrArray:
     """Return a Python float for 0-d results, else the float64 array."""
     if isinstance(value, float):
-        return value
+        return float(value)  # also turns numpy float64 scalars into Python floats
     arr = np.asarray(value, dtype=float)
     if arr.ndim == 0:
         return float(arr)

@@ -49,7 +49,7 @@ def knudsen_diffusivity(T: ArrayLike, pore_diameter: ArrayLike, M: float) -> Flo
     Oxygen in 10 nm pores at 300 K:
 
     >>> round(knudsen_diffusivity(300.0, 10e-9, 0.032) * 1e6, 3)
-    1.488
+    1.485
     """
     Tv = check_positive("T", T)
     d = check_positive("pore_diameter", pore_diameter)

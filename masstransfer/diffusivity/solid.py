@@ -47,7 +47,7 @@ def arrhenius_diffusivity(T: ArrayLike, D0: ArrayLike, Ea: ArrayLike) -> FloatOr
     Carbon in gamma-iron, D0 = 2.3e-5 m^2/s, Ea = 148 kJ/mol, at 1173 K:
 
     >>> round(arrhenius_diffusivity(1173.0, 2.3e-5, 148e3) * 1e11, 3)
-    0.562
+    0.591
     """
     Tv = check_positive("T", T)
     D0v = check_positive("D0", D0)

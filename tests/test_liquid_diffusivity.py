@@ -1,0 +1,132 @@
+from __future__ import annotations
+
+import numpy as np
+import pytest
+from hypothesis import given
+from hypothesis import strategies as st
+from validation_data import LIQUID_SYSTEMS
+
+import masstransfer as mt
+
+
+def test_wilke_chang_ethylbenzene_in_water():
+    # Poling, Prausnitz & O'Connell 5th ed., ch. 11: ethylbenzene in water at 293 K,
+    # measured 0.81e-5 cm^2/s (from memory)
+    D = mt.liquid_diffusivity("ethylbenzene", "water", 293.0)
+    assert D == pytest.approx(0.81e-9, rel=0.10)
+
+
+def test_wilke_chang_by_hand():
+    # Wilke & Chang (1955) equation evaluated by hand: 7.4e-8*(2.6*18.015)**0.5*298/(0.89*74**0.6)
+    expected_cgs = 7.4e-8 * (2.6 * 18.015) ** 0.5 * 298.0 / (0.89 * 74.0**0.6)
+    assert mt.wilke_chang(298.0, 0.89e-3, 0.018015, 74e-6, 2.6) == pytest.approx(expected_cgs * 1e-4)
+
+
+def test_hayduk_minhas_aqueous_by_hand():
+    # Hayduk & Minhas (1982) aqueous form, by hand for V_A = 96 cm^3/mol, 0.89 cP, 298 K
+    eps = 9.58 / 96.0 - 1.12
+    expected_cgs = 1.25e-8 * (96.0**-0.19 - 0.292) * 298.0**1.52 * 0.89**eps
+    assert mt.hayduk_minhas_aqueous(298.0, 0.89e-3, 96e-6) == pytest.approx(expected_cgs * 1e-4)
+
+
+def test_tyn_calus_by_hand():
+    # Tyn & Calus (1975), by hand: V_A 74, V_B 96 cm^3/mol, parachors 161.6 and 206.0, 0.6 cP
+    expected_cgs = 8.93e-8 * (74.0 / 96.0**2) ** (1 / 6) * (206.0 / 161.6) ** 0.6 * 298.0 / 0.6
+    got = mt.tyn_calus(298.0, 0.6e-3, 74e-6, 96e-6, 161.6 / 5.623413e6, 206.0 / 5.623413e6)
+    assert got == pytest.approx(expected_cgs * 1e-4, rel=1e-6)
+
+
+def test_stokes_einstein_for_a_particle():
+    # k_B T / (6 pi mu r), by hand, for a 50 nm radius sphere in water at 298.15 K
+    expected = 1.380649e-23 * 298.15 / (6 * np.pi * 0.89e-3 * 50e-9)
+    assert mt.stokes_einstein(298.15, 0.89e-3, 50e-9) == pytest.approx(expected)
+    assert mt.stokes_einstein(298.15, 0.89e-3, 50e-9, boundary="slip") == pytest.approx(expected * 1.5)
+
+
+_IDS = [f"{a}-in-{b}" for a, b, *_ in LIQUID_SYSTEMS]
+#: One-row limits are about three times each method's published average error.
+_ROW_LIMIT = {"wilke-chang": 0.55, "hayduk-minhas": 0.60, "tyn-calus": 0.45}
+_AAD_LIMIT = {"wilke-chang": 0.25, "hayduk-minhas": 0.18, "tyn-calus": 0.15}
+_METHODS = list(_ROW_LIMIT)
+
+
+@pytest.mark.parametrize("method", _METHODS)
+@pytest.mark.parametrize(("solute", "solvent", "T", "measured", "source"), LIQUID_SYSTEMS, ids=_IDS)
+def test_against_measured_systems(method, solute, solvent, T, measured, source):
+    D = mt.liquid_diffusivity(solute, solvent, T, method=method)
+    assert D == pytest.approx(measured, rel=_ROW_LIMIT[method]), source
+
+
+@pytest.mark.parametrize("method", _METHODS)
+def test_average_absolute_deviation(method):
+    dev = [abs(mt.liquid_diffusivity(a, b, T, method=method) / D - 1) for a, b, T, D, _ in LIQUID_SYSTEMS]
+    assert len(dev) >= 10
+    assert np.mean(dev) < _AAD_LIMIT[method]
+
+
+def test_special_cases_are_applied_and_reported():
+    inp = mt.diffusivity.liquid_diffusivity_inputs("water", "ethanol", "wilke-chang")
+    assert inp.V_solute == pytest.approx(37.4e-6)  # Poling et al. 5th ed. Section 11-9 (from memory)
+    tc = mt.diffusivity.liquid_diffusivity_inputs("water", "ethanol", "tyn-calus")
+    base = mt.species("water")
+    assert tc.V_solute == pytest.approx(2 * base.Vb)
+    acid = mt.diffusivity.liquid_diffusivity_inputs("acetic acid", "benzene", "tyn-calus")
+    assert "organic acid" in acid.notes[0]
+    acid_in_water = mt.diffusivity.liquid_diffusivity_inputs("acetic acid", "water", "tyn-calus")
+    assert acid_in_water.notes == ()
+    assert mt.diffusivity.liquid_diffusivity_inputs("benzene", "water", "hayduk-minhas").form == "aqueous"
+    assert mt.diffusivity.liquid_diffusivity_inputs("benzene", "n-hexane", "hayduk-minhas").form == "n-paraffin"
+    assert mt.diffusivity.liquid_diffusivity_inputs("benzene", "toluene", "hayduk-minhas").form == "general"
+
+
+def test_alcohol_solvent_rule_raises_the_estimate():
+    # non-polar solute in a monohydroxy alcohol: V_B and P_B scaled by 8*eta_B (Poling et al. 11-9)
+    with_rule = mt.liquid_diffusivity("toluene", "ethanol", 298.15, method="tyn-calus")
+    inp = mt.diffusivity.liquid_diffusivity_inputs("toluene", "ethanol", "tyn-calus")
+    mu = mt.liquid_model("ethanol").viscosity(298.15)
+    without = mt.tyn_calus(298.15, mu, inp.V_solute, inp.V_solvent, inp.parachor_solute,
+                           inp.parachor_solvent)
+    f = 8 * mu * 1000
+    assert with_rule == pytest.approx(without * f ** (-1 / 3) * f**0.6, rel=1e-10)
+
+
+def test_caller_viscosity_overrides_property_layer():
+    a = mt.liquid_diffusivity("benzene", "water", 298.15, mu_solvent=1.0e-3)
+    b = mt.liquid_diffusivity("benzene", "water", 298.15, mu_solvent=2.0e-3)
+    assert a == pytest.approx(2 * b)
+
+
+def test_viscous_solvent_warns():
+    with pytest.warns(mt.EnvelopeWarning, match="viscous"):
+        mt.liquid_diffusivity("benzene", "water", 298.15, mu_solvent=0.05)
+
+
+_liquid_cases = st.sampled_from(
+    [("benzene", "water"), ("ethanol", "water"), ("toluene", "n-hexane"), ("acetone", "benzene"),
+     ("oxygen", "water")]
+)
+
+
+@given(case=_liquid_cases, method=st.sampled_from(_METHODS), T=st.floats(280.0, 320.0),
+       dT=st.floats(1.0, 20.0))
+def test_liquid_diffusivity_rises_with_temperature(case, method, T, dT):
+    assert mt.liquid_diffusivity(*case, T + dT, method) > mt.liquid_diffusivity(*case, T, method)
+
+
+@given(case=_liquid_cases, method=st.sampled_from(_METHODS),
+       T=st.lists(st.floats(280.0, 320.0), min_size=1, max_size=6))
+def test_liquid_scalar_and_array_agree(case, method, T):
+    arr = mt.liquid_diffusivity(*case, np.array(T), method)
+    for t, d in zip(T, arr, strict=True):
+        assert mt.liquid_diffusivity(*case, t, method) == pytest.approx(d, rel=1e-12)
+
+
+def test_hayduk_minhas_general_and_paraffin_by_hand():
+    # Hayduk & Minhas (1982) non-aqueous and n-paraffin forms (Poling et al. 5th ed. 11-9), by hand
+    p_a, p_b = 161.6, 206.0
+    general = 1.55e-8 * 298.0**1.29 * p_b**0.5 * p_a**-0.42 / (0.6**0.92 * 96.0**0.23)
+    got = mt.hayduk_minhas(298.0, 0.6e-3, 96e-6, p_a / 5.623413e6, p_b / 5.623413e6)
+    assert got == pytest.approx(general * 1e-4, rel=1e-6)
+    eps = 10.2 / 96.0 - 0.791
+    paraffin = 13.3e-8 * 298.0**1.47 * 0.3**eps / 96.0**0.71
+    assert mt.diffusivity.hayduk_minhas_paraffin(298.0, 0.3e-3, 96e-6) == pytest.approx(paraffin * 1e-4)
