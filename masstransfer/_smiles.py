@@ -63,6 +63,7 @@ def parse_smiles(smiles: str) -> Molecule:
     ------
     ValueError
         If the string holds something this reader does not understand.
+
     """
     elements: list[str] = []
     aromatic: list[bool] = []

@@ -30,15 +30,12 @@ def as_float(name: str, value: Any) -> FloatOrArray:
     if type(value) is float or type(value) is int:
         return float(value)
     if isinstance(value, bool | str | bytes) or value is None:
-        raise InputValueError(
-            f"{name}={value!r} is not a number; pass a float or an array of floats"
-        )
+        raise InputValueError(f"{name}={value!r} is not a number; pass a float or an array of floats")
     try:
         arr = np.asarray(value, dtype=float)
     except (TypeError, ValueError) as exc:
         raise InputValueError(
-            f"{name}={value!r} cannot be read as numbers ({exc}); "
-            "pass a float or an array of floats"
+            f"{name}={value!r} cannot be read as numbers ({exc}); pass a float or an array of floats"
         ) from None
     if arr.ndim == 0:
         return float(arr)
@@ -111,8 +108,7 @@ def check_shapes(**arrays: FloatOrArray) -> None:
     except ValueError:
         listed = ", ".join(f"{k} {s}" for k, s in shapes.items())
         raise InputShapeError(
-            f"array arguments do not broadcast together: {listed}; "
-            "pass arrays of one shape, or scalars"
+            f"array arguments do not broadcast together: {listed}; pass arrays of one shape, or scalars"
         ) from None
 
 

@@ -33,15 +33,30 @@ def _parser() -> argparse.ArgumentParser:
     d.add_argument("solute", help="diffusing species: name, CAS number or formula")
     d.add_argument("medium", help="carrier gas (e.g. air) or solvent (e.g. water)")
     d.add_argument(
-        "-T", "--temperature", type=float, nargs="+", required=True, metavar="K",
+        "-T",
+        "--temperature",
+        type=float,
+        nargs="+",
+        required=True,
+        metavar="K",
         help="temperature(s) in K",
     )
-    d.add_argument("-P", "--pressure", type=float, default=101325.0, metavar="PA",
-                   help="pressure in Pa (gas phase; default 101325)")
-    d.add_argument("--phase", choices=("gas", "liquid"), default="gas",
-                   help="phase of the medium (default gas)")
-    d.add_argument("--method", default=None,
-                   help="estimation method (default: fuller for gases, wilke-chang for liquids)")
+    d.add_argument(
+        "-P",
+        "--pressure",
+        type=float,
+        default=101325.0,
+        metavar="PA",
+        help="pressure in Pa (gas phase; default 101325)",
+    )
+    d.add_argument(
+        "--phase", choices=("gas", "liquid"), default="gas", help="phase of the medium (default gas)"
+    )
+    d.add_argument(
+        "--method",
+        default=None,
+        help="estimation method (default: fuller for gases, wilke-chang for liquids)",
+    )
     d.add_argument("--json", action="store_true", help="print JSON instead of a table")
     return p
 
@@ -97,6 +112,7 @@ def main(argv: Sequence[str] | None = None) -> int:
     >>> main(["diffusivity", "water", "air", "-T", "298.15", "--json"]) == 0  # doctest: +ELLIPSIS
     {...
     True
+
     """
     args = _parser().parse_args(argv)
     try:

@@ -37,6 +37,7 @@ def demo_report() -> str:
     --------
     >>> "Fuller" in demo_report()
     True
+
     """
     T_c = np.array([40.0, 70.0, 100.0, 130.0, 160.0, 180.0])
     T = T_c + 273.15

@@ -73,6 +73,7 @@ class PropertyCurve:
         Highest temperature covered [K].
     coefficients : numpy.ndarray
         Chebyshev coefficients of the (log of the) property on [T_min, T_max].
+
     """
 
     quantity: str
@@ -95,7 +96,7 @@ class PropertyCurve:
             bad = not (self.T_min <= T <= self.T_max)
             shown = T
         else:
-            mask = (T < self.T_min) | (T > self.T_max)
+            mask = (self.T_min > T) | (self.T_max < T)
             bad = bool(mask.any())
             shown = float(np.asarray(T)[mask].ravel()[0]) if bad else 0.0
         if bad:
@@ -147,9 +148,7 @@ def _thermo_curve(
 ) -> PropertyCurve:
     method = prop.method
     if method is None:
-        raise MissingConstantError(
-            f"thermo has no model for the {quantity}; supply the property yourself"
-        )
+        raise MissingConstantError(f"thermo has no model for the {quantity}; supply the property yourself")
     lo, hi = prop.T_limits[method]
     lo, hi = max(lo, T_low), min(hi, T_high)
 
@@ -294,6 +293,7 @@ def gas_model(gas: str | Species) -> GasModel:
     >>> air = gas_model("air")
     >>> round(air.viscosity(300.0) * 1e6, 1)
     18.5
+
     """
     return _gas_model(species(gas))
 
@@ -328,6 +328,7 @@ def liquid_model(liquid: str | Species) -> LiquidModel:
     >>> water = liquid_model("water")
     >>> round(water.viscosity(298.15) * 1e3, 3)
     0.89
+
     """
     return _liquid_model(species(liquid))
 
@@ -353,8 +354,14 @@ def _build_gas_model(sp: Species) -> GasModel:
     mu = ViscosityGas(CASRN=kw["CASRN"], MW=kw["MW"], Tc=sp.Tc, Pc=sp.Pc, dipole=dip)
     cp = HeatCapacityGas(CASRN=kw["CASRN"], MW=kw["MW"])
     k = ThermalConductivityGas(
-        CASRN=kw["CASRN"], MW=kw["MW"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc,
-        omega=sp.omega, dipole=dip,
+        CASRN=kw["CASRN"],
+        MW=kw["MW"],
+        Tb=sp.Tb,
+        Tc=sp.Tc,
+        Pc=sp.Pc,
+        Vc=sp.Vc,
+        omega=sp.omega,
+        dipole=dip,
     )
     name = f"gaseous {sp.name}"
     return GasModel(
@@ -418,8 +425,14 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
     T_high = sp.Tc if sp.Tc is not None else math.inf
     dip = None if sp.dipole is None else sp.dipole / DEBYE
     vl = VolumeLiquid(
-        CASRN=kw["CASRN"], MW=kw["MW"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc,
-        omega=sp.omega, dipole=dip,
+        CASRN=kw["CASRN"],
+        MW=kw["MW"],
+        Tb=sp.Tb,
+        Tc=sp.Tc,
+        Pc=sp.Pc,
+        Vc=sp.Vc,
+        omega=sp.omega,
+        dipole=dip,
     )
     mu = ViscosityLiquid(
         CASRN=kw["CASRN"], MW=kw["MW"], Tm=sp.Tm, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc, omega=sp.omega
@@ -477,6 +490,7 @@ def parachor(liquid: str | Species) -> float:
     --------
     >>> round(parachor("water") * 5.623413e6, 1)
     52.6
+
     """
     return _parachor(species(liquid))
 
@@ -502,9 +516,7 @@ def _compute_parachor(sp: Species) -> float:
     st = SurfaceTension(
         CASRN=kw["CASRN"], MW=kw["MW"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc, omega=sp.omega
     )
-    vl = VolumeLiquid(
-        CASRN=kw["CASRN"], MW=kw["MW"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc, omega=sp.omega
-    )
+    vl = VolumeLiquid(CASRN=kw["CASRN"], MW=kw["MW"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc, omega=sp.omega)
     if st.method is None or vl.method is None:
         raise MissingConstantError(
             f"thermo has no surface tension or liquid density for {sp.name!r}, so its parachor "
@@ -515,7 +527,7 @@ def _compute_parachor(sp: Species) -> float:
     candidates = [_PARACHOR_T] + ([sp.Tb] if sp.Tb is not None else [])
     candidates.append(0.5 * (max(lo1, lo2) + min(hi1, hi2)))
     for T in candidates:
-        if (sp.Tm is None or T > sp.Tm) and max(lo1, lo2) <= T <= min(hi1, hi2):
+        if (sp.Tm is None or sp.Tm < T) and max(lo1, lo2) <= T <= min(hi1, hi2):
             sigma = float(st.calculate(T, st.method))
             rho = sp.molar_mass / float(vl.calculate(T, vl.method))
             value = float(Parachor(sp.molar_mass * 1000.0, rho, 0.0, sigma))

@@ -103,6 +103,7 @@ class Species:
     >>> s = Species(name="solvent X (invented)", molar_mass=0.1, Tb=400.0, Vb=1.2e-4)
     >>> s.molar_mass
     0.1
+
     """
 
     name: str
@@ -155,7 +156,7 @@ class Species:
 
             try:
                 counts = simple_formula_parser(self.formula)
-            except Exception:  # noqa: BLE001 - any parse failure means "no atom counts"
+            except Exception:
                 counts = {}
             object.__setattr__(self, "atoms", dict(counts))
         object.__setattr__(self, "atoms", dict(self.atoms))
@@ -230,6 +231,7 @@ def le_bas_volume(atoms: Mapping[str, int], smiles: str | None = None) -> float:
     --------
     >>> round(le_bas_volume({"C": 7, "H": 8}, "CC1=CC=CC=C1") * 1e6, 1)
     118.2
+
     """
     table = data.LE_BAS_ATOMIC_VOLUMES
     mol = _molecule(smiles) if smiles else None
@@ -249,8 +251,7 @@ def le_bas_volume(atoms: Mapping[str, int], smiles: str | None = None) -> float:
             continue
         if el not in table:
             raise MissingConstantError(
-                f"the Le Bas method has no volume for element {el!r}; "
-                "supply Vb to the Species by hand"
+                f"the Le Bas method has no volume for element {el!r}; supply Vb to the Species by hand"
             )
         total += n_left * table[el]
     return total * 1e-6
@@ -330,6 +331,7 @@ def species(identifier: str | Species) -> Species:
     >>> tol = species("toluene")
     >>> tol.CAS, round(tol.molar_mass * 1000, 2)
     ('108-88-3', 92.14)
+
     """
     if isinstance(identifier, Species):
         return identifier
@@ -354,7 +356,7 @@ def _lookup(key: str) -> Species:
 
     try:
         meta = search_chemical(key)
-    except Exception:  # noqa: BLE001 - chemicals raises ValueError or others for unknown ids
+    except Exception:
         raise UnknownSpeciesError(
             f"species {key!r} is not known to the chemicals database; check the spelling or "
             "pass a CAS number, or build it by hand: masstransfer.Species(name=..., "
@@ -381,10 +383,7 @@ def _air() -> Species:
         dipole=float(a["dipole"]),  # type: ignore[arg-type]
         Vb=float(a["Vb"]),  # type: ignore[arg-type]
         fuller_volume=data.FULLER_SPECIAL_VOLUMES["air"],
-        sources={
-            k: src
-            for k in ("molar_mass", "Tb", "Tc", "Pc", "omega", "sigma", "epsilon_k", "Vb")
-        },
+        sources=dict.fromkeys(("molar_mass", "Tb", "Tc", "Pc", "omega", "sigma", "epsilon_k", "Vb"), src),
     )
 
 
@@ -409,7 +408,7 @@ def _from_chemicals(meta: Any) -> Species:
     def get(fn: Any, name: str) -> float | None:
         try:
             v = _opt(fn(cas))
-        except Exception:  # noqa: BLE001 - a missing value is reported as absent
+        except Exception:
             v = None
         if v is not None:
             src[name] = "chemicals"
@@ -423,14 +422,14 @@ def _from_chemicals(meta: Any) -> Species:
     try:
         omega_raw = chemicals.omega(cas)
         omega = None if omega_raw is None else float(omega_raw)
-    except Exception:  # noqa: BLE001
+    except Exception:
         omega = None
     if omega is not None:
         src["omega"] = "chemicals"
     try:
         mu_d = chemicals.dipole_moment(cas)
         dipole = None if mu_d is None else float(mu_d) * DEBYE
-    except Exception:  # noqa: BLE001
+    except Exception:
         dipole = None
     if dipole is not None:
         src["dipole"] = "chemicals"
@@ -447,7 +446,7 @@ def _from_chemicals(meta: Any) -> Species:
         from chemicals.elements import simple_formula_parser
 
         atoms = dict(simple_formula_parser(formula)) if formula else {}
-    except Exception:  # noqa: BLE001
+    except Exception:
         atoms = {}
 
     Vb = _vb_from_thermo(cas, mw, Tb, Tc, Pc, Vc, omega, dipole)
@@ -508,7 +507,7 @@ def _lennard_jones(
     try:
         eps = _opt(chemicals.Stockmayer(CASRN=cas, method=_LJ_TABLE))
         sig = _opt(chemicals.molecular_diameter(CASRN=cas, method=_LJ_TABLE))
-    except Exception:  # noqa: BLE001 - absent from the table
+    except Exception:
         eps = sig = None
     if eps is not None and sig is not None:
         src["epsilon_k"] = src["sigma"] = "chemicals: " + _LJ_TABLE + " (Svehla 1962)"
@@ -517,10 +516,8 @@ def _lennard_jones(
         return None, None
     try:
         eps = _opt(chemicals.Stockmayer(Tc=Tc, omega=omega, method=_LJ_EPS_CSP))
-        sig = _opt(
-            chemicals.molecular_diameter(Tc=Tc, Pc=Pc, omega=omega, method=_LJ_SIG_CSP)
-        )
-    except Exception:  # noqa: BLE001
+        sig = _opt(chemicals.molecular_diameter(Tc=Tc, Pc=Pc, omega=omega, method=_LJ_SIG_CSP))
+    except Exception:
         return None, None
     if eps is None or sig is None:
         return None, None
@@ -559,5 +556,5 @@ def _vb_from_thermo(
         if not (low <= Tb <= high):
             return None
         return _opt(vl.T_dependent_property(Tb))
-    except Exception:  # noqa: BLE001 - any failure falls back to Le Bas
+    except Exception:
         return None

@@ -12,7 +12,8 @@ from masstransfer.cli import main
 def test_demo_runs_and_has_units(capsys):
     assert main(["demo"]) == 0
     out = capsys.readouterr().out
-    assert "mm^2/s" in out and "[K]" in out
+    assert "mm^2/s" in out
+    assert "[K]" in out
     assert "invented" in out
     assert "Cautions" in out
 
@@ -38,6 +39,7 @@ def test_bad_input_exits_2_with_message(capsys):
 
 
 def test_python_dash_m():
-    out = subprocess.run([sys.executable, "-m", "masstransfer", "demo"], capture_output=True,
-                         text=True, check=True)
+    out = subprocess.run(
+        [sys.executable, "-m", "masstransfer", "demo"], capture_output=True, text=True, check=True
+    )
     assert "Fuller" in out.stdout

@@ -17,7 +17,8 @@ def test_bad_state_names_argument_value_and_fix(arg, bad):
     msg = str(info.value)
     assert msg.startswith(f"{arg}=")
     assert "pass" in msg
-    assert isinstance(info.value, ValueError) and isinstance(info.value, mt.MassTransferError)
+    assert isinstance(info.value, ValueError)
+    assert isinstance(info.value, mt.MassTransferError)
 
 
 def test_bad_entry_in_array_is_reported():
@@ -41,7 +42,7 @@ def test_unknown_species_and_method():
 
 def test_missing_constant_names_method_and_fix():
     lonely = mt.Species(name="oligomer (invented)", molar_mass=0.3)
-    with pytest.raises(mt.MissingConstantError, match="sigma.*Chapman-Enskog.*replace"):
+    with pytest.raises(mt.MissingConstantError, match=r"sigma.*Chapman-Enskog.*replace"):
         mt.gas_diffusivity(lonely, "air", 300.0, method="chapman-enskog")
     with pytest.raises(mt.MissingConstantError, match="fuller_volume"):
         mt.gas_diffusivity(lonely, "air", 300.0)
@@ -65,7 +66,8 @@ def test_molar_mass_in_grams_is_caught():
 
 def test_empty_array_gives_empty_result():
     out = mt.gas_diffusivity("water", "air", np.array([]))
-    assert isinstance(out, np.ndarray) and out.shape == (0,)
+    assert isinstance(out, np.ndarray)
+    assert out.shape == (0,)
 
 
 def test_hand_built_species_works_with_fuller():

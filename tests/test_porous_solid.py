@@ -44,7 +44,7 @@ def test_arrhenius_fit_round_trip():
     T = np.array([900.0, 1000.0, 1100.0, 1200.0])
     D = mt.arrhenius_diffusivity(T, 2.3e-5, 148e3)
     D0, Ea = mt.diffusivity.arrhenius_parameters(T, D)
-    assert D0 == pytest.approx(2.3e-5, rel=1e-8)
+    assert pytest.approx(2.3e-5, rel=1e-8) == D0
     assert Ea == pytest.approx(148e3, rel=1e-8)
 
 

@@ -9,7 +9,8 @@ from __future__ import annotations
 ATM = 101325.0
 
 GAS_PAIRS: list[tuple[str, str, float, float, float, str]] = [
-    # Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 6th ed., Table A.8 (298 K, 1 atm; from memory)
+    # Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 6th ed., Table A.8
+    # (298 K, 1 atm; from memory)
     ("water", "air", 298.0, ATM, 0.26e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
     ("carbon dioxide", "air", 298.0, ATM, 0.16e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
     ("oxygen", "air", 298.0, ATM, 0.21e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
@@ -23,7 +24,8 @@ GAS_PAIRS: list[tuple[str, str, float, float, float, str]] = [
     ("carbon dioxide", "nitrogen", 298.0, ATM, 0.16e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
     ("carbon dioxide", "oxygen", 298.0, ATM, 0.14e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
     ("oxygen", "nitrogen", 298.0, ATM, 0.18e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    # Coulson & Richardson's Chemical Engineering Vol. 6, ch. 8 (measured value quoted beside the Fuller example)
+    # Coulson & Richardson's Chemical Engineering Vol. 6, ch. 8 (the measured value quoted beside
+    # its Fuller example)
     ("methanol", "air", 298.0, ATM, 15.9e-6, "Coulson & Richardson Vol. 6, ch. 8"),
     # Cussler, Diffusion, 3rd ed., Example 5.1-2
     ("hydrogen", "nitrogen", 294.0, 2 * ATM, 0.38e-4, "Cussler, Diffusion, 3rd ed., Example 5.1-2"),

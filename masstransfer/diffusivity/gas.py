@@ -144,6 +144,7 @@ def fuller(
 
     >>> round(fuller(298.0, 101325.0, 0.03204, 0.02896, 31.25, 19.7) * 1e6, 2)
     15.97
+
     """
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
@@ -163,7 +164,7 @@ def _fuller_constant(Ma: FloatOrArray, Mb: FloatOrArray, va: FloatOrArray, vb: F
     """Everything in Fuller's equation but T^1.75/P, in SI (m^2/s * Pa / K^1.75)."""
     M_ab = 2.0 / (1.0 / (Ma * 1000.0) + 1.0 / (Mb * 1000.0))
     # 0.00143 cm^2/s bar -> 1e-4 m^2/cm^2 * 1e5 Pa/bar
-    return 0.00143 * 1e-4 * _BAR / (M_ab**0.5 * (va ** (1.0 / 3.0) + vb ** (1.0 / 3.0)) ** 2)
+    return finish(0.00143 * 1e-4 * _BAR / (M_ab**0.5 * (va ** (1.0 / 3.0) + vb ** (1.0 / 3.0)) ** 2))
 
 
 def fuller_volume(sp: str | Species) -> float:
@@ -206,6 +207,7 @@ def fuller_volume(sp: str | Species) -> float:
     --------
     >>> round(fuller_volume("toluene"), 2)
     111.48
+
     """
     s = species(sp)
     if s.fuller_volume is not None:
@@ -270,6 +272,7 @@ def neufeld_collision_integral(T_star: ArrayLike) -> FloatOrArray:
     --------
     >>> round(neufeld_collision_integral(1.0), 4)
     1.4405
+
     """
     Ts = check_positive("T_star", T_star)
     lo, hi = _TSTAR_RANGE
@@ -342,6 +345,7 @@ def chapman_enskog(
     --------
     >>> round(chapman_enskog(298.15, 101325.0, 0.028, 0.032, 3.6e-10, 90.0) * 1e6, 2)
     20.61
+
     """
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
@@ -418,6 +422,7 @@ def wilke_lee(
     --------
     >>> round(wilke_lee(298.15, 101325.0, 0.028, 0.032, 3.6e-10, 90.0) * 1e6, 2)
     22.09
+
     """
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
@@ -514,6 +519,7 @@ def brokaw(
     ...            1.9 * 3.33564e-30, 1.6 * 3.33564e-30)
     >>> round(D * 1e4, 3)
     0.084
+
     """
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
@@ -584,6 +590,7 @@ def blanc(D_binary: ArrayLike, mole_fractions: ArrayLike) -> FloatOrArray:
     --------
     >>> round(blanc([2.0e-5, 1.0e-5], [0.5, 0.5]) * 1e5, 4)
     1.3333
+
     """
     D = np.asarray(check_positive("D_binary", D_binary), dtype=float)
     y = np.asarray(check_positive("mole_fractions", mole_fractions), dtype=float)
@@ -643,6 +650,7 @@ def rescale_gas_diffusivity(
     --------
     >>> round(rescale_gas_diffusivity(2.6e-5, 298.15, 101325.0, 353.15) * 1e5, 3)
     3.497
+
     """
     D0 = check_positive("D_ref", D_ref)
     T0 = check_positive("T_ref", T_ref)
@@ -667,9 +675,11 @@ def _lj_pair(a: Species, b: Species, method: str) -> tuple[float, float]:
 
 def _wilke_lee_params(s: Species) -> tuple[float, float]:
     """Tabulated LJ values, else Wilke & Lee's estimates from Tb and Vb."""
-    tabulated = "tabulated" in s.sources.get("sigma", "") or "Svehla" in s.sources.get(
-        "sigma", ""
-    ) or s.sources.get("sigma", "").startswith(("masstransfer.data", "user"))
+    tabulated = (
+        "tabulated" in s.sources.get("sigma", "")
+        or "Svehla" in s.sources.get("sigma", "")
+        or s.sources.get("sigma", "").startswith(("masstransfer.data", "user"))
+    )
     if s.sigma is not None and s.epsilon_k is not None and tabulated:
         return s.sigma, s.epsilon_k
     if s.Vb is not None and s.Tb is not None:
@@ -773,6 +783,7 @@ def gas_diffusivity(
     >>> round(gas_diffusivity("hydrogen", "nitrogen", 294.0, 2 * 101325.0,
     ...                       method="chapman-enskog") * 1e4, 3)
     0.361
+
     """
     m = normalise_method(method, GAS_METHODS)
     prepared = _prepare(m, solute, carrier)
@@ -831,6 +842,7 @@ def gas_diffusivity_in_mixture(
     >>> D = gas_diffusivity_in_mixture("water", {"nitrogen": 0.79, "oxygen": 0.21}, 300.0)
     >>> round(D * 1e6, 1)
     26.2
+
     """
     if not isinstance(carrier, Mapping) or not carrier:
         raise InputValueError(

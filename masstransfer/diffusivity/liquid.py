@@ -68,9 +68,7 @@ def _cp(mu: FloatOrArray) -> FloatOrArray:
 
 
 def _warn_viscous(mu: FloatOrArray, method: str) -> None:
-    high = mu > VISCOUS_SOLVENT_LIMIT if isinstance(mu, float) else bool(
-        np.any(mu > VISCOUS_SOLVENT_LIMIT)
-    )
+    high = mu > VISCOUS_SOLVENT_LIMIT if isinstance(mu, float) else bool(np.any(mu > VISCOUS_SOLVENT_LIMIT))
     if high:
         warnings.warn(
             f"{method}: solvent viscosity above {VISCOUS_SOLVENT_LIMIT * 1e3:g} mPa s lies "
@@ -141,6 +139,7 @@ def wilke_chang(
 
     >>> round(wilke_chang(293.0, 1.0e-3, 0.018015, 140e-6, phi=2.6) * 1e9, 3)
     0.765
+
     """
     Tv = check_positive("T", T)
     mu = check_positive("mu_solvent", mu_solvent)
@@ -193,6 +192,7 @@ def hayduk_minhas_aqueous(T: ArrayLike, mu_water: ArrayLike, V_solute: float) ->
     --------
     >>> round(hayduk_minhas_aqueous(293.0, 1.0e-3, 140e-6) * 1e9, 3)
     0.696
+
     """
     Tv = check_positive("T", T)
     mu = check_positive("mu_water", mu_water)
@@ -205,9 +205,7 @@ def hayduk_minhas_aqueous(T: ArrayLike, mu_water: ArrayLike, V_solute: float) ->
     return finish(D_cgs * 1e-4)
 
 
-def hayduk_minhas_paraffin(
-    T: ArrayLike, mu_solvent: ArrayLike, V_solute: float
-) -> FloatOrArray:
+def hayduk_minhas_paraffin(T: ArrayLike, mu_solvent: ArrayLike, V_solute: float) -> FloatOrArray:
     """Infinite-dilution diffusivity in normal paraffins by Hayduk and Minhas.
 
     .. math::
@@ -245,6 +243,7 @@ def hayduk_minhas_paraffin(
     --------
     >>> round(hayduk_minhas_paraffin(298.0, 0.3e-3, 96e-6) * 1e9, 2)
     5.15
+
     """
     Tv = check_positive("T", T)
     mu = check_positive("mu_solvent", mu_solvent)
@@ -309,6 +308,7 @@ def hayduk_minhas(
     >>> round(hayduk_minhas(298.0, 0.6e-3, 96e-6, 161.6 / 5.623413e6,
     ...                     206.0 / 5.623413e6) * 1e9, 2)
     2.29
+
     """
     Tv = check_positive("T", T)
     mu = check_positive("mu_solvent", mu_solvent)
@@ -382,6 +382,7 @@ def tyn_calus(
     >>> round(tyn_calus(298.0, 0.6e-3, 74e-6, 96e-6, 161.6 / 5.623413e6,
     ...                 206.0 / 5.623413e6) * 1e9, 2)
     2.3
+
     """
     Tv = check_positive("T", T)
     mu = check_positive("mu_solvent", mu_solvent)
@@ -394,13 +395,7 @@ def tyn_calus(
     _check_volume("V_solute", Va)
     _check_volume("V_solvent", Vb)
     _warn_viscous(mu, "tyn_calus")
-    D_cgs = (
-        8.93e-8
-        * ((Va * 1e6) / (Vb * 1e6) ** 2) ** (1.0 / 6.0)
-        * (Pb / Pa) ** 0.6
-        * Tv
-        / _cp(mu)
-    )
+    D_cgs = 8.93e-8 * ((Va * 1e6) / (Vb * 1e6) ** 2) ** (1.0 / 6.0) * (Pb / Pa) ** 0.6 * Tv / _cp(mu)
     return finish(D_cgs * 1e-4)
 
 
@@ -445,6 +440,7 @@ def stokes_einstein(
 
     >>> round(stokes_einstein(298.15, 0.89e-3, 100e-9) * 1e12, 3)
     2.454
+
     """
     Tv = check_positive("T", T)
     mu = check_positive("mu_solvent", mu_solvent)
@@ -481,6 +477,7 @@ class LiquidDiffusivityInputs:
         Which form of the method was used.
     notes : tuple of str
         The special-case rules that were applied.
+
     """
 
     V_solute: float
@@ -561,6 +558,7 @@ def liquid_diffusivity_inputs(
     --------
     >>> liquid_diffusivity_inputs("water", "ethanol", "tyn-calus").notes[0]
     'water as solute: treated as a dimer (V_A and parachor doubled)'
+
     """
     m = normalise_method(method, LIQUID_METHODS)
     a, b = species(solute), species(solvent)
@@ -666,6 +664,7 @@ def liquid_diffusivity(
     --------
     >>> round(liquid_diffusivity("ethylbenzene", "water", 293.15) * 1e9, 2)
     0.77
+
     """
     m = normalise_method(method, LIQUID_METHODS)
     Tv = check_positive("T", T)
@@ -690,7 +689,8 @@ def liquid_diffusivity(
         return hayduk_minhas_aqueous(Tv, mu, inp.V_solute)
     if inp.form == "n-paraffin":
         return hayduk_minhas_paraffin(Tv, mu, inp.V_solute)
-    assert inp.V_solvent is not None and inp.parachor_solute is not None
+    assert inp.V_solvent is not None
+    assert inp.parachor_solute is not None
     assert inp.parachor_solvent is not None
     Vb: FloatOrArray = inp.V_solvent
     Pb: FloatOrArray = inp.parachor_solvent
@@ -702,4 +702,3 @@ def liquid_diffusivity(
     if inp.form == "general":
         return hayduk_minhas(Tv, mu, Vb, inp.parachor_solute, Pb)
     return tyn_calus(Tv, mu, inp.V_solute, Vb, inp.parachor_solute, Pb)
-

@@ -50,6 +50,7 @@ def knudsen_diffusivity(T: ArrayLike, pore_diameter: ArrayLike, M: float) -> Flo
 
     >>> round(knudsen_diffusivity(300.0, 10e-9, 0.032) * 1e6, 3)
     1.485
+
     """
     Tv = check_positive("T", T)
     d = check_positive("pore_diameter", pore_diameter)
@@ -59,7 +60,7 @@ def knudsen_diffusivity(T: ArrayLike, pore_diameter: ArrayLike, M: float) -> Flo
 
 
 def bosanquet(D_molecular: ArrayLike, D_knudsen: ArrayLike) -> FloatOrArray:
-    """Combined pore diffusivity in the transition regime (Bosanquet).
+    """Combine molecular and Knudsen diffusivities in the transition regime (Bosanquet).
 
     .. math:: \\frac{1}{D} = \\frac{1}{D_{AB}} + \\frac{1}{D_K}
 
@@ -89,6 +90,7 @@ def bosanquet(D_molecular: ArrayLike, D_knudsen: ArrayLike) -> FloatOrArray:
     --------
     >>> round(bosanquet(2.0e-5, 2.0e-6) * 1e6, 4)
     1.8182
+
     """
     Dm = check_positive("D_molecular", D_molecular)
     Dk = check_positive("D_knudsen", D_knudsen)
@@ -133,6 +135,7 @@ def effective_diffusivity(
     --------
     >>> round(effective_diffusivity(1.0e-6, 0.4, 4.0) * 1e7, 3)
     1.0
+
     """
     Dv = check_positive("D", D)
     eps = check_positive("porosity", porosity)

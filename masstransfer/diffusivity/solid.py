@@ -48,6 +48,7 @@ def arrhenius_diffusivity(T: ArrayLike, D0: ArrayLike, Ea: ArrayLike) -> FloatOr
 
     >>> round(arrhenius_diffusivity(1173.0, 2.3e-5, 148e3) * 1e11, 3)
     0.591
+
     """
     Tv = check_positive("T", T)
     D0v = check_positive("D0", D0)
@@ -88,6 +89,7 @@ def arrhenius_parameters(T: ArrayLike, D: ArrayLike) -> tuple[float, float]:
     >>> D0, Ea = arrhenius_parameters([1000.0, 1200.0], [3.9e-12, 8.7e-11])
     >>> round(Ea / 1e3, 1)
     155.0
+
     """
     Tv = np.atleast_1d(np.asarray(check_positive("T", T), dtype=float))
     Dv = np.atleast_1d(np.asarray(check_positive("D", D), dtype=float))
