@@ -326,6 +326,21 @@ def species(identifier: str | Species) -> Species:
     UnknownSpeciesError
         If ``chemicals`` does not know the identifier.
 
+    Notes
+    -----
+    Lennard-Jones parameters are Svehla's (1962) where tabulated, else
+    estimated from critical constants (Tee, Gotoh & Stewart 1966); the
+    molar volume at the boiling point is ``thermo``'s, else Le Bas'.  The
+    origin of each constant is recorded in ``Species.sources``.
+
+    References
+    ----------
+    Bell, C. et al. chemicals: Chemical properties component of the
+    Chemical Engineering Design Library. https://github.com/CalebBell/chemicals
+
+    Svehla, R. A. (1962). Estimated viscosities and thermal conductivities of
+    gases at high temperatures. NASA Technical Report R-132.
+
     Examples
     --------
     >>> tol = species("toluene")

@@ -275,16 +275,67 @@ def neufeld_collision_integral(T_star: ArrayLike) -> FloatOrArray:
 
     """
     Ts = check_positive("T_star", T_star)
+    return _omega_d(Ts)
+
+
+def _omega_d(Ts: FloatOrArray) -> FloatOrArray:
+    """Neufeld collision integral without argument checks (T* already positive)."""
     lo, hi = _TSTAR_RANGE
     out_of = (Ts < lo or Ts > hi) if isinstance(Ts, float) else bool(np.any((Ts < lo) | (Ts > hi)))
     if out_of:
         warnings.warn(
-            f"neufeld_collision_integral: T* outside {lo}-{hi}, the range of the fit",
+            f"Neufeld collision integral: T* = kT/epsilon outside {lo}-{hi}, the range of the fit",
             EnvelopeWarning,
-            stacklevel=2,
+            stacklevel=4,
         )
     A, B, C, D, E, F, G, H = _NEUFELD
+    if isinstance(Ts, float):  # scalar fast path: math.exp avoids numpy's per-call overhead
+        return float(A / Ts**B + C * math.exp(-D * Ts) + E * math.exp(-F * Ts) + G * math.exp(-H * Ts))
     return finish(A / Ts**B + C * np.exp(-D * Ts) + E * np.exp(-F * Ts) + G * np.exp(-H * Ts))
+
+
+def _kinetic(
+    Tv: FloatOrArray,
+    Pv: FloatOrArray,
+    constant: float,
+    M_ab: float,
+    sigma_a: float,
+    eps: float,
+    delta2: float,
+) -> FloatOrArray:
+    """Chapman-Enskog form shared by three methods (inputs already checked).
+
+    ``constant`` is 0.00266 (Chapman-Enskog, Brokaw) or Wilke-Lee's
+    :math:`(3.03 - 0.98/M_{AB}^{1/2})10^{-3}`; ``sigma_a`` in angstrom;
+    ``delta2`` is Brokaw's polar term :math:`\\delta_{AB}^2` (0 otherwise).
+    """
+    Ts = Tv / eps
+    omega = _omega_d(Ts)
+    if delta2:
+        omega = omega + 0.19 * delta2 / Ts
+    return finish(constant * 1e-4 * _BAR * Tv**1.5 / (Pv * M_ab**0.5 * sigma_a**2 * omega))
+
+
+def _m_ab(Ma: float, Mb: float) -> float:
+    """Reduced-mass form used by Poling et al.: 2/(1/M_A + 1/M_B) in g/mol."""
+    return 2.0 / (1.0 / (Ma * 1000.0) + 1.0 / (Mb * 1000.0))
+
+
+def _brokaw_pair(
+    Vb_a: float, Vb_b: float, Tb_a: float, Tb_b: float, dipole_a: float, dipole_b: float
+) -> tuple[float, float, float]:
+    """Brokaw's Stockmayer parameters for a pair: (sigma_AB [angstrom], eps_AB/k [K], delta_AB^2)."""
+
+    def params(Vb: float, Tb: float, mu: float) -> tuple[float, float, float]:
+        V = Vb * 1e6
+        delta = 1.94e3 * (mu / DEBYE) ** 2 / (V * Tb)
+        eps = 1.18 * (1.0 + 1.3 * delta**2) * Tb
+        sig = (1.585 * V / (1.0 + 1.3 * delta**2)) ** (1.0 / 3.0)
+        return delta, eps, sig
+
+    da, ea, sa = params(Vb_a, Tb_a, dipole_a)
+    db, eb, sb = params(Vb_b, Tb_b, dipole_b)
+    return math.sqrt(sa * sb), math.sqrt(ea * eb), da * db
 
 
 def chapman_enskog(
@@ -357,10 +408,7 @@ def chapman_enskog(
     _check_M("M_a", Ma)
     _check_M("M_b", Mb)
     _warn_pressure(Pv, "chapman_enskog")
-    omega = neufeld_collision_integral(Tv / e)
-    M_ab = 2.0 / (1.0 / (Ma * 1000.0) + 1.0 / (Mb * 1000.0))
-    sig_a = s * 1e10
-    return finish(0.00266 * 1e-4 * _BAR * Tv**1.5 / (Pv * M_ab**0.5 * sig_a**2 * omega))
+    return _kinetic(Tv, Pv, 0.00266, _m_ab(float(Ma), float(Mb)), float(s) * 1e10, float(e), 0.0)
 
 
 def wilke_lee(
@@ -434,11 +482,13 @@ def wilke_lee(
     _check_M("M_a", Ma)
     _check_M("M_b", Mb)
     _warn_pressure(Pv, "wilke_lee")
-    omega = neufeld_collision_integral(Tv / e)
-    M_ab = 2.0 / (1.0 / (Ma * 1000.0) + 1.0 / (Mb * 1000.0))
-    sig_a = s * 1e10
-    pre = (3.03 - 0.98 / M_ab**0.5) * 1e-3
-    return finish(pre * 1e-4 * _BAR * Tv**1.5 / (Pv * M_ab**0.5 * sig_a**2 * omega))
+    M_ab = _m_ab(float(Ma), float(Mb))
+    return _kinetic(Tv, Pv, _wilke_lee_constant(M_ab), M_ab, float(s) * 1e10, float(e), 0.0)
+
+
+def _wilke_lee_constant(M_ab: float) -> float:
+    """Wilke and Lee's replacement for the constant 0.00266 (M_AB in g/mol)."""
+    return (3.03 - 0.98 / math.sqrt(M_ab)) * 1e-3
 
 
 def brokaw(
@@ -534,23 +584,10 @@ def brokaw(
     _check_M("M_a", Ma)
     _check_M("M_b", Mb)
     _warn_pressure(Pv, "brokaw")
-
-    def params(Vb: float, Tb: float, mu: float) -> tuple[float, float, float]:
-        V = Vb * 1e6
-        delta = 1.94e3 * (mu / DEBYE) ** 2 / (V * Tb)
-        eps = 1.18 * (1.0 + 1.3 * delta**2) * Tb
-        sig = (1.585 * V / (1.0 + 1.3 * delta**2)) ** (1.0 / 3.0)
-        return delta, eps, sig
-
-    da, ea, sa = params(float(Vb_a), float(Tb_a), float(dipole_a))
-    db, eb, sb = params(float(Vb_b), float(Tb_b), float(dipole_b))
-    d_ab = math.sqrt(da * db)
-    e_ab = math.sqrt(ea * eb)
-    s_ab = math.sqrt(sa * sb)
-    Ts = Tv / e_ab
-    omega = np.asarray(neufeld_collision_integral(Ts)) + 0.19 * d_ab**2 / Ts
-    M_ab = 2.0 / (1.0 / (Ma * 1000.0) + 1.0 / (Mb * 1000.0))
-    return finish(0.00266 * 1e-4 * _BAR * Tv**1.5 / (Pv * M_ab**0.5 * s_ab**2 * omega))
+    s_ab, e_ab, d2 = _brokaw_pair(
+        float(Vb_a), float(Vb_b), float(Tb_a), float(Tb_b), float(dipole_a), float(dipole_b)
+    )
+    return _kinetic(Tv, Pv, 0.00266, _m_ab(float(Ma), float(Mb)), s_ab, e_ab, d2)
 
 
 def blanc(D_binary: ArrayLike, mole_fractions: ArrayLike) -> FloatOrArray:
@@ -688,6 +725,7 @@ def _wilke_lee_params(s: Species) -> tuple[float, float]:
 
 
 _PREPARED: dict[tuple[str, object, object], tuple[float, ...]] = {}
+_METHOD_KEYS: Final = {name: name for name in GAS_METHODS}
 
 
 def _prepare(method: str, solute: str | Species, carrier: str | Species) -> tuple[float, ...]:
@@ -702,15 +740,14 @@ def _prepare(method: str, solute: str | Species, carrier: str | Species) -> tupl
         prepared = (float(_fuller_constant(Ma, Mb, fuller_volume(a), fuller_volume(b))),)
     elif method == "chapman-enskog":
         s, e = _lj_pair(a, b, "Chapman-Enskog")
-        prepared = (Ma, Mb, s, e)
+        prepared = (0.00266, _m_ab(Ma, Mb), s * 1e10, e, 0.0)
     elif method == "wilke-lee":
         sa, ea = _wilke_lee_params(a)
         sb, eb = _wilke_lee_params(b)
-        prepared = (Ma, Mb, 0.5 * (sa + sb), math.sqrt(ea * eb))
+        M_ab = _m_ab(Ma, Mb)
+        prepared = (_wilke_lee_constant(M_ab), M_ab, 0.5 * (sa + sb) * 1e10, math.sqrt(ea * eb), 0.0)
     else:  # brokaw
-        prepared = (
-            Ma,
-            Mb,
+        s_ab, e_ab, d2 = _brokaw_pair(
             a.require("Vb", "Brokaw"),
             b.require("Vb", "Brokaw"),
             a.require("Tb", "Brokaw"),
@@ -718,6 +755,7 @@ def _prepare(method: str, solute: str | Species, carrier: str | Species) -> tupl
             a.dipole or 0.0,
             b.dipole or 0.0,
         )
+        prepared = (0.00266, _m_ab(Ma, Mb), s_ab, e_ab, d2)
     if len(_PREPARED) > 4096:
         _PREPARED.clear()
     _PREPARED[key] = prepared
@@ -785,19 +823,16 @@ def gas_diffusivity(
     0.361
 
     """
-    m = normalise_method(method, GAS_METHODS)
+    m = _METHOD_KEYS.get(method) or normalise_method(method, GAS_METHODS)
     prepared = _prepare(m, solute, carrier)
+    Tv = check_positive("T", T)
+    Pv = check_positive("P", P)
+    check_shapes(T=Tv, P=Pv)
+    _warn_pressure(Pv, f"gas_diffusivity(method={m!r})")
     if m == "fuller":
-        Tv = check_positive("T", T)
-        Pv = check_positive("P", P)
-        check_shapes(T=Tv, P=Pv)
-        _warn_pressure(Pv, "gas_diffusivity(method='fuller')")
         return finish(prepared[0] * Tv**1.75 / Pv)
-    if m == "chapman-enskog":
-        return chapman_enskog(T, P, *prepared)
-    if m == "wilke-lee":
-        return wilke_lee(T, P, *prepared)
-    return brokaw(T, P, *prepared)
+    c, M_ab, sig, eps, d2 = prepared
+    return _kinetic(Tv, Pv, c, M_ab, sig, eps, d2)
 
 
 def gas_diffusivity_in_mixture(

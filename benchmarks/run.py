@@ -1,0 +1,170 @@
+"""Benchmarks: each a ratio against a baseline measured side by side in the same run.
+
+Run ``python benchmarks/run.py``; it prints a Markdown table and writes it to
+``benchmarks/results.md``.  Times are the best of several repeats (shared,
+noisy machines); the ratios, not the absolute times, are the result.
+"""
+
+from __future__ import annotations
+
+import datetime
+import platform
+import subprocess
+import sys
+import timeit
+from pathlib import Path
+
+import numpy as np
+
+import masstransfer as mt
+from masstransfer.diffusivity import fuller_volume
+
+
+def best(stmt, number: int, repeat: int = 7) -> float:
+    """Best time per call [s] of ``stmt`` over ``repeat`` batches of ``number`` calls."""
+    return min(timeit.repeat(stmt, number=number, repeat=repeat)) / number
+
+
+def bench_array_fuller() -> tuple[str, float, float, str]:
+    T = np.linspace(250.0, 1200.0, 1_000_000)
+    P = 101325.0
+    a, b = mt.species("toluene"), mt.species("air")
+    va, vb = fuller_volume(a), fuller_volume(b)
+    Ma, Mb = a.molar_mass * 1000, b.molar_mass * 1000
+
+    def bare():
+        M_ab = 2.0 / (1.0 / Ma + 1.0 / Mb)
+        return 0.00143e-4 * T**1.75 / ((P / 1e5) * M_ab**0.5 * (va ** (1 / 3) + vb ** (1 / 3)) ** 2)
+
+    def ours():
+        return mt.gas_diffusivity("toluene", "air", T, P)
+
+    np.testing.assert_allclose(ours(), bare(), rtol=1e-12)
+    t_base, t_ours = best(bare, 3), best(ours, 3)
+    return ("gas_diffusivity, named species, 10^6 temperatures", t_ours, t_base, "bare numpy Fuller")
+
+
+def bench_scalar_vs_cantera() -> tuple[str, float, float, str]:
+    import cantera as ct
+
+    gas = ct.Solution("gri30.yaml")
+    gas.TPX = 300.0, ct.one_atm, "N2:1"
+    i, j = gas.species_index("CO2"), gas.species_index("N2")
+
+    def cantera_call():
+        gas.TP = 300.0, ct.one_atm
+        return gas.binary_diff_coeffs[i, j]
+
+    def ours():
+        return mt.gas_diffusivity("carbon dioxide", "nitrogen", 300.0, 101325.0)
+
+    ours()
+    t_base, t_ours = best(cantera_call, 2000), best(ours, 20000)
+    return (
+        "one scalar gas_diffusivity call (cached species)",
+        t_ours,
+        t_base,
+        "Cantera set state + read D_ij",
+    )
+
+
+def bench_scalar_chapman_enskog_vs_cantera() -> tuple[str, float, float, str]:
+    import cantera as ct
+
+    gas = ct.Solution("gri30.yaml")
+    gas.TPX = 300.0, ct.one_atm, "N2:1"
+    i, j = gas.species_index("CO2"), gas.species_index("N2")
+
+    def cantera_call():
+        gas.TP = 300.0, ct.one_atm
+        return gas.binary_diff_coeffs[i, j]
+
+    def ours():
+        return mt.gas_diffusivity("carbon dioxide", "nitrogen", 300.0, 101325.0, method="chapman-enskog")
+
+    ours()
+    t_base, t_ours = best(cantera_call, 2000), best(ours, 20000)
+    return (
+        "one scalar Chapman-Enskog call (cached species)",
+        t_ours,
+        t_base,
+        "Cantera set state + read D_ij",
+    )
+
+
+def bench_liquid_viscosity() -> tuple[str, float, float, str]:
+    from thermo import ViscosityLiquid
+
+    w = mt.liquid_model("water")
+    sp = w.species
+    ref = ViscosityLiquid(CASRN=sp.CAS, MW=sp.molar_mass * 1000, Tm=sp.Tm, Tc=sp.Tc, Pc=sp.Pc)
+    T = np.linspace(280.0, 360.0, 100_000)
+    T_small = T[::100]
+
+    def per_state():
+        return [ref.T_dependent_property(t) for t in T_small]
+
+    def ours():
+        return w.viscosity(T)
+
+    t_base = best(per_state, 3) / T_small.size
+    t_ours = best(ours, 3) / T.size
+    return (
+        "liquid viscosity per state, 10^5-state array",
+        t_ours,
+        t_base,
+        "thermo model, one call per state",
+    )
+
+
+def bench_import() -> tuple[str, float, float, str]:
+    code = (
+        "import time, sys; t=time.perf_counter(); import {m}; "
+        "print(time.perf_counter()-t, 'thermo' in sys.modules or 'chemicals' in sys.modules)"
+    )
+
+    def run(mod: str) -> tuple[float, bool]:
+        times = []
+        loaded = False
+        for _ in range(5):
+            out = subprocess.run(
+                [sys.executable, "-c", code.format(m=mod)], capture_output=True, text=True, check=True
+            ).stdout.split()
+            times.append(float(out[0]))
+            loaded = out[1] == "True"
+        return min(times), loaded
+
+    t_ours, loaded = run("masstransfer")
+    if loaded:
+        raise SystemExit("import masstransfer loaded thermo or chemicals")
+    t_base, _ = run("thermo")
+    return ("import masstransfer (databases not loaded)", t_ours, t_base, "import thermo")
+
+
+def main() -> None:
+    rows = [
+        bench_array_fuller(),
+        bench_scalar_vs_cantera(),
+        bench_scalar_chapman_enskog_vs_cantera(),
+        bench_liquid_viscosity(),
+        bench_import(),
+    ]
+    stamp = datetime.date.today().isoformat()
+    machine = f"{platform.machine()}, {platform.python_implementation()} {platform.python_version()}"
+    lines = [
+        f"Measured {stamp} on {machine}, {__import__('os').cpu_count()} cores.",
+        "",
+        "| benchmark | ours | baseline | baseline time | ratio (ours / baseline) |",
+        "|---|---|---|---|---|",
+    ]
+    for name, ours, base, base_name in rows:
+        lines.append(
+            f"| {name} | {ours * 1e6:.3g} µs | {base_name} | {base * 1e6:.3g} µs | {ours / base:.2f} |"
+        )
+    text = "\n".join(lines)
+    print(text)
+    Path(__file__).with_name("results.md").write_text(text + "\n", encoding="utf-8")
+
+
+if __name__ == "__main__":
+    main()
