@@ -12,9 +12,9 @@ import numpy as np
 
 sys.path.insert(0, str(Path(__file__).parent))
 
-from validation_data import GAS_PAIRS, LIQUID_SYSTEMS  # noqa: E402
+from validation_data import GAS_PAIRS, LIQUID_SYSTEMS
 
-import masstransfer as mt  # noqa: E402
+import masstransfer as mt
 
 
 def main() -> None:
