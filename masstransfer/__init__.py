@@ -8,7 +8,7 @@ are loaded on first use, not on import.
 
 from __future__ import annotations
 
-from . import data, diffusivity, errors, properties
+from . import correlations, data, diffusivity, dimensionless, errors, properties
 from .diffusivity import (
     arrhenius_diffusivity,
     blanc,
@@ -31,6 +31,7 @@ from .diffusivity import (
     wilke_lee,
 )
 from .errors import (
+    EnvelopeError,
     EnvelopeWarning,
     InputShapeError,
     InputValueError,
@@ -47,6 +48,7 @@ from .species import Species, species
 __version__ = "0.1.0"
 
 __all__ = [
+    "EnvelopeError",
     "EnvelopeWarning",
     "InputShapeError",
     "InputValueError",
@@ -63,8 +65,10 @@ __all__ = [
     "bosanquet",
     "brokaw",
     "chapman_enskog",
+    "correlations",
     "data",
     "diffusivity",
+    "dimensionless",
     "effective_diffusivity",
     "errors",
     "fuller",

@@ -9,6 +9,7 @@ Messages name the argument, the offending value and how to fix it.
 from __future__ import annotations
 
 __all__ = [
+    "EnvelopeError",
     "EnvelopeWarning",
     "InputShapeError",
     "InputValueError",
@@ -51,6 +52,10 @@ class OutOfRangeError(InputValueError):
     Raised, for instance, when a solvent is asked for liquid properties at a
     temperature at which it is not a liquid.
     """
+
+
+class EnvelopeError(InputValueError):
+    """An input lies outside a correlation's envelope and strict checking was asked for."""
 
 
 class MassTransferWarning(UserWarning):

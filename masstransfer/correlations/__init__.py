@@ -1,0 +1,197 @@
+"""One catalogue of Nusselt and Sherwood correlations that knows where each one holds.
+
+Every record carries its geometry, regime, characteristic length, boundary
+condition, envelope and source, and gives Nu from (Re, Pr) or Sh from
+(Re, Sc) with the same equation::
+
+    import masstransfer as mt
+    rec = mt.correlations.get("sphere-ranz-marshall")
+    rec.sherwood(Re=120.0, Sc=0.6)
+    mt.correlations.find(geometry="sphere", Re=120.0, Sc=0.6)   # best-suited first
+
+Leaving a record's envelope issues an
+:class:`~masstransfer.errors.EnvelopeWarning`; ``strict=True`` raises
+:class:`~masstransfer.errors.EnvelopeError` instead.
+"""
+
+from __future__ import annotations
+
+import builtins
+import difflib
+from typing import Any
+
+import numpy as np
+
+from ..errors import InputValueError, UnknownMethodError
+from ._catalogue import RECORDS, darcy_friction_smooth
+from ._record import Correlation, CorrelationResult
+
+__all__ = [
+    "Correlation",
+    "CorrelationResult",
+    "all",
+    "darcy_friction_smooth",
+    "find",
+    "geometries",
+    "get",
+]
+
+_BY_SLUG = {r.slug: r for r in RECORDS}
+if len(_BY_SLUG) != len(RECORDS):  # pragma: no cover - guards the table
+    raise RuntimeError("duplicate correlation slugs")
+
+
+def all() -> tuple[Correlation, ...]:
+    """Every record of the catalogue.
+
+    Returns
+    -------
+    tuple of Correlation
+        All records, in catalogue order (grouped by geometry).
+
+    References
+    ----------
+    See each record's ``reference``.
+
+    Examples
+    --------
+    >>> len(all()) >= 30
+    True
+
+    """
+    return RECORDS
+
+
+def geometries() -> tuple[str, ...]:
+    """List the geometries the catalogue covers.
+
+    Returns
+    -------
+    tuple of str
+        Distinct geometry names, in catalogue order.
+
+    References
+    ----------
+    See each record's ``reference``.
+
+    Examples
+    --------
+    >>> "sphere" in geometries()
+    True
+
+    """
+    return tuple(dict.fromkeys(r.geometry for r in RECORDS))
+
+
+def get(slug: str) -> Correlation:
+    """Look a record up by its slug.
+
+    Parameters
+    ----------
+    slug : str
+        Stable identifier such as ``"duct-gnielinski"``.
+
+    Returns
+    -------
+    Correlation
+        The record.
+
+    Raises
+    ------
+    UnknownMethodError
+        If no record has that slug; the message lists close matches.
+
+    References
+    ----------
+    See the record's ``reference``.
+
+    Examples
+    --------
+    >>> get("sphere-ranz-marshall").sherwood(Re=0.0, Sc=1.0)
+    2.0
+
+    """
+    try:
+        return _BY_SLUG[slug]
+    except (KeyError, TypeError):
+        close = difflib.get_close_matches(str(slug), list(_BY_SLUG), n=5, cutoff=0.4)
+        hint = f"; close matches: {', '.join(close)}" if close else ""
+        raise UnknownMethodError(
+            f"no correlation {slug!r}{hint}; masstransfer.correlations.all() lists every record"
+        ) from None
+
+
+def find(
+    geometry: str | None = None, *, transport: str | None = None, **conditions: Any
+) -> list[Correlation]:
+    """Find the records whose envelopes cover the given conditions, best-suited first.
+
+    Parameters
+    ----------
+    geometry : str, optional
+        Geometry to match (see :func:`geometries`); all when omitted.
+    transport : {'heat', 'mass'}, optional
+        The transfer you will compute.  Inferred from the conditions when
+        omitted: ``Sc`` means mass, ``Pr`` heat.
+    **conditions : float or array_like
+        Values of the inputs (``Re=1e4, Sc=0.6``, ``Ra=1e8``, ...) [-].
+
+    Returns
+    -------
+    list of Correlation
+        Records that accept every given input and whose envelopes contain
+        every given value, ranked by: no required input missing, fitted on
+        the requested transport, stated accuracy.
+
+    Notes
+    -----
+    An envelope is where the source validated the equation; being inside
+    it is necessary, not sufficient, for the stated accuracy.
+
+    References
+    ----------
+    See each record's ``reference``.
+
+    Examples
+    --------
+    >>> [r.slug for r in find("duct", Re=5e4, Pr=3.0)][:2]
+    ['duct-gnielinski', 'duct-dittus-boelter']
+
+    """
+    if transport is None:
+        transport = "mass" if "Sc" in conditions else "heat"
+    if transport not in ("heat", "mass"):
+        raise InputValueError(f"transport={transport!r} must be 'heat' or 'mass'")
+    if "Sc" in conditions and "Pr" in conditions:
+        raise InputValueError("pass Sc (mass transfer) or Pr (heat transfer), not both")
+    wanted = {("Pr" if k == "Sc" else k): np.asarray(v, dtype=float) for k, v in conditions.items()}
+    if geometry is not None and geometry not in geometries():
+        close = difflib.get_close_matches(geometry, builtins.list(geometries()), n=3, cutoff=0.3)
+        raise UnknownMethodError(
+            f"geometry={geometry!r} is not in the catalogue"
+            + (f" (did you mean {', '.join(repr(c) for c in close)}?)" if close else "")
+            + f"; choose one of {', '.join(geometries())}"
+        )
+    hits: list[tuple[tuple[int, int, float, str], Correlation]] = []
+    for rec in RECORDS:
+        if geometry is not None and rec.geometry != geometry:
+            continue
+        names = set(rec.inputs) | set(rec.parameters)
+        if not set(wanted) <= names:
+            continue
+        inside = True
+        for key, v in wanted.items():
+            lo, hi = rec.envelope.get(key, rec.domain.get(key, (0.0, float("inf"))))
+            if not bool(np.all((v >= lo) & (v <= hi))):
+                inside = False
+                break
+        if not inside:
+            continue
+        missing = sum(1 for k in rec.inputs if k not in wanted) + sum(
+            1 for k, d in rec.parameters.items() if d is None and k not in wanted
+        )
+        matches = 0 if rec.fitted_on in ("both", transport) else 1
+        acc = rec.accuracy_pct if rec.accuracy_pct is not None else 100.0
+        hits.append(((missing, matches, acc, rec.slug), rec))
+    hits.sort(key=lambda h: h[0])
+    return [rec for _, rec in hits]

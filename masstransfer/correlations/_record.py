@@ -1,0 +1,298 @@
+"""The correlation record: one published equation, its envelope and its source."""
+
+from __future__ import annotations
+
+import math
+import warnings
+from collections.abc import Callable, Mapping
+from dataclasses import dataclass, field
+from types import MappingProxyType
+from typing import Any, Literal
+
+import numpy as np
+
+from .._typing import FloatOrArray
+from .._validation import as_float, check_shapes, finish
+from ..errors import EnvelopeError, EnvelopeWarning, InputValueError
+
+__all__ = ["Correlation", "CorrelationResult"]
+
+Transport = Literal["heat", "mass", "both"]
+Kind = Literal["heat", "mass"]
+
+#: Inputs that must be strictly positive (the equations divide by them or take logs).
+_STRICTLY_POSITIVE = frozenset({"Pr", "mu_ratio", "Pr_ratio", "porosity", "L_over_D", "Re_c"})
+
+#: Names of the inputs in the heat form and the mass form.
+_MASS_NAME = {"Pr": "Sc", "Nu": "Sh"}
+
+
+@dataclass(frozen=True)
+class CorrelationResult:
+    """A correlation's value with the metadata a design note needs.
+
+    Attributes
+    ----------
+    value : float or numpy.ndarray
+        Nu (heat) or Sh (mass) [-].
+    quantity : str
+        ``"Nu"`` or ``"Sh"``.
+    slug : str
+        The record that produced it.
+    inputs : mapping
+        The inputs and parameters used, under the names of the chosen form.
+    analogy : str or None
+        Set when a record fitted on one kind of transport was used for the
+        other (heat-mass analogy), saying so.
+    warnings : tuple of str
+        Envelope warnings raised by the evaluation.
+    reference : str
+        The source of the equation.
+    accuracy : str
+        The accuracy the source states.
+
+    """
+
+    value: FloatOrArray
+    quantity: str
+    slug: str
+    inputs: Mapping[str, Any]
+    analogy: str | None
+    warnings: tuple[str, ...]
+    reference: str
+    accuracy: str
+
+
+@dataclass(frozen=True, eq=False)
+class Correlation:
+    """A Nusselt/Sherwood correlation with its geometry, regime, envelope and source.
+
+    The same record gives Nu from (Re, Pr) and Sh from (Re, Sc): the heat
+    form's ``Pr`` is the mass form's ``Sc``.  Inputs are named as in the
+    heat form in :attr:`inputs` and :attr:`envelope`.
+
+    Attributes
+    ----------
+    slug : str
+        Stable identifier, e.g. ``"sphere-ranz-marshall"``.
+    title : str
+        Human-readable name.
+    geometry : str
+        e.g. ``"flat plate"``, ``"sphere"``, ``"duct"``, ``"packed bed"``.
+    convection : str
+        ``"forced"``, ``"free"`` or ``"interfacial"``.
+    regime : str
+        ``"laminar"``, ``"turbulent"``, ``"mixed"``, ``"creeping"``, ``"all"``...
+    length : str
+        Definition of the characteristic length in Nu, Sh and Re.
+    boundary : str
+        Boundary condition the record holds for.
+    inputs : tuple of str
+        Dimensionless inputs (heat form names).
+    parameters : mapping of str to float or None
+        Optional or required named parameters with their defaults (None:
+        required).
+    envelope : mapping of str to (float, float)
+        Ranges of inputs and parameters over which the source validated it.
+    fitted_on : {'heat', 'mass', 'both'}
+        The transport the data or theory behind it concerns.
+    reference : str
+        Authors, year, journal or book, equation number.
+    accuracy : str
+        The accuracy the source states.
+    accuracy_pct : float or None
+        The same as a number, used to rank :func:`find` results.
+    notes : str
+        Anything else a user must know.
+
+    """
+
+    slug: str
+    title: str
+    geometry: str
+    convection: str
+    regime: str
+    length: str
+    boundary: str
+    inputs: tuple[str, ...]
+    envelope: Mapping[str, tuple[float, float]]
+    fitted_on: Transport
+    reference: str
+    accuracy: str
+    function: Callable[..., Any] = field(repr=False)
+    parameters: Mapping[str, float | None] = field(default_factory=dict)
+    accuracy_pct: float | None = None
+    notes: str = ""
+    domain: Mapping[str, tuple[float, float]] = field(default_factory=dict)
+
+    def __post_init__(self) -> None:
+        object.__setattr__(self, "envelope", MappingProxyType(dict(self.envelope)))
+        object.__setattr__(self, "parameters", MappingProxyType(dict(self.parameters)))
+        object.__setattr__(self, "domain", MappingProxyType(dict(self.domain)))
+
+    # -- evaluation --------------------------------------------------------
+
+    def nusselt(self, *, strict: bool = False, **inputs: Any) -> FloatOrArray:
+        """Nusselt number from the heat-form inputs (e.g. ``Re=..., Pr=...``).
+
+        Parameters
+        ----------
+        strict : bool
+            Raise :class:`~masstransfer.errors.EnvelopeError` instead of
+            warning when an input leaves the envelope.
+        **inputs : float or array_like
+            The record's inputs and parameters [-].
+
+        Returns
+        -------
+        float or numpy.ndarray
+            Nu [-].
+
+        """
+        return self.evaluate("heat", strict=strict, stacklevel=3, **inputs).value
+
+    def sherwood(self, *, strict: bool = False, **inputs: Any) -> FloatOrArray:
+        """Sherwood number from the mass-form inputs (e.g. ``Re=..., Sc=...``).
+
+        Parameters
+        ----------
+        strict : bool
+            Raise instead of warning outside the envelope.
+        **inputs : float or array_like
+            The record's inputs, with ``Sc`` in place of ``Pr`` [-].
+
+        Returns
+        -------
+        float or numpy.ndarray
+            Sh [-].
+
+        """
+        return self.evaluate("mass", strict=strict, stacklevel=3, **inputs).value
+
+    def evaluate(
+        self, kind: Kind, *, strict: bool = False, stacklevel: int = 2, **inputs: Any
+    ) -> CorrelationResult:
+        """Evaluate for heat or mass transfer and return the value with metadata.
+
+        Parameters
+        ----------
+        kind : {'heat', 'mass'}
+            ``'heat'`` gives Nu from Pr; ``'mass'`` gives Sh from Sc.
+        strict : bool
+            Raise instead of warning outside the envelope.
+        stacklevel : int
+            Passed to :func:`warnings.warn` (points at the caller).
+        **inputs : float or array_like
+            Inputs and parameters, named for the chosen form [-].
+
+        Returns
+        -------
+        CorrelationResult
+            Value, metadata and any envelope warnings.
+
+        """
+        if kind not in ("heat", "mass"):
+            raise InputValueError(f"kind={kind!r} must be 'heat' or 'mass'")
+        values = self._collect(kind, inputs)
+        messages = self._check_envelope(kind, values, strict)
+        for msg in messages:
+            warnings.warn(msg, EnvelopeWarning, stacklevel=stacklevel)
+        value = finish(np.asarray(self.function(**values), dtype=float))
+        analogy = None
+        if self.fitted_on != "both" and self.fitted_on != kind:
+            analogy = (
+                f"{self.slug} was fitted on {self.fitted_on} transfer and is used here for {kind} "
+                f"transfer through the heat-mass analogy ({'Sc for Pr' if kind == 'mass' else 'Pr for Sc'})"
+            )
+        used = {self._name(k, kind): v for k, v in values.items()}
+        return CorrelationResult(
+            value=value,
+            quantity="Nu" if kind == "heat" else "Sh",
+            slug=self.slug,
+            inputs=MappingProxyType(used),
+            analogy=analogy,
+            warnings=tuple(messages),
+            reference=self.reference,
+            accuracy=self.accuracy,
+        )
+
+    # -- helpers -------------------------------------------------------------
+
+    @staticmethod
+    def _name(key: str, kind: Kind) -> str:
+        return _MASS_NAME.get(key, key) if kind == "mass" else key
+
+    def accepted(self, kind: Kind) -> tuple[str, ...]:
+        """Names this record accepts in the given form (inputs, then parameters)."""
+        return tuple(self._name(k, kind) for k in (*self.inputs, *self.parameters))
+
+    def _collect(self, kind: Kind, given: Mapping[str, Any]) -> dict[str, FloatOrArray]:
+        accepted = {self._name(k, kind): k for k in (*self.inputs, *self.parameters)}
+        unknown = [k for k in given if k not in accepted]
+        if unknown:
+            hint = ""
+            if kind == "mass" and "Pr" in unknown:
+                hint = " (for mass transfer pass Sc, not Pr)"
+            elif kind == "heat" and "Sc" in unknown:
+                hint = " (for heat transfer pass Pr, not Sc)"
+            raise InputValueError(
+                f"correlation {self.slug!r} does not use {', '.join(repr(u) for u in unknown)}{hint}; "
+                f"it takes {', '.join(self.accepted(kind))}"
+            )
+        values: dict[str, FloatOrArray] = {}
+        for name, key in accepted.items():
+            if name in given:
+                v = as_float(name, given[name])
+            elif key in self.parameters and self.parameters[key] is not None:
+                v = float(self.parameters[key])  # type: ignore[arg-type]
+            else:
+                raise InputValueError(
+                    f"correlation {self.slug!r} needs {name}; pass {name}=... "
+                    f"(it takes {', '.join(self.accepted(kind))})"
+                )
+            ok_finite = math.isfinite(v) if isinstance(v, float) else bool(np.all(np.isfinite(v)))
+            if not ok_finite:
+                raise InputValueError(f"{name} is not finite; pass finite values of {name}")
+            lo, hi = self.domain.get(key, (0.0, math.inf))
+            if key in _STRICTLY_POSITIVE:
+                pos = (v > 0.0) if isinstance(v, float) else bool(np.all(v > 0.0))
+                if not pos:
+                    raise InputValueError(f"{name} must be positive; pass {name} > 0")
+            lo_ok = (v >= lo) if isinstance(v, float) else bool(np.all(v >= lo))
+            hi_ok = (v <= hi) if isinstance(v, float) else bool(np.all(v <= hi))
+            if not (lo_ok and hi_ok):
+                bad = v if isinstance(v, float) else float(np.asarray(v)[(v < lo) | (v > hi)].ravel()[0])
+                raise InputValueError(
+                    f"{name}={bad!r} is outside {lo:g} to {hi:g}, where the equation of "
+                    f"{self.slug!r} is defined; pass {name} in that range"
+                )
+            values[key] = v
+        check_shapes(**values)
+        return values
+
+    def _check_envelope(self, kind: Kind, values: Mapping[str, FloatOrArray], strict: bool) -> list[str]:
+        messages = []
+        for key, (lo, hi) in self.envelope.items():
+            if key not in values:
+                continue
+            v = values[key]
+            if isinstance(v, float):
+                out = not (lo <= v <= hi)
+                shown = repr(v)
+            else:
+                mask = (v < lo) | (v > hi)
+                out = bool(mask.any())
+                shown = (
+                    f"{float(np.asarray(v)[mask].ravel()[0])!r} (and {int(mask.sum()) - 1} more)"
+                    if out
+                    else ""
+                )
+            if out:
+                msg = (
+                    f"correlation {self.slug!r}: {self._name(key, kind)}={shown} is outside its "
+                    f"envelope {lo:g} to {hi:g} ({self.reference})"
+                )
+                if strict:
+                    raise EnvelopeError(msg)
+                messages.append(msg)
+        return messages
