@@ -117,6 +117,64 @@ def bench_liquid_viscosity() -> tuple[str, float, float, str]:
     )
 
 
+def _bench_record(slug: str, bare_expr, inputs: dict) -> tuple[str, float, float, str]:
+    from masstransfer import correlations
+
+    rec = correlations.get(slug)
+
+    def ours():
+        return rec.nusselt(**inputs)
+
+    np.testing.assert_allclose(ours(), bare_expr(), rtol=1e-12)
+    t_base, t_ours = best(bare_expr, 5), best(ours, 5)
+    return (f"correlation {slug}, 10^6 points", t_ours, t_base, "bare numpy expression")
+
+
+def bench_records() -> list[tuple[str, float, float, str]]:
+    Re = np.linspace(1.0, 200.0, 1_000_000)
+    Pr = 0.7
+    Ra = np.geomspace(1e4, 1e11, 1_000_000)
+    rows = [
+        _bench_record(
+            "sphere-ranz-marshall", lambda: 2.0 + 0.6 * Re**0.5 * Pr ** (1 / 3), {"Re": Re, "Pr": Pr}
+        ),
+        _bench_record(
+            "cylinder-churchill-bernstein",
+            lambda: (
+                0.3
+                + (0.62 * Re**0.5 * Pr ** (1 / 3) / (1 + (0.4 / Pr) ** (2 / 3)) ** 0.25)
+                * (1 + (Re / 282000.0) ** 0.625) ** 0.8
+            ),
+            {"Re": Re, "Pr": Pr},
+        ),
+        _bench_record(
+            "vertical-plate-churchill-chu",
+            lambda: (0.825 + 0.387 * Ra ** (1 / 6) / (1 + (0.492 / Pr) ** (9 / 16)) ** (8 / 27)) ** 2,
+            {"Ra": Ra, "Pr": Pr},
+        ),
+    ]
+    from masstransfer import correlations
+
+    rec = correlations.get("sphere-ranz-marshall")
+    import math
+
+    def bare_scalar():
+        return 2.0 + 0.6 * math.sqrt(100.0) * 0.7 ** (1 / 3)
+
+    def ours_scalar():
+        return rec.nusselt(Re=100.0, Pr=0.7)
+
+    rows.append(
+        (
+            "one scalar record call (sphere-ranz-marshall)",
+            best(ours_scalar, 20000),
+            best(bare_scalar, 20000),
+            "bare math expression",
+        )
+    )
+    return rows
+
+
 def bench_import() -> tuple[str, float, float, str]:
     code = (
         "import time, sys; t=time.perf_counter(); import {m}; "
@@ -147,6 +205,7 @@ def main() -> None:
         bench_scalar_vs_cantera(),
         bench_scalar_chapman_enskog_vs_cantera(),
         bench_liquid_viscosity(),
+        *bench_records(),
         bench_import(),
     ]
     stamp = datetime.date.today().isoformat()

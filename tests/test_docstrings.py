@@ -8,9 +8,9 @@ import re
 import pytest
 
 import masstransfer as mt
-from masstransfer import diffusivity, properties, species
+from masstransfer import correlations, diffusivity, dimensionless, properties, species
 
-_MODULES = [mt, diffusivity, properties, species]
+_MODULES = [mt, correlations, diffusivity, dimensionless, properties, species]
 _UNIT = re.compile(r"\[[^\]]+\]")
 
 
@@ -40,7 +40,7 @@ def _documented_params(doc: str) -> dict[str, str]:
         if line and not line.startswith(" "):
             if set(line) == {"-"}:
                 break
-            m = re.match(r"^(\w+)(?: : (.*))?$", line)
+            m = re.match(r"^\*{0,2}(\w+)(?: : (.*))?$", line)
             if m is None:
                 break
             current = m.group(1)

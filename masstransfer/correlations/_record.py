@@ -193,8 +193,8 @@ class Correlation:
         """
         if kind not in ("heat", "mass"):
             raise InputValueError(f"kind={kind!r} must be 'heat' or 'mass'")
-        values = self._collect(kind, inputs)
-        messages = self._check_envelope(kind, values, strict)
+        values, extremes = self._collect(kind, inputs)
+        messages = self._check_envelope(kind, values, extremes, strict)
         for msg in messages:
             warnings.warn(msg, EnvelopeWarning, stacklevel=stacklevel)
         value = finish(np.asarray(self.function(**values), dtype=float))
@@ -226,7 +226,9 @@ class Correlation:
         """Names this record accepts in the given form (inputs, then parameters)."""
         return tuple(self._name(k, kind) for k in (*self.inputs, *self.parameters))
 
-    def _collect(self, kind: Kind, given: Mapping[str, Any]) -> dict[str, FloatOrArray]:
+    def _collect(
+        self, kind: Kind, given: Mapping[str, Any]
+    ) -> tuple[dict[str, FloatOrArray], dict[str, tuple[float, float]]]:
         accepted = {self._name(k, kind): k for k in (*self.inputs, *self.parameters)}
         unknown = [k for k in given if k not in accepted]
         if unknown:
@@ -240,6 +242,7 @@ class Correlation:
                 f"it takes {', '.join(self.accepted(kind))}"
             )
         values: dict[str, FloatOrArray] = {}
+        extremes: dict[str, tuple[float, float]] = {}
         for name, key in accepted.items():
             if name in given:
                 v = as_float(name, given[name])
@@ -250,49 +253,56 @@ class Correlation:
                     f"correlation {self.slug!r} needs {name}; pass {name}=... "
                     f"(it takes {', '.join(self.accepted(kind))})"
                 )
-            ok_finite = math.isfinite(v) if isinstance(v, float) else bool(np.all(np.isfinite(v)))
-            if not ok_finite:
-                raise InputValueError(f"{name} is not finite; pass finite values of {name}")
+            # two reductions per array, no temporaries; NaN propagates into both
+            if isinstance(v, float):
+                vmin = vmax = v
+            elif v.size:
+                vmin, vmax = float(v.min()), float(v.max())
+            else:
+                values[key] = v
+                continue
+            if not (math.isfinite(vmin) and math.isfinite(vmax)):
+                bad = vmin if not math.isfinite(vmin) else vmax
+                raise InputValueError(f"{name}={bad!r} is not finite; pass finite values of {name}")
             lo, hi = self.domain.get(key, (0.0, math.inf))
-            if key in _STRICTLY_POSITIVE:
-                pos = (v > 0.0) if isinstance(v, float) else bool(np.all(v > 0.0))
-                if not pos:
-                    raise InputValueError(f"{name} must be positive; pass {name} > 0")
-            lo_ok = (v >= lo) if isinstance(v, float) else bool(np.all(v >= lo))
-            hi_ok = (v <= hi) if isinstance(v, float) else bool(np.all(v <= hi))
-            if not (lo_ok and hi_ok):
-                bad = v if isinstance(v, float) else float(np.asarray(v)[(v < lo) | (v > hi)].ravel()[0])
+            if key in _STRICTLY_POSITIVE and vmin <= 0.0:
+                raise InputValueError(f"{name}={vmin!r} is not positive; pass {name} > 0")
+            if vmin < lo or vmax > hi:
+                bad = vmin if vmin < lo else vmax
                 raise InputValueError(
                     f"{name}={bad!r} is outside {lo:g} to {hi:g}, where the equation of "
                     f"{self.slug!r} is defined; pass {name} in that range"
                 )
             values[key] = v
+            extremes[key] = (vmin, vmax)
         check_shapes(**values)
-        return values
+        return values, extremes
 
-    def _check_envelope(self, kind: Kind, values: Mapping[str, FloatOrArray], strict: bool) -> list[str]:
+    def _check_envelope(
+        self,
+        kind: Kind,
+        values: Mapping[str, FloatOrArray],
+        extremes: Mapping[str, tuple[float, float]],
+        strict: bool,
+    ) -> list[str]:
         messages = []
         for key, (lo, hi) in self.envelope.items():
-            if key not in values:
+            if key not in extremes:
+                continue
+            vmin, vmax = extremes[key]
+            if lo <= vmin and vmax <= hi:
                 continue
             v = values[key]
             if isinstance(v, float):
-                out = not (lo <= v <= hi)
                 shown = repr(v)
             else:
                 mask = (v < lo) | (v > hi)
-                out = bool(mask.any())
-                shown = (
-                    f"{float(np.asarray(v)[mask].ravel()[0])!r} (and {int(mask.sum()) - 1} more)"
-                    if out
-                    else ""
-                )
-            if out:
-                msg = (
-                    f"correlation {self.slug!r}: {self._name(key, kind)}={shown} is outside its "
-                    f"envelope {lo:g} to {hi:g} ({self.reference})"
-                )
-                if strict:
-                    raise EnvelopeError(msg)
-                messages.append(msg)
+                shown = f"{float(np.asarray(v)[mask].ravel()[0])!r} (and {int(mask.sum()) - 1} more)"
+            msg = (
+                f"correlation {self.slug!r}: {self._name(key, kind)}={shown} is outside its "
+                f"envelope {lo:g} to {hi:g} ({self.reference})"
+            )
+            if strict:
+                raise EnvelopeError(msg)
+            messages.append(msg)
         return messages
