@@ -8,7 +8,26 @@ are loaded on first use, not on import.
 
 from __future__ import annotations
 
-from . import correlations, data, diffusivity, dimensionless, errors, properties
+from . import (
+    analogy,
+    coefficients,
+    correlations,
+    data,
+    diffusivity,
+    dimensionless,
+    errors,
+    flux,
+    properties,
+    wet_surface,
+)
+from .analogy import (
+    TransferCoefficients,
+    heat_transfer_coefficient_from_mass,
+    mass_transfer_coefficient_from_heat,
+    mass_transfer_from_heat,
+    nusselt_from_sherwood,
+    sherwood_from_nusselt,
+)
 from .diffusivity import (
     arrhenius_diffusivity,
     blanc,
@@ -44,6 +63,7 @@ from .errors import (
 )
 from .properties import gas_model, liquid_model
 from .species import Species, species
+from .wet_surface import wet_bulb_temperature, wet_surface_temperature
 
 __version__ = "0.1.0"
 
@@ -57,20 +77,24 @@ __all__ = [
     "MissingConstantError",
     "OutOfRangeError",
     "Species",
+    "TransferCoefficients",
     "UnknownMethodError",
     "UnknownSpeciesError",
     "__version__",
+    "analogy",
     "arrhenius_diffusivity",
     "blanc",
     "bosanquet",
     "brokaw",
     "chapman_enskog",
+    "coefficients",
     "correlations",
     "data",
     "diffusivity",
     "dimensionless",
     "effective_diffusivity",
     "errors",
+    "flux",
     "fuller",
     "fuller_volume",
     "gas_diffusivity",
@@ -78,14 +102,22 @@ __all__ = [
     "gas_model",
     "hayduk_minhas",
     "hayduk_minhas_aqueous",
+    "heat_transfer_coefficient_from_mass",
     "knudsen_diffusivity",
     "liquid_diffusivity",
     "liquid_model",
+    "mass_transfer_coefficient_from_heat",
+    "mass_transfer_from_heat",
+    "nusselt_from_sherwood",
     "properties",
     "rescale_gas_diffusivity",
+    "sherwood_from_nusselt",
     "species",
     "stokes_einstein",
     "tyn_calus",
+    "wet_bulb_temperature",
+    "wet_surface",
+    "wet_surface_temperature",
     "wilke_chang",
     "wilke_lee",
 ]

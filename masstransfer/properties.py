@@ -47,6 +47,7 @@ __all__ = [
     "LiquidModel",
     "PropertyCurve",
     "gas_model",
+    "henry_constant",
     "liquid_model",
     "parachor",
 ]
@@ -235,6 +236,8 @@ class LiquidModel:
     mu: PropertyCurve
     k: PropertyCurve
     cp_molar: PropertyCurve
+    psat: PropertyCurve | None = None
+    hvap: PropertyCurve | None = None
 
     @property
     def T_min(self) -> float:
@@ -261,6 +264,23 @@ class LiquidModel:
     def heat_capacity(self, T: ArrayLike) -> FloatOrArray:
         """Isobaric specific heat capacity [J/(kg K)] at ``T`` [K]."""
         return finish(np.asarray(self.cp_molar(T)) / self.species.molar_mass)
+
+    def vapor_pressure(self, T: ArrayLike) -> FloatOrArray:
+        """Saturation (vapour) pressure [Pa] at ``T`` [K]."""
+        return self._need(self.psat, "vapour pressure")(T)
+
+    def enthalpy_vaporization(self, T: ArrayLike) -> FloatOrArray:
+        """Specific enthalpy of vaporisation [J/kg] at ``T`` [K]."""
+        return finish(
+            np.asarray(self._need(self.hvap, "enthalpy of vaporisation")(T)) / self.species.molar_mass
+        )
+
+    def _need(self, curve: PropertyCurve | None, what: str) -> PropertyCurve:
+        if curve is None:
+            raise MissingConstantError(
+                f"thermo has no {what} model for {self.species.name!r}; supply the value yourself"
+            )
+        return curve
 
 
 def gas_model(gas: str | Species) -> GasModel:
@@ -441,14 +461,30 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
         CASRN=kw["CASRN"], MW=kw["MW"], Tm=sp.Tm, Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, omega=sp.omega
     )
     cp = HeatCapacityLiquid(CASRN=kw["CASRN"], MW=kw["MW"], Tc=sp.Tc, omega=sp.omega)
+    from thermo import EnthalpyVaporization, VaporPressure
+
+    vp = VaporPressure(CASRN=kw["CASRN"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, omega=sp.omega)
+    hv = EnthalpyVaporization(CASRN=kw["CASRN"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, omega=sp.omega)
     name = f"liquid {sp.name}"
+    T_hv_high = T_high if not math.isfinite(T_high) else T_high * 0.995  # Hvap -> 0 at Tc
     return LiquidModel(
         species=sp,
         molar_volume=_thermo_curve(vl, f"molar volume of {name}", "m^3/mol", 1.0, T_low, T_high),
         mu=_thermo_curve(mu, f"viscosity of {name}", "Pa s", 1.0, T_low, T_high),
         k=_thermo_curve(k, f"thermal conductivity of {name}", "W/(m K)", 1.0, T_low, T_high),
         cp_molar=_thermo_curve(cp, f"heat capacity of {name}", "J/(mol K)", 1.0, T_low, T_high),
+        psat=_optional_curve(vp, f"vapour pressure of {name}", "Pa", T_low, T_high),
+        hvap=_optional_curve(hv, f"enthalpy of vaporisation of {name}", "J/mol", T_low, T_hv_high),
     )
+
+
+def _optional_curve(prop: Any, quantity: str, unit: str, T_low: float, T_high: float) -> PropertyCurve | None:
+    if prop.method is None:
+        return None
+    try:
+        return _thermo_curve(prop, quantity, unit, 1.0, T_low, T_high)
+    except (OutOfRangeError, MissingConstantError):
+        return None
 
 
 #: Temperature at which the parachor is evaluated when the liquid exists there [K].
@@ -536,4 +572,84 @@ def _compute_parachor(sp: Species) -> float:
     raise MissingConstantError(
         f"no temperature found at which thermo models both the surface tension and density of "
         f"{sp.name!r}; supply Species(..., parachor=...) [N^0.25 m^2.75/mol]"
+    )
+
+
+_HENRY_TABLES = ("Sander T dep", "ChemSep Henry", "Sander Const")
+
+
+def henry_constant(solute: str | Species, solvent: str | Species, T: ArrayLike) -> FloatOrArray:
+    """Henry's-law constant of a dilute gas in a solvent, :math:`p_A = H\\,x_A`.
+
+    .. math:: H = \\exp\\left(A + \\frac{B}{T} + C\\ln T + DT + \\frac{E}{T^2} + FT^2\\right)
+
+    with the coefficients of the first of the ``thermo`` interaction-parameter
+    tables that holds the pair: Sander's temperature-dependent compilation,
+    the ChemSep set, then Sander's constants.
+
+    Parameters
+    ----------
+    solute : str or Species
+        Dissolved gas, e.g. ``"oxygen"``.
+    solvent : str or Species
+        Solvent, e.g. ``"water"``.
+    T : float or array_like
+        Temperature [K].
+
+    Returns
+    -------
+    float or numpy.ndarray
+        H [Pa] on the mole-fraction scale (the slope of the equilibrium line
+        is m = H/P).
+
+    Raises
+    ------
+    MissingConstantError
+        If none of the tables holds the pair; pass your own constant to the
+        numeric functions instead.
+
+    Notes
+    -----
+    Compilations scatter by 10-30 % for many gases; Sander (2015) lists the
+    spread.  The equation form is the one ``chemicals.Henry_pressure``
+    evaluates, written here in numpy for arrays of T.
+
+    References
+    ----------
+    Sander, R. (2015). Compilation of Henry's law constants (version 4.0)
+    for water as solvent. *Atmos. Chem. Phys.* 15, 4399-4981.
+    https://doi.org/10.5194/acp-15-4399-2015
+
+    Examples
+    --------
+    >>> round(henry_constant("oxygen", "water", 298.15) / 1e9, 2)
+    4.34
+
+    """
+    a, b = species(solute), species(solvent)
+    Tv = check_positive("T", T)
+    A, B, C, D, E, F = _henry_coefficients(a, b)
+    Ta = np.asarray(Tv, dtype=float)
+    return finish(np.exp(A + (B + E / Ta) / Ta + C * np.log(Ta) + Ta * (D + F * Ta)))
+
+
+@functools.lru_cache(maxsize=256)
+def _henry_coefficients(a: Species, b: Species) -> tuple[float, ...]:
+    if not a.CAS or not b.CAS:
+        raise MissingConstantError(
+            f"no Henry's-law data without CAS numbers ({a.name!r} in {b.name!r}); pass the constant yourself"
+        )
+    with quiet():
+        from thermo.interaction_parameters import IPDB
+
+        for table in _HENRY_TABLES:
+            pair = [a.CAS, b.CAS]
+            if IPDB.has_ip_specific(table, pair, "A"):
+                return tuple(
+                    float(IPDB.get_ip_asymmetric_matrix(table, pair, key)[0][1])
+                    for key in ("A", "B", "C", "D", "E", "F")
+                )
+    raise MissingConstantError(
+        f"no Henry's-law constant for {a.name!r} in {b.name!r} in the thermo tables "
+        f"({', '.join(_HENRY_TABLES)}); pass your own constant to the numeric functions"
     )
