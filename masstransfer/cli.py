@@ -1,7 +1,8 @@
-"""Command line: ``masstransfer demo`` and ``masstransfer diffusivity ...``.
+"""Command line: a thin shell over the library functions.
 
-A thin shell over the library functions: readable tables with units by
-default, ``--json`` for scripts.
+Subcommands: ``demo``, ``diffusivity``, ``coefficient``, ``correlations``
+and ``wet-bulb``.  Readable tables with units by default, ``--json`` for
+scripts.  Errors from the library print one line and exit with status 2.
 """
 
 from __future__ import annotations
@@ -10,6 +11,7 @@ import argparse
 import json
 import sys
 from collections.abc import Sequence
+from typing import Any
 
 import numpy as np
 
@@ -21,10 +23,11 @@ __all__ = ["main"]
 def _parser() -> argparse.ArgumentParser:
     p = argparse.ArgumentParser(
         prog="masstransfer",
-        description="Diffusivities and mass-transfer estimates for process engineering.",
+        description="Diffusivities, mass-transfer coefficients and correlations for process engineering.",
     )
     sub = p.add_subparsers(dest="command", required=True)
     sub.add_parser("demo", help="print the demo report (an invented kiln-drying scenario)")
+
     d = sub.add_parser(
         "diffusivity",
         help="estimate a binary diffusivity in a gas or a liquid",
@@ -32,16 +35,57 @@ def _parser() -> argparse.ArgumentParser:
     )
     d.add_argument("solute", help="diffusing species: name, CAS number or formula")
     d.add_argument("medium", help="carrier gas (e.g. air) or solvent (e.g. water)")
-    d.add_argument(
+    _state_args(d)
+    d.add_argument("--method", default=None, help="estimation method (default: fuller / wilke-chang)")
+
+    c = sub.add_parser(
+        "coefficient",
+        help="convert a heat-transfer coefficient to mass-transfer coefficients (or back)",
+        description="Chilton-Colburn analogy with the carrier's properties at the film temperature.",
+    )
+    c.add_argument("solute", help="transferring species")
+    c.add_argument("medium", help="carrier gas or solvent")
+    given = c.add_mutually_exclusive_group(required=True)
+    given.add_argument("--h", type=float, metavar="W/(m2 K)", help="known heat-transfer coefficient")
+    given.add_argument("--kc", type=float, metavar="m/s", help="known mass-transfer coefficient")
+    _state_args(c)
+
+    k = sub.add_parser(
+        "correlations",
+        help="list the correlation catalogue, or explain one record",
+        description="Without SLUG: list records (optionally of one geometry). With SLUG: explain it.",
+    )
+    k.add_argument("slug", nargs="?", help="record to explain, e.g. sphere-ranz-marshall")
+    k.add_argument("--geometry", help="list only this geometry (e.g. sphere, duct, 'flat plate')")
+    k.add_argument("--json", action="store_true", help="print JSON instead of a table")
+
+    w = sub.add_parser("wet-bulb", help="psychrometric wet-bulb temperature of humid air")
+    w.add_argument(
         "-T",
         "--temperature",
         type=float,
         nargs="+",
         required=True,
         metavar="K",
-        help="temperature(s) in K",
+        help="dry-bulb temperature(s) in K",
     )
-    d.add_argument(
+    w.add_argument("--rh", type=float, required=True, help="relative humidity as a fraction (0-1)")
+    w.add_argument("-P", "--pressure", type=float, default=101325.0, metavar="PA", help="pressure in Pa")
+    w.add_argument("--json", action="store_true", help="print JSON instead of a table")
+    return p
+
+
+def _state_args(p: argparse.ArgumentParser) -> None:
+    p.add_argument(
+        "-T",
+        "--temperature",
+        type=float,
+        nargs="+",
+        required=True,
+        metavar="K",
+        help="temperature(s) in K (film temperature for coefficients)",
+    )
+    p.add_argument(
         "-P",
         "--pressure",
         type=float,
@@ -49,16 +93,18 @@ def _parser() -> argparse.ArgumentParser:
         metavar="PA",
         help="pressure in Pa (gas phase; default 101325)",
     )
-    d.add_argument(
-        "--phase", choices=("gas", "liquid"), default="gas", help="phase of the medium (default gas)"
-    )
-    d.add_argument(
-        "--method",
-        default=None,
-        help="estimation method (default: fuller for gases, wilke-chang for liquids)",
-    )
-    d.add_argument("--json", action="store_true", help="print JSON instead of a table")
-    return p
+    p.add_argument("--phase", choices=("gas", "liquid"), default="gas", help="phase of the medium")
+    p.add_argument("--json", action="store_true", help="print JSON instead of a table")
+
+
+def _table(title: str, header: Sequence[str], rows: Sequence[Sequence[str]], foot: str = "") -> str:
+    widths = [max(len(h), *(len(r[i]) for r in rows)) for i, h in enumerate(header)]
+    line = "  ".join(h.rjust(w) for h, w in zip(header, widths, strict=True))
+    out = [title, line, "-" * len(line)]
+    out += ["  ".join(c.rjust(w) for c, w in zip(r, widths, strict=True)) for r in rows]
+    if foot:
+        out.append(foot)
+    return "\n".join(out)
 
 
 def _diffusivity(args: argparse.Namespace) -> str:
@@ -84,14 +130,151 @@ def _diffusivity(args: argparse.Namespace) -> str:
             },
             indent=2,
         )
-    where = f"at {args.pressure:g} Pa" if args.phase == "gas" else "(infinite dilution)"
-    rows = [
-        f"Diffusivity of {args.solute} in {args.medium} ({args.phase}) {where}, method {method}",
-        f"{'T [K]':>10}  {'D [m^2/s]':>12}",
-    ]
-    rows += [f"{t:10.2f}  {d:12.4e}" for t, d in zip(T, D, strict=True)]
-    rows.append("Estimates: check safety-relevant designs against measured data.")
-    return "\n".join(rows)
+    where = f"gas at {args.pressure:g} Pa" if args.phase == "gas" else "liquid, infinite dilution"
+    return _table(
+        f"Diffusivity of {args.solute} in {args.medium} ({where}); method: {method}",
+        ["T [K]", "D [m^2/s]", "D [cm^2/s]"],
+        [[f"{t:.2f}", f"{d:.4e}", f"{d * 1e4:.4e}"] for t, d in zip(T, D, strict=True)],
+        "Estimates; check safety-relevant designs against measured data.",
+    )
+
+
+def _coefficient(args: argparse.Namespace) -> str:
+    from .analogy import heat_transfer_coefficient_from_mass, mass_transfer_from_heat
+
+    T = np.asarray(args.temperature, dtype=float)
+    if args.h is not None:
+        res = mass_transfer_from_heat(args.h, args.solute, args.medium, T, args.pressure, phase=args.phase)
+        h = np.broadcast_to(np.asarray(res.h), T.shape)
+    else:
+        probe = mass_transfer_from_heat(1.0, args.solute, args.medium, T, args.pressure, phase=args.phase)
+        h = np.atleast_1d(
+            heat_transfer_coefficient_from_mass(args.kc, rho=probe.rho, cp=probe.cp, Pr=probe.Pr, Sc=probe.Sc)
+        )
+        res = mass_transfer_from_heat(h, args.solute, args.medium, T, args.pressure, phase=args.phase)
+    fields: dict[str, Any] = {
+        "T_K": T,
+        "h_W_per_m2K": h,
+        "k_c_m_per_s": res.k_c,
+        "D_m2_per_s": res.D,
+        "Pr": res.Pr,
+        "Sc": res.Sc,
+        "Le": res.Le,
+        "rho_kg_per_m3": res.rho,
+        "cp_J_per_kgK": res.cp,
+    }
+    if res.k_G is not None:
+        fields["k_G_mol_per_m2sPa"] = res.k_G
+        fields["k_y_mol_per_m2s"] = res.k_y
+    if res.k_x is not None:
+        fields["k_x_mol_per_m2s"] = res.k_x
+    cols = {k: np.atleast_1d(np.asarray(v, dtype=float)) for k, v in fields.items()}
+    cols = {k: np.broadcast_to(v, T.shape) for k, v in cols.items()}
+    if args.json:
+        return json.dumps(
+            {
+                "solute": res.solute,
+                "medium": res.carrier,
+                "phase": res.phase,
+                "method": res.method,
+                "warnings": list(res.warnings),
+                **{k: v.tolist() for k, v in cols.items()},
+            },
+            indent=2,
+        )
+    header = ["T [K]", "h [W/(m^2 K)]", "k_c [m/s]", "D [m^2/s]", "Pr", "Sc", "Le"]
+    keys = ["T_K", "h_W_per_m2K", "k_c_m_per_s", "D_m2_per_s", "Pr", "Sc", "Le"]
+    if "k_y_mol_per_m2s" in cols:
+        header += ["k_G [mol/(m^2 s Pa)]", "k_y [mol/(m^2 s)]"]
+        keys += ["k_G_mol_per_m2sPa", "k_y_mol_per_m2s"]
+    if "k_x_mol_per_m2s" in cols:
+        header.append("k_x [mol/(m^2 s)]")
+        keys.append("k_x_mol_per_m2s")
+    fmt = {"T_K": "{:.2f}", "h_W_per_m2K": "{:.4g}", "Pr": "{:.3f}", "Sc": "{:.3f}", "Le": "{:.3f}"}
+    rows = [[fmt.get(k, "{:.4e}").format(cols[k][i]) for k in keys] for i in range(T.size)]
+    foot = res.method + "."
+    if res.warnings:
+        foot += "\nWarnings:\n  " + "\n  ".join(res.warnings)
+    return _table(
+        f"Mass-transfer coefficients for {res.solute} in {res.carrier} ({res.phase})", header, rows, foot
+    )
+
+
+def _correlations(args: argparse.Namespace) -> str:
+    from . import correlations
+
+    if args.slug:
+        r = correlations.get(args.slug)
+        info = {
+            "slug": r.slug,
+            "title": r.title,
+            "geometry": r.geometry,
+            "convection": r.convection,
+            "regime": r.regime,
+            "characteristic length": r.length,
+            "boundary condition": r.boundary,
+            "inputs (heat form; Sc for Pr in mass transfer)": ", ".join(r.inputs),
+            "parameters": ", ".join(f"{k}={'required' if v is None else v}" for k, v in r.parameters.items())
+            or "none",
+            "envelope": "; ".join(f"{k} {lo:g} to {hi:g}" for k, (lo, hi) in r.envelope.items()),
+            "fitted on": r.fitted_on,
+            "reference": r.reference,
+            "stated accuracy": r.accuracy,
+            "notes": r.notes or "-",
+        }
+        if args.json:
+            return json.dumps(info, indent=2)
+        width = max(len(k) for k in info)
+        return "\n".join(f"{k.rjust(width)} : {v}" for k, v in info.items())
+    recs = [r for r in correlations.all() if args.geometry in (None, r.geometry)]
+    if args.geometry is not None and not recs:
+        correlations.find(args.geometry)  # raises with the accepted geometries
+    if args.json:
+        return json.dumps(
+            [
+                {
+                    "slug": r.slug,
+                    "geometry": r.geometry,
+                    "regime": r.regime,
+                    "fitted_on": r.fitted_on,
+                    "title": r.title,
+                }
+                for r in recs
+            ],
+            indent=2,
+        )
+    return _table(
+        f"Correlation catalogue: {len(recs)} records",
+        ["slug", "geometry", "regime", "fitted on"],
+        [[r.slug, r.geometry, r.regime, r.fitted_on] for r in recs],
+        "masstransfer correlations SLUG explains one record.",
+    )
+
+
+def _wet_bulb(args: argparse.Namespace) -> str:
+    from .wet_surface import wet_bulb_temperature
+
+    T = np.asarray(args.temperature, dtype=float)
+    wb = np.atleast_1d(wet_bulb_temperature(T, args.rh, args.pressure))
+    if args.json:
+        return json.dumps(
+            {
+                "T_K": T.tolist(),
+                "relative_humidity": args.rh,
+                "P_Pa": args.pressure,
+                "wet_bulb_K": wb.tolist(),
+            },
+            indent=2,
+        )
+    return _table(
+        f"Psychrometric wet-bulb temperature, relative humidity {args.rh:g}, {args.pressure:g} Pa",
+        ["T [K]", "T [C]", "T_wb [K]", "T_wb [C]"],
+        [
+            [f"{t:.2f}", f"{t - 273.15:.2f}", f"{w:.2f}", f"{w - 273.15:.2f}"]
+            for t, w in zip(T, wb, strict=True)
+        ],
+        "Heat-mass analogy (Chilton-Colburn, Le^(2/3)); see the wet_bulb_temperature docstring.",
+    )
 
 
 def main(argv: Sequence[str] | None = None) -> int:
@@ -107,6 +290,10 @@ def main(argv: Sequence[str] | None = None) -> int:
     int
         0 on success, 2 when the library rejects the input.
 
+    References
+    ----------
+    See the functions each subcommand calls.
+
     Examples
     --------
     >>> main(["diffusivity", "water", "air", "-T", "298.15", "--json"]) == 0  # doctest: +ELLIPSIS
@@ -115,13 +302,19 @@ def main(argv: Sequence[str] | None = None) -> int:
 
     """
     args = _parser().parse_args(argv)
+    handlers = {
+        "diffusivity": _diffusivity,
+        "coefficient": _coefficient,
+        "correlations": _correlations,
+        "wet-bulb": _wet_bulb,
+    }
     try:
         if args.command == "demo":
             from .demo import demo_report
 
             out = demo_report()
         else:
-            out = _diffusivity(args)
+            out = handlers[args.command](args)
     except MassTransferError as exc:
         print(f"masstransfer: error: {exc}", file=sys.stderr)
         return 2

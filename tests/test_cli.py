@@ -16,6 +16,7 @@ def test_demo_runs_and_has_units(capsys):
     assert "[K]" in out
     assert "invented" in out
     assert "Cautions" in out
+    assert "kg of water per hour" in out
 
 
 def test_diffusivity_json(capsys):
@@ -36,6 +37,36 @@ def test_bad_input_exits_2_with_message(capsys):
     assert "error" in capsys.readouterr().err
     with pytest.raises(SystemExit):
         main(["no-such-command"])
+
+
+def test_coefficient_both_directions(capsys):
+    assert main(["coefficient", "water", "air", "--h", "35", "-T", "320", "--json"]) == 0
+    first = json.loads(capsys.readouterr().out)
+    k_c = first["k_c_m_per_s"][0]
+    assert main(["coefficient", "water", "air", "--kc", str(k_c), "-T", "320", "--json"]) == 0
+    back = json.loads(capsys.readouterr().out)
+    assert back["h_W_per_m2K"][0] == pytest.approx(35.0, rel=1e-9)
+    assert main(["coefficient", "oxygen", "water", "--h", "900", "-T", "300", "--phase", "liquid"]) == 0
+    assert "k_x [mol/(m^2 s)]" in capsys.readouterr().out
+
+
+def test_correlations_list_and_explain(capsys):
+    assert main(["correlations"]) == 0
+    assert "duct-gnielinski" in capsys.readouterr().out
+    assert main(["correlations", "--geometry", "sphere", "--json"]) == 0
+    assert {r["geometry"] for r in json.loads(capsys.readouterr().out)} == {"sphere"}
+    assert main(["correlations", "duct-gnielinski"]) == 0
+    out = capsys.readouterr().out
+    assert "envelope" in out
+    assert "Gnielinski" in out
+    assert main(["correlations", "no-such-record"]) == 2
+
+
+def test_wet_bulb_command(capsys):
+    assert main(["wet-bulb", "-T", "303.15", "--rh", "0.5", "--json"]) == 0
+    data = json.loads(capsys.readouterr().out)
+    assert 294.0 < data["wet_bulb_K"][0] < 296.0
+    assert main(["wet-bulb", "-T", "303.15", "--rh", "50"]) == 2
 
 
 def test_python_dash_m():

@@ -8,9 +8,30 @@ import re
 import pytest
 
 import masstransfer as mt
-from masstransfer import correlations, diffusivity, dimensionless, properties, species
+from masstransfer import (
+    analogy,
+    coefficients,
+    correlations,
+    diffusivity,
+    dimensionless,
+    flux,
+    properties,
+    species,
+    wet_surface,
+)
 
-_MODULES = [mt, correlations, diffusivity, dimensionless, properties, species]
+_MODULES = [
+    mt,
+    analogy,
+    coefficients,
+    correlations,
+    diffusivity,
+    dimensionless,
+    flux,
+    properties,
+    species,
+    wet_surface,
+]
 _UNIT = re.compile(r"\[[^\]]+\]")
 
 
