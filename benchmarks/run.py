@@ -211,7 +211,12 @@ def bench_analogy_resolved() -> tuple[str, float, float, str]:
 
     t_ours = best(ours, 3, repeat=3) / T.size
     t_base = best(per_state, 1, repeat=3) / T_few.size
-    return ("mass_transfer_from_heat per state, 10^5 states", t_ours, t_base, "thermo Chemical built per state")
+    return (
+        "mass_transfer_from_heat per state, 10^5 states",
+        t_ours,
+        t_base,
+        "thermo Chemical built per state",
+    )
 
 
 def bench_import() -> tuple[str, float, float, str]:
