@@ -10,6 +10,7 @@ from __future__ import annotations
 
 from . import (
     analogy,
+    barriers,
     coefficients,
     correlations,
     data,
@@ -18,6 +19,7 @@ from . import (
     errors,
     flux,
     properties,
+    transient,
     wet_surface,
 )
 from .analogy import (
@@ -83,6 +85,7 @@ __all__ = [
     "__version__",
     "analogy",
     "arrhenius_diffusivity",
+    "barriers",
     "blanc",
     "bosanquet",
     "brokaw",
@@ -114,6 +117,7 @@ __all__ = [
     "sherwood_from_nusselt",
     "species",
     "stokes_einstein",
+    "transient",
     "tyn_calus",
     "wet_bulb_temperature",
     "wet_surface",

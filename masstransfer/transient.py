@@ -28,7 +28,6 @@ from ._validation import as_float, check_nonnegative, check_positive, check_shap
 from .errors import InputValueError, UnknownMethodError
 
 __all__ = [
-    "HALF_TIMES",
     "SERIES_TOLERANCE",
     "SHAPES",
     "DiffusivityFit",
@@ -658,9 +657,6 @@ def semi_infinite_uptake(
 
 
 # --- inverse problems ---------------------------------------------------------------------------
-
-#: Dt_half/a^2 at which M_t/M_inf = 1/2, for a surface at equilibrium (a: half-thickness or radius).
-HALF_TIMES: Final = {"slab": 0.196735, "cylinder": 0.063, "sphere": 0.030538}
 
 
 def half_time(shape: str, D: ArrayLike, size: ArrayLike) -> FloatOrArray:

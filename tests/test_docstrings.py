@@ -10,6 +10,7 @@ import pytest
 import masstransfer as mt
 from masstransfer import (
     analogy,
+    barriers,
     coefficients,
     correlations,
     diffusivity,
@@ -17,12 +18,14 @@ from masstransfer import (
     flux,
     properties,
     species,
+    transient,
     wet_surface,
 )
 
 _MODULES = [
     mt,
     analogy,
+    barriers,
     coefficients,
     correlations,
     diffusivity,
@@ -30,6 +33,7 @@ _MODULES = [
     flux,
     properties,
     species,
+    transient,
     wet_surface,
 ]
 _UNIT = re.compile(r"\[[^\]]+\]")
