@@ -19,7 +19,6 @@ from . import (
     errors,
     flux,
     properties,
-    transient,
     wet_surface,
 )
 from .analogy import (
@@ -68,6 +67,16 @@ from .species import Species, species
 from .wet_surface import wet_bulb_temperature, wet_surface_temperature
 
 __version__ = "0.1.0"
+
+
+def __getattr__(name: str) -> object:
+    """Import the scipy-backed ``transient`` module on first use (keeps ``import masstransfer`` light)."""
+    if name == "transient":
+        import importlib
+
+        return importlib.import_module(".transient", __name__)
+    raise AttributeError(f"module {__name__!r} has no attribute {name!r}")
+
 
 __all__ = [
     "EnvelopeError",
