@@ -16,6 +16,7 @@ __all__ = [
     "MassTransferError",
     "MassTransferWarning",
     "MissingConstantError",
+    "MissingDependencyError",
     "OutOfRangeError",
     "UnknownMethodError",
     "UnknownSpeciesError",
@@ -44,6 +45,10 @@ class UnknownSpeciesError(MassTransferError, LookupError, ValueError):
 
 class MissingConstantError(MassTransferError, ValueError):
     """A resolved species lacks a constant that the chosen method needs."""
+
+
+class MissingDependencyError(MassTransferError, ImportError):
+    """An optional dependency (for example hypothesis) is not installed."""
 
 
 class OutOfRangeError(InputValueError):
