@@ -16,11 +16,11 @@ from __future__ import annotations
 import math
 import warnings
 from dataclasses import dataclass
-from typing import Literal
+from typing import Literal, overload
 
 import numpy as np
 
-from ._typing import ArrayLike, FloatOrArray
+from ._typing import ArrayLike, FloatArray, FloatOrArray
 from ._validation import check_nonnegative, check_positive, check_shapes, finish
 from .errors import InputValueError
 from .species import R_GAS, Species, species
@@ -49,6 +49,18 @@ def _checked(**kw: ArrayLike) -> dict[str, FloatOrArray]:
     return out
 
 
+@overload
+def mass_transfer_coefficient_from_heat(
+    h: float, *, rho: float, cp: float, Pr: float, Sc: float, exponent: float = ...
+) -> float: ...
+@overload
+def mass_transfer_coefficient_from_heat(
+    h: FloatArray, *, rho: ArrayLike, cp: ArrayLike, Pr: ArrayLike, Sc: ArrayLike, exponent: float = ...
+) -> FloatArray: ...
+@overload
+def mass_transfer_coefficient_from_heat(
+    h: ArrayLike, *, rho: ArrayLike, cp: ArrayLike, Pr: ArrayLike, Sc: ArrayLike, exponent: float = ...
+) -> FloatOrArray: ...
 def mass_transfer_coefficient_from_heat(
     h: ArrayLike,
     *,
@@ -117,6 +129,18 @@ def mass_transfer_coefficient_from_heat(
     return finish(hv * ((a["Pr"] / a["Sc"]) ** n / (a["rho"] * a["cp"])))
 
 
+@overload
+def heat_transfer_coefficient_from_mass(
+    k_c: float, *, rho: float, cp: float, Pr: float, Sc: float, exponent: float = ...
+) -> float: ...
+@overload
+def heat_transfer_coefficient_from_mass(
+    k_c: FloatArray, *, rho: ArrayLike, cp: ArrayLike, Pr: ArrayLike, Sc: ArrayLike, exponent: float = ...
+) -> FloatArray: ...
+@overload
+def heat_transfer_coefficient_from_mass(
+    k_c: ArrayLike, *, rho: ArrayLike, cp: ArrayLike, Pr: ArrayLike, Sc: ArrayLike, exponent: float = ...
+) -> FloatOrArray: ...
 def heat_transfer_coefficient_from_mass(
     k_c: ArrayLike,
     *,

@@ -18,7 +18,7 @@ import math
 from collections.abc import Sequence
 from dataclasses import dataclass, field
 from types import MappingProxyType
-from typing import Final
+from typing import Final, overload
 
 import numpy as np
 
@@ -479,6 +479,12 @@ def arrhenius(T: ArrayLike, value_ref: ArrayLike, T_ref: float, E: ArrayLike) ->
     return finish(v0 * np.exp(-np.asarray(Ev) / R_GAS * (1.0 / np.asarray(Tv) - 1.0 / T0)))
 
 
+@overload
+def time_lag(thickness: float, D: float) -> float: ...
+@overload
+def time_lag(thickness: FloatArray, D: ArrayLike) -> FloatArray: ...
+@overload
+def time_lag(thickness: ArrayLike, D: ArrayLike) -> FloatOrArray: ...
 def time_lag(thickness: ArrayLike, D: ArrayLike) -> FloatOrArray:
     """Time lag of a membrane, :math:`\\theta = L^2/(6D)`.
 

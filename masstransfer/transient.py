@@ -18,7 +18,7 @@ from __future__ import annotations
 import functools
 import math
 from dataclasses import dataclass
-from typing import Any, Final
+from typing import Any, Final, overload
 
 import numpy as np
 from scipy import special
@@ -232,6 +232,16 @@ def _uptake_surface_resistance(shape: str, T: FloatArray, biot: float) -> FloatA
     return out
 
 
+@overload
+def fractional_uptake(shape: str, t: float, D: float, size: float, biot: float | None = ...) -> float: ...
+@overload
+def fractional_uptake(
+    shape: str, t: FloatArray, D: ArrayLike, size: ArrayLike, biot: float | None = ...
+) -> FloatArray: ...
+@overload
+def fractional_uptake(
+    shape: str, t: ArrayLike, D: ArrayLike, size: ArrayLike, biot: ArrayLike | None = ...
+) -> FloatOrArray: ...
 def fractional_uptake(
     shape: str, t: ArrayLike, D: ArrayLike, size: ArrayLike, biot: ArrayLike | None = None
 ) -> FloatOrArray:

@@ -16,6 +16,8 @@ temperature (T + T_s)/2; vapour pressure and latent heat at T_s.
 
 from __future__ import annotations
 
+from typing import overload
+
 import numpy as np
 
 from ._typing import ArrayLike, FloatArray, FloatOrArray
@@ -149,6 +151,12 @@ def wet_surface_temperature(
     return finish(out)
 
 
+@overload
+def wet_bulb_temperature(T: float, relative_humidity: float, P: float = ...) -> float: ...
+@overload
+def wet_bulb_temperature(T: FloatArray, relative_humidity: ArrayLike, P: ArrayLike = ...) -> FloatArray: ...
+@overload
+def wet_bulb_temperature(T: ArrayLike, relative_humidity: ArrayLike, P: ArrayLike = ...) -> FloatOrArray: ...
 def wet_bulb_temperature(T: ArrayLike, relative_humidity: ArrayLike, P: ArrayLike = 101325.0) -> FloatOrArray:
     """Psychrometric wet-bulb temperature of humid air, from the heat-mass analogy.
 

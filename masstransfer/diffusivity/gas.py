@@ -18,12 +18,12 @@ from __future__ import annotations
 import math
 import warnings
 from collections.abc import Mapping
-from typing import Final
+from typing import Final, overload
 
 import numpy as np
 
 from .. import data
-from .._typing import ArrayLike, FloatOrArray
+from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_positive, check_shapes, finish
 from ..errors import EnvelopeWarning, InputValueError, MissingConstantError
 from ..species import DEBYE, Species, species
@@ -79,6 +79,12 @@ def _warn_pressure(P: FloatOrArray, method: str) -> None:
         )
 
 
+@overload
+def fuller(T: float, P: float, M_a: float, M_b: float, v_a: float, v_b: float) -> float: ...
+@overload
+def fuller(T: FloatArray, P: ArrayLike, M_a: float, M_b: float, v_a: float, v_b: float) -> FloatArray: ...
+@overload
+def fuller(T: ArrayLike, P: ArrayLike, M_a: float, M_b: float, v_a: float, v_b: float) -> FloatOrArray: ...
 def fuller(
     T: ArrayLike,
     P: ArrayLike,
@@ -762,6 +768,18 @@ def _prepare(method: str, solute: str | Species, carrier: str | Species) -> tupl
     return prepared
 
 
+@overload
+def gas_diffusivity(
+    solute: str | Species, carrier: str | Species, T: float, P: float = ..., method: str = ...
+) -> float: ...
+@overload
+def gas_diffusivity(
+    solute: str | Species, carrier: str | Species, T: FloatArray, P: ArrayLike = ..., method: str = ...
+) -> FloatArray: ...
+@overload
+def gas_diffusivity(
+    solute: str | Species, carrier: str | Species, T: ArrayLike, P: ArrayLike = ..., method: str = ...
+) -> FloatOrArray: ...
 def gas_diffusivity(
     solute: str | Species,
     carrier: str | Species,

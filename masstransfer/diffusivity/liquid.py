@@ -16,12 +16,12 @@ from __future__ import annotations
 import math
 import warnings
 from dataclasses import dataclass
-from typing import Final
+from typing import Final, overload
 
 import numpy as np
 
 from .. import data
-from .._typing import ArrayLike, FloatOrArray
+from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_positive, check_shapes, finish
 from ..errors import EnvelopeWarning, InputValueError
 from ..species import DEBYE, Species, species
@@ -590,6 +590,39 @@ def liquid_diffusivity_inputs(
     return LiquidDiffusivityInputs(Va, Vb, Pa, Pb, phi, form, tuple(notes))
 
 
+@overload
+def liquid_diffusivity(
+    solute: str | Species,
+    solvent: str | Species,
+    T: float,
+    method: str = ...,
+    *,
+    mu_solvent: float | None = ...,
+    phi: float | None = ...,
+    radius: float | None = ...,
+) -> float: ...
+@overload
+def liquid_diffusivity(
+    solute: str | Species,
+    solvent: str | Species,
+    T: FloatArray,
+    method: str = ...,
+    *,
+    mu_solvent: ArrayLike | None = ...,
+    phi: float | None = ...,
+    radius: float | None = ...,
+) -> FloatArray: ...
+@overload
+def liquid_diffusivity(
+    solute: str | Species,
+    solvent: str | Species,
+    T: ArrayLike,
+    method: str = ...,
+    *,
+    mu_solvent: ArrayLike | None = ...,
+    phi: float | None = ...,
+    radius: float | None = ...,
+) -> FloatOrArray: ...
 def liquid_diffusivity(
     solute: str | Species,
     solvent: str | Species,
