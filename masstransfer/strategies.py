@@ -163,7 +163,12 @@ def gas_states(*, arrays: bool = False, max_size: int = 20) -> st.SearchStrategy
 
     Examples
     --------
-    >>> state = gas_states().example()  # doctest: +SKIP
+    >>> from hypothesis import given
+    >>> @given(gas_states())
+    ... def test_positive(state):
+    ...     from masstransfer import gas_diffusivity
+    ...     assert gas_diffusivity(state.solute, state.carrier, state.T, state.P) > 0
+    >>> test_positive()
 
     """
     return _gas_state(arrays, max_size)
@@ -217,7 +222,13 @@ def liquid_states(*, arrays: bool = False, max_size: int = 20) -> st.SearchStrat
 
     Examples
     --------
-    >>> state = liquid_states().example()  # doctest: +SKIP
+    >>> from hypothesis import given, settings
+    >>> @settings(max_examples=5)
+    ... @given(liquid_states())
+    ... def test_liquid(state):
+    ...     from masstransfer import liquid_diffusivity
+    ...     assert liquid_diffusivity(state.solute, state.solvent, state.T) > 0
+    >>> test_liquid()
 
     """
     return _liquid_state(arrays, max_size, _liquid_ranges())
@@ -253,7 +264,14 @@ def correlation_inputs(
 
     Examples
     --------
-    >>> inputs = correlation_inputs("sphere-ranz-marshall").example()  # doctest: +SKIP
+    >>> from hypothesis import given, settings
+    >>> from masstransfer import correlations
+    >>> rec = correlations.get("sphere-ranz-marshall")
+    >>> @settings(max_examples=10)
+    ... @given(correlation_inputs(rec, kind="mass"))
+    ... def test_inside(inputs):
+    ...     assert rec.sherwood(strict=True, **inputs) >= 2.0
+    >>> test_inside()
 
     """
     from . import correlations
