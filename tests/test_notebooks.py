@@ -21,13 +21,25 @@ def test_notebook_executes(path, tmp_path, monkeypatch):
     # the kernel draws with matplotlib's inline backend, which needs no display
     monkeypatch.delenv("MPLBACKEND", raising=False)
     nb = nbformat.read(path, as_version=4)
-    client = nbclient.NotebookClient(nb, timeout=300, kernel_name="python3", resources={"metadata": {"path": str(tmp_path)}})
+    client = nbclient.NotebookClient(
+        nb, timeout=300, kernel_name="python3", resources={"metadata": {"path": str(tmp_path)}}
+    )
     client.execute()
     text = "".join(c.source for c in nb.cells if c.cell_type == "markdown")
     assert "invented" in text.lower()
     figures = [
-        o for c in nb.cells if c.cell_type == "code" for o in c.get("outputs", []) if "image/png" in o.get("data", {})
+        o
+        for c in nb.cells
+        if c.cell_type == "code"
+        for o in c.get("outputs", [])
+        if "image/png" in o.get("data", {})
     ]
     assert figures, f"{path.name} drew no figure"
-    errors = [o for c in nb.cells if c.cell_type == "code" for o in c.get("outputs", []) if o.get("output_type") == "error"]
+    errors = [
+        o
+        for c in nb.cells
+        if c.cell_type == "code"
+        for o in c.get("outputs", [])
+        if o.get("output_type") == "error"
+    ]
     assert not errors
