@@ -1,7 +1,8 @@
 """Benchmarks: each a ratio against a baseline measured side by side in the same run.
 
-Run ``python benchmarks/run.py``; it prints a Markdown table and writes it to
-``benchmarks/results.md``.  Times are the best of several repeats (shared,
+Run ``python benchmarks/run.py``; it prints a Markdown table, writes it to
+``benchmarks/results.md`` and draws ``benchmarks/scaling.png`` (time against
+problem size from 10 to 10^7).  Times are the best of several repeats (shared,
 noisy machines); the ratios, not the absolute times, are the result.
 """
 
@@ -264,6 +265,41 @@ def bench_import() -> tuple[str, float, float, str]:
     return ("import masstransfer (databases not loaded)", t_ours, t_base, "import thermo")
 
 
+def scaling_plot(path: Path) -> None:
+    """Time per call against problem size, 10 to 10^7, for three array calls and a bare baseline."""
+    import matplotlib
+
+    matplotlib.use("Agg")
+    import matplotlib.pyplot as plt
+
+    from masstransfer import correlations, transient
+
+    rec = correlations.get("sphere-ranz-marshall")
+    sizes = np.logspace(1, 7, 13).astype(int)
+    series = {
+        "gas_diffusivity (named species)": lambda x: mt.gas_diffusivity("toluene", "air", 250.0 + x),
+        "correlation record (Ranz-Marshall)": lambda x: rec.nusselt(Re=x, Pr=0.7),
+        "fractional_uptake (slab)": lambda x: transient.fractional_uptake("slab", x, 1e-11, 1e-3),
+        "bare numpy x**1.75": lambda x: (250.0 + x) ** 1.75,
+    }
+    fig, ax = plt.subplots(figsize=(6.5, 4.2))
+    for label, fn in series.items():
+        times = []
+        for n in sizes:
+            x = np.linspace(1.0, 200.0, n)
+            reps = max(1, int(2e5 // n))
+            times.append(best(lambda fn=fn, x=x: fn(x), reps, repeat=3))
+        ax.loglog(sizes, times, marker="o", ms=3, label=label)
+    ref = sizes * 1e-9
+    ax.loglog(sizes, ref, "k:", label="slope 1 (linear scaling)")
+    ax.set_xlabel("problem size (array length)")
+    ax.set_ylabel("time per call [s]")
+    ax.set_title(f"masstransfer scaling, {datetime.date.today().isoformat()}, {platform.machine()}")
+    ax.legend(fontsize=8)
+    fig.tight_layout()
+    fig.savefig(path, dpi=110)
+
+
 def main() -> None:
     rows = [
         bench_array_fuller(),
@@ -291,6 +327,8 @@ def main() -> None:
     text = "\n".join(lines)
     print(text)
     Path(__file__).with_name("results.md").write_text(text + "\n", encoding="utf-8")
+    scaling_plot(Path(__file__).with_name("scaling.png"))
+    print("wrote benchmarks/results.md and benchmarks/scaling.png")
 
 
 if __name__ == "__main__":
