@@ -21,7 +21,7 @@ from typing import Literal, overload
 import numpy as np
 
 from ._typing import ArrayLike, FloatArray, FloatOrArray
-from ._validation import check_nonnegative, check_positive, check_shapes, finish
+from ._validation import check_nonnegative, check_positive, check_shapes, finish, guard_module, warn_caller
 from .errors import InputValueError
 from .species import R_GAS, Species, species
 
@@ -657,7 +657,7 @@ def mass_transfer_from_heat(
             method = diffusivity_method or "wilke-chang"
             D = liquid_diffusivity(a, b, Tv, method=method)
     for w in caught:
-        warnings.warn(w.message, w.category, stacklevel=2)
+        warn_caller(str(w.message), w.category)
     r, c, kk, m, d = (np.asarray(x) for x in (rho, cp, k, mu, D))
     Pr = c * m / kk
     Sc = m / (r * d)
@@ -696,3 +696,10 @@ def mass_transfer_from_heat(
         method=f"Chilton-Colburn analogy (exponent {n_text}); diffusivity by {method}",
         warnings=tuple(str(w.message) for w in caught),
     )
+
+
+guard_module(
+    globals(),
+    __all__,
+    unchecked=("mass_transfer_coefficient_from_heat", "heat_transfer_coefficient_from_mass"),
+)

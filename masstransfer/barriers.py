@@ -23,7 +23,7 @@ from typing import Final, overload
 import numpy as np
 
 from ._typing import ArrayLike, FloatArray, FloatOrArray
-from ._validation import as_float, check_nonnegative, check_positive, check_shapes, finish
+from ._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard_module
 from .errors import InputValueError, UnknownMethodError
 from .species import R_GAS
 
@@ -819,3 +819,6 @@ def oxygen_ingress(
         time_to_limit=t_lim,
         assumption="steady permeation from sealing (time lag ignored), constant inside partial pressure",
     )
+
+
+guard_module(globals(), __all__, unchecked=())

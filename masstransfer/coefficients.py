@@ -19,7 +19,7 @@ from __future__ import annotations
 import numpy as np
 
 from ._typing import ArrayLike, FloatOrArray
-from ._validation import check_positive, check_shapes, finish, in_range
+from ._validation import check_positive, check_shapes, finish, guard_module, in_range
 from .species import R_GAS
 
 __all__ = [
@@ -493,3 +493,6 @@ def overall_liquid_coefficient(k_y: ArrayLike, k_x: ArrayLike, m: ArrayLike) -> 
     mv = check_positive("m", m)
     check_shapes(k_y=ky, k_x=kx, m=mv)
     return finish(1.0 / (1.0 / (mv * ky) + 1.0 / kx))
+
+
+guard_module(globals(), __all__, unchecked=())

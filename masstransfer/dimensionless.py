@@ -15,7 +15,7 @@ from typing import Any
 import numpy as np
 
 from ._typing import ArrayLike, FloatOrArray
-from ._validation import as_float, check_positive, check_shapes, finish
+from ._validation import as_float, check_positive, check_shapes, finish, guard_module
 
 __all__ = [
     "G_STANDARD",
@@ -750,3 +750,6 @@ def archimedes(
     a = _pos(d=d, rho_fluid=rho_fluid, rho_particle=rho_particle, mu=mu, g=g)
     rf, rp = np.asarray(a["rho_fluid"]), np.asarray(a["rho_particle"])
     return finish(a["g"] * a["d"] ** 3 * rf * np.abs(rp - rf) / a["mu"] ** 2)
+
+
+guard_module(globals(), __all__, unchecked=())

@@ -10,7 +10,15 @@ from __future__ import annotations
 import numpy as np
 
 from ._typing import ArrayLike, FloatOrArray
-from ._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, in_range
+from ._validation import (
+    as_float,
+    check_nonnegative,
+    check_positive,
+    check_shapes,
+    finish,
+    guard_module,
+    in_range,
+)
 from .errors import InputValueError
 from .species import R_GAS
 
@@ -359,3 +367,6 @@ def high_flux_rate(
             "y < 1); check y_surface, y_bulk and flux_ratio"
         )
     return finish(r * Fv * np.log(num / den))
+
+
+guard_module(globals(), __all__, unchecked=())

@@ -37,7 +37,7 @@ from numpy.polynomial import chebyshev as _cheb
 from . import data
 from ._databases import quiet
 from ._typing import ArrayLike, FloatArray, FloatOrArray
-from ._validation import check_positive, check_shapes, finish
+from ._validation import check_positive, check_shapes, finish, guard, guard_module
 from .errors import MissingConstantError, OutOfRangeError
 from .species import DEBYE, R_GAS, Species, species
 
@@ -653,3 +653,26 @@ def _henry_coefficients(a: Species, b: Species) -> tuple[float, ...]:
         f"no Henry's-law constant for {a.name!r} in {b.name!r} in the thermo tables "
         f"({', '.join(_HENRY_TABLES)}); pass your own constant to the numeric functions"
     )
+
+
+guard_module(globals(), __all__)
+for _cls, _methods in (
+    (PropertyCurve, ("__call__",)),
+    (
+        GasModel,
+        ("density", "viscosity", "thermal_conductivity", "heat_capacity", "kinematic_viscosity", "prandtl"),
+    ),
+    (
+        LiquidModel,
+        (
+            "density",
+            "viscosity",
+            "thermal_conductivity",
+            "heat_capacity",
+            "vapor_pressure",
+            "enthalpy_vaporization",
+        ),
+    ),
+):
+    for _m in _methods:
+        setattr(_cls, _m, guard(getattr(_cls, _m)))

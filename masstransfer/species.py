@@ -24,6 +24,7 @@ from typing import Any
 from . import data
 from ._databases import quiet
 from ._smiles import Molecule, parse_smiles
+from ._validation import guard_module
 from .errors import InputValueError, MissingConstantError, UnknownSpeciesError
 
 __all__ = ["DEBYE", "R_GAS", "Species", "le_bas_volume", "species"]
@@ -573,3 +574,6 @@ def _vb_from_thermo(
         return _opt(vl.T_dependent_property(Tb))
     except Exception:
         return None
+
+
+guard_module(globals(), ("species", "le_bas_volume"))

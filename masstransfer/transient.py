@@ -24,7 +24,7 @@ import numpy as np
 from scipy import special
 
 from ._typing import ArrayLike, FloatArray, FloatOrArray
-from ._validation import as_float, check_nonnegative, check_positive, check_shapes, finish
+from ._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard_module
 from .errors import InputValueError, UnknownMethodError
 
 __all__ = [
@@ -826,3 +826,6 @@ def fit_diffusivity(
         residual_rms=math.sqrt(float(r @ r) / tv.size),
         n_points=int(tv.size),
     )
+
+
+guard_module(globals(), __all__, unchecked=())

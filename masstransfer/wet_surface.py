@@ -21,7 +21,7 @@ from typing import overload
 import numpy as np
 
 from ._typing import ArrayLike, FloatArray, FloatOrArray
-from ._validation import check_nonnegative, check_positive, check_shapes, finish, in_range
+from ._validation import check_nonnegative, check_positive, check_shapes, finish, guard_module, in_range
 from .errors import OutOfRangeError
 from .species import R_GAS, Species, species
 
@@ -208,3 +208,6 @@ def wet_bulb_temperature(T: ArrayLike, relative_humidity: ArrayLike, P: ArrayLik
     if (y >= 1).any():
         raise OutOfRangeError("the water vapour pressure at T exceeds P; lower T or raise P")
     return wet_surface_temperature("water", "air", Tv, finish(y), Pv)
+
+
+guard_module(globals(), __all__, unchecked=())

@@ -22,6 +22,7 @@ from typing import Any
 
 import numpy as np
 
+from .._validation import guard, guard_module
 from ..errors import InputValueError, UnknownMethodError
 from ._catalogue import RECORDS, darcy_friction_smooth
 from ._record import Correlation, CorrelationResult
@@ -195,3 +196,10 @@ def find(
         hits.append(((missing, matches, acc, rec.slug), rec))
     hits.sort(key=lambda h: h[0])
     return [rec for _, rec in hits]
+
+
+guard_module(globals(), ("all", "geometries", "get", "find"))
+darcy_friction_smooth = guard(darcy_friction_smooth)
+for _m in ("nusselt", "sherwood", "evaluate"):
+    # record outputs are finite by construction for inputs inside the accepted magnitudes
+    setattr(Correlation, _m, guard(getattr(Correlation, _m), check_output=False))

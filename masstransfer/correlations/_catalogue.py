@@ -16,6 +16,7 @@ from typing import Any
 
 import numpy as np
 
+from .._validation import check_positive
 from ._record import Correlation
 
 __all__ = ["RECORDS"]
@@ -230,7 +231,7 @@ def darcy_friction_smooth(Re: Any) -> Any:
     from fluids.friction import Clamond
 
     coef, lo, hi = _friction_fit()
-    Re = _arr(Re)
+    Re = _arr(check_positive("Re", Re, "pass a positive Reynolds number"))
     u = np.log(Re)
     x = (2 * u - (lo + hi)) / (hi - lo)
     inside = (u >= lo) & (u <= hi)

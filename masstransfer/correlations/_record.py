@@ -3,7 +3,6 @@
 from __future__ import annotations
 
 import math
-import warnings
 from collections.abc import Callable, Mapping
 from dataclasses import dataclass, field
 from types import MappingProxyType
@@ -12,7 +11,7 @@ from typing import Any, Literal
 import numpy as np
 
 from .._typing import FloatOrArray
-from .._validation import as_float, check_shapes, finish
+from .._validation import MAGNITUDE_LIMIT, as_float, check_shapes, finish, warn_caller
 from ..errors import EnvelopeError, EnvelopeWarning, InputValueError
 
 __all__ = ["Correlation", "CorrelationResult"]
@@ -196,7 +195,7 @@ class Correlation:
         values, extremes = self._collect(kind, inputs)
         messages = self._check_envelope(kind, values, extremes, strict)
         for msg in messages:
-            warnings.warn(msg, EnvelopeWarning, stacklevel=stacklevel)
+            warn_caller(msg, EnvelopeWarning)
         value = finish(np.asarray(self.function(**values), dtype=float))
         analogy = None
         if self.fitted_on != "both" and self.fitted_on != kind:
@@ -264,6 +263,10 @@ class Correlation:
             if not (math.isfinite(vmin) and math.isfinite(vmax)):
                 bad = vmin if not math.isfinite(vmin) else vmax
                 raise InputValueError(f"{name}={bad!r} is not finite; pass finite values of {name}")
+            if vmax > MAGNITUDE_LIMIT:
+                raise InputValueError(
+                    f"{name}={vmax!r} exceeds {MAGNITUDE_LIMIT:g}, the range accepted; pass a physical value"
+                )
             lo, hi = self.domain.get(key, (0.0, math.inf))
             if key in _STRICTLY_POSITIVE and vmin <= 0.0:
                 raise InputValueError(f"{name}={vmin!r} is not positive; pass {name} > 0")

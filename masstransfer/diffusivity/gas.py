@@ -16,7 +16,6 @@ Estimates only: check designs that affect safety against measured data.
 from __future__ import annotations
 
 import math
-import warnings
 from collections.abc import Mapping
 from typing import Final, overload
 
@@ -24,7 +23,7 @@ import numpy as np
 
 from .. import data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_positive, check_shapes, finish
+from .._validation import check_positive, check_shapes, finish, guard_module, warn_caller
 from ..errors import EnvelopeWarning, InputValueError, MissingConstantError
 from ..species import DEBYE, Species, species
 from ._common import normalise_method
@@ -71,11 +70,10 @@ def _check_M(name: str, M: FloatOrArray) -> None:
 def _warn_pressure(P: FloatOrArray, method: str) -> None:
     high = P > LOW_PRESSURE_LIMIT if isinstance(P, float) else bool(np.any(P > LOW_PRESSURE_LIMIT))
     if high:
-        warnings.warn(
+        warn_caller(
             f"{method}: P above {LOW_PRESSURE_LIMIT:g} Pa lies outside the low-pressure range "
             "of the method (about 10 bar); D*P falls at high pressure, so the estimate is high",
             EnvelopeWarning,
-            stacklevel=3,
         )
 
 
@@ -289,10 +287,9 @@ def _omega_d(Ts: FloatOrArray) -> FloatOrArray:
     lo, hi = _TSTAR_RANGE
     out_of = (Ts < lo or Ts > hi) if isinstance(Ts, float) else bool(np.any((Ts < lo) | (Ts > hi)))
     if out_of:
-        warnings.warn(
+        warn_caller(
             f"Neufeld collision integral: T* = kT/epsilon outside {lo}-{hi}, the range of the fit",
             EnvelopeWarning,
-            stacklevel=4,
         )
     A, B, C, D, E, F, G, H = _NEUFELD
     if isinstance(Ts, float):  # scalar fast path: math.exp avoids numpy's per-call overhead
@@ -907,3 +904,6 @@ def gas_diffusivity_in_mixture(
     Ds = [np.asarray(gas_diffusivity(solute, n, T, P, method)) for n in names]
     stacked = np.stack(np.broadcast_arrays(*Ds), axis=-1)
     return blanc(stacked, y)
+
+
+guard_module(globals(), __all__, unchecked=("fuller", "gas_diffusivity"))

@@ -14,7 +14,6 @@ errors are 10-20 %; check designs that affect safety against measured data.
 from __future__ import annotations
 
 import math
-import warnings
 from dataclasses import dataclass
 from typing import Final, overload
 
@@ -22,7 +21,7 @@ import numpy as np
 
 from .. import data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_positive, check_shapes, finish
+from .._validation import check_positive, check_shapes, finish, guard_module, warn_caller
 from ..errors import EnvelopeWarning, InputValueError
 from ..species import DEBYE, Species, species
 from ._common import normalise_method
@@ -70,11 +69,10 @@ def _cp(mu: FloatOrArray) -> FloatOrArray:
 def _warn_viscous(mu: FloatOrArray, method: str) -> None:
     high = mu > VISCOUS_SOLVENT_LIMIT if isinstance(mu, float) else bool(np.any(mu > VISCOUS_SOLVENT_LIMIT))
     if high:
-        warnings.warn(
+        warn_caller(
             f"{method}: solvent viscosity above {VISCOUS_SOLVENT_LIMIT * 1e3:g} mPa s lies "
             "outside the range the correlation was fitted on (not for viscous solvents)",
             EnvelopeWarning,
-            stacklevel=3,
         )
 
 
@@ -735,3 +733,6 @@ def liquid_diffusivity(
     if inp.form == "general":
         return hayduk_minhas(Tv, mu, Vb, inp.parachor_solute, Pb)
     return tyn_calus(Tv, mu, inp.V_solute, Vb, inp.parachor_solute, Pb)
+
+
+guard_module(globals(), __all__, unchecked=())

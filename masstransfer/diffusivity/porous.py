@@ -5,7 +5,7 @@ from __future__ import annotations
 import math
 
 from .._typing import ArrayLike, FloatOrArray
-from .._validation import check_positive, check_shapes, finish, in_range
+from .._validation import check_positive, check_shapes, finish, guard_module, in_range
 from ..species import R_GAS
 
 __all__ = ["bosanquet", "effective_diffusivity", "knudsen_diffusivity"]
@@ -146,3 +146,6 @@ def effective_diffusivity(
     in_range("tortuosity", tau, 1.0, math.inf, "pass a tortuosity factor of 1 or more")
     in_range("constriction", dl, 0.0, 1.0, "pass a constriction factor between 0 and 1")
     return finish(eps * dl * Dv / tau)
+
+
+guard_module(globals(), __all__, unchecked=())

@@ -5,7 +5,7 @@ from __future__ import annotations
 import numpy as np
 
 from .._typing import ArrayLike, FloatOrArray
-from .._validation import check_nonnegative, check_positive, check_shapes, finish
+from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard_module
 from ..errors import InputValueError
 from ..species import R_GAS
 
@@ -101,3 +101,6 @@ def arrhenius_parameters(T: ArrayLike, D: ArrayLike) -> tuple[float, float]:
         raise InputValueError("T needs at least two distinct temperatures to fit Ea")
     slope, intercept = np.polyfit(1.0 / Tv, np.log(Dv), 1)
     return float(np.exp(intercept)), float(-slope * R_GAS)
+
+
+guard_module(globals(), __all__, unchecked=())

@@ -1,0 +1,307 @@
+"""Robustness sweep: every public function, adversarial inputs, only finite results or our own errors.
+
+For each function a set of valid arguments is known; hypothesis replaces one of them with NaN,
+infinities, negatives, zero, empty or nested arrays, wrong types, or a large array of valid values.
+The call must either return finite numbers or raise ``MassTransferError``; any other exception, or
+a numpy RuntimeWarning (a silent NaN in the making), fails the test.
+"""
+
+from __future__ import annotations
+
+import dataclasses
+import os
+import warnings
+from typing import Any
+
+import numpy as np
+import pytest
+from hypothesis import HealthCheck, given, settings
+from hypothesis import strategies as st
+
+import masstransfer as mt
+from masstransfer import (
+    analogy,
+    barriers,
+    coefficients,
+    correlations,
+    diffusivity,
+    dimensionless,
+    flux,
+    properties,
+    transient,
+    wet_surface,
+)
+
+_PET = barriers.Layer(12e-6, permeability=1e-17)
+_REC = correlations.get("sphere-ranz-marshall")
+_HAUSEN = correlations.get("duct-entry-hausen")
+
+# (name, function, valid keyword arguments)
+CASES: list[tuple[str, Any, dict[str, Any]]] = [
+    ("species", mt.species, {"identifier": "toluene"}),
+    (
+        "fuller",
+        diffusivity.fuller,
+        {"T": 300.0, "P": 1e5, "M_a": 0.018, "M_b": 0.029, "v_a": 13.1, "v_b": 19.7},
+    ),
+    (
+        "chapman_enskog",
+        diffusivity.chapman_enskog,
+        {"T": 300.0, "P": 1e5, "M_a": 0.028, "M_b": 0.032, "sigma_ab": 3.6e-10, "epsilon_ab_k": 90.0},
+    ),
+    (
+        "wilke_lee",
+        diffusivity.wilke_lee,
+        {"T": 300.0, "P": 1e5, "M_a": 0.028, "M_b": 0.032, "sigma_ab": 3.6e-10, "epsilon_ab_k": 90.0},
+    ),
+    (
+        "brokaw",
+        diffusivity.brokaw,
+        {
+            "T": 323.0,
+            "P": 1e5,
+            "M_a": 0.05,
+            "M_b": 0.064,
+            "Vb_a": 5e-5,
+            "Vb_b": 4.4e-5,
+            "Tb_a": 249.0,
+            "Tb_b": 263.0,
+            "dipole_a": 6e-30,
+            "dipole_b": 5e-30,
+        },
+    ),
+    ("blanc", diffusivity.blanc, {"D_binary": [2e-5, 1e-5], "mole_fractions": [0.5, 0.5]}),
+    ("neufeld", diffusivity.neufeld_collision_integral, {"T_star": 1.5}),
+    (
+        "rescale",
+        diffusivity.rescale_gas_diffusivity,
+        {"D_ref": 2.6e-5, "T_ref": 298.0, "P_ref": 1e5, "T": 350.0},
+    ),
+    (
+        "gas_diffusivity",
+        diffusivity.gas_diffusivity,
+        {"solute": "water", "carrier": "air", "T": 300.0, "P": 1e5},
+    ),
+    (
+        "gas_diffusivity_ce",
+        diffusivity.gas_diffusivity,
+        {"solute": "water", "carrier": "air", "T": 300.0, "method": "chapman-enskog"},
+    ),
+    (
+        "gas_mixture",
+        diffusivity.gas_diffusivity_in_mixture,
+        {"solute": "water", "carrier": {"nitrogen": 0.8, "oxygen": 0.2}, "T": 300.0},
+    ),
+    ("fuller_volume", diffusivity.fuller_volume, {"sp": "benzene"}),
+    (
+        "wilke_chang",
+        diffusivity.wilke_chang,
+        {"T": 298.0, "mu_solvent": 9e-4, "M_solvent": 0.018, "V_solute": 1e-4},
+    ),
+    ("hm_aqueous", diffusivity.hayduk_minhas_aqueous, {"T": 298.0, "mu_water": 9e-4, "V_solute": 1e-4}),
+    ("hm_paraffin", diffusivity.hayduk_minhas_paraffin, {"T": 298.0, "mu_solvent": 3e-4, "V_solute": 1e-4}),
+    (
+        "hm_general",
+        diffusivity.hayduk_minhas,
+        {
+            "T": 298.0,
+            "mu_solvent": 6e-4,
+            "V_solvent": 1e-4,
+            "parachor_solute": 3e-5,
+            "parachor_solvent": 4e-5,
+        },
+    ),
+    (
+        "tyn_calus",
+        diffusivity.tyn_calus,
+        {
+            "T": 298.0,
+            "mu_solvent": 6e-4,
+            "V_solute": 7e-5,
+            "V_solvent": 1e-4,
+            "parachor_solute": 3e-5,
+            "parachor_solvent": 4e-5,
+        },
+    ),
+    ("stokes_einstein", diffusivity.stokes_einstein, {"T": 298.0, "mu_solvent": 9e-4, "radius": 1e-8}),
+    (
+        "liquid_diffusivity",
+        diffusivity.liquid_diffusivity,
+        {"solute": "benzene", "solvent": "water", "T": 298.0},
+    ),
+    ("liquid_inputs", diffusivity.liquid_diffusivity_inputs, {"solute": "water", "solvent": "ethanol"}),
+    ("knudsen", diffusivity.knudsen_diffusivity, {"T": 300.0, "pore_diameter": 1e-8, "M": 0.032}),
+    ("bosanquet", diffusivity.bosanquet, {"D_molecular": 2e-5, "D_knudsen": 2e-6}),
+    ("effective", diffusivity.effective_diffusivity, {"D": 1e-6, "porosity": 0.4, "tortuosity": 3.0}),
+    ("arrhenius_D", diffusivity.arrhenius_diffusivity, {"T": 1000.0, "D0": 2e-5, "Ea": 1.5e5}),
+    ("arrhenius_fit", diffusivity.arrhenius_parameters, {"T": [900.0, 1000.0], "D": [1e-12, 5e-12]}),
+    ("reynolds", dimensionless.reynolds, {"V": 1.0, "L": 0.1, "nu": 1.5e-5}),
+    ("prandtl", dimensionless.prandtl, {"cp": 1007.0, "k": 0.026, "mu": 1.8e-5}),
+    ("schmidt", dimensionless.schmidt, {"D": 2.6e-5, "nu": 1.6e-5}),
+    (
+        "grashof_solutal",
+        dimensionless.grashof_solutal,
+        {"L": 0.1, "rho_surface": 1.15, "rho_bulk": 1.18, "nu": 1.6e-5},
+    ),
+    ("grashof_thermal", dimensionless.grashof_thermal, {"L": 0.1, "beta": 3e-3, "dT": 10.0, "nu": 1.6e-5}),
+    (
+        "archimedes",
+        dimensionless.archimedes,
+        {"d": 2e-3, "rho_fluid": 998.0, "rho_particle": 1.2, "mu": 1e-3},
+    ),
+    ("biot_mass", dimensionless.biot_mass, {"k_c": 1e-4, "L": 2e-3, "D_solid": 1e-10}),
+    ("graetz", dimensionless.graetz, {"Re": 1000.0, "Pr": 5.0, "D": 0.01, "x": 1.0}),
+    ("record_nusselt", _REC.nusselt, {"Re": 50.0, "Pr": 0.7}),
+    ("record_sherwood", _REC.sherwood, {"Re": 50.0, "Sc": 0.7}),
+    ("hausen", _HAUSEN.nusselt, {"Re": 500.0, "Pr": 0.7, "L_over_D": 20.0}),
+    ("gnielinski", correlations.get("duct-gnielinski").nusselt, {"Re": 2e4, "Pr": 3.0}),
+    ("find", correlations.find, {"geometry": "sphere", "Re": 50.0, "Sc": 1.0}),
+    ("get", correlations.get, {"slug": "duct-gnielinski"}),
+    ("friction", correlations.darcy_friction_smooth, {"Re": 1e5}),
+    (
+        "k_from_h",
+        analogy.mass_transfer_coefficient_from_heat,
+        {"h": 30.0, "rho": 1.2, "cp": 1007.0, "Pr": 0.7, "Sc": 0.6},
+    ),
+    (
+        "h_from_k",
+        analogy.heat_transfer_coefficient_from_mass,
+        {"k_c": 0.03, "rho": 1.2, "cp": 1007.0, "Pr": 0.7, "Sc": 0.6},
+    ),
+    ("sh_from_nu", analogy.sherwood_from_nusselt, {"Nu": 100.0, "Pr": 0.7, "Sc": 0.6}),
+    ("von_karman", analogy.stanton_von_karman, {"f_darcy": 0.02, "Pr": 0.7}),
+    ("prandtl_taylor", analogy.stanton_prandtl_taylor, {"f_darcy": 0.02, "Pr": 0.7}),
+    ("lewis", analogy.lewis_relation, {"Pr": 0.7, "Sc": 0.6}),
+    ("psychrometric", analogy.psychrometric_ratio, {"h": 30.0, "k_Y": 0.03, "c_s": 1020.0}),
+    (
+        "mass_from_heat",
+        analogy.mass_transfer_from_heat,
+        {"h": 30.0, "solute": "water", "carrier": "air", "T": 320.0},
+    ),
+    ("log_mean", coefficients.log_mean, {"a": 2.0, "b": 1.0}),
+    ("ky_from_kc", coefficients.ky_from_kc, {"k_c": 0.02, "T": 300.0, "P": 1e5}),
+    ("F_from_k", coefficients.F_from_k, {"k": 0.5, "y_BM": 0.9}),
+    ("overall_gas", coefficients.overall_gas_coefficient, {"k_y": 1.0, "k_x": 2.0, "m": 40.0}),
+    ("fick", flux.fick_flux, {"D": 1e-9, "c1": 10.0, "c2": 2.0, "thickness": 1e-3}),
+    ("profile", flux.fick_profile, {"x": 2e-4, "c1": 10.0, "c2": 2.0, "thickness": 1e-3}),
+    (
+        "stagnant",
+        flux.stagnant_film_flux,
+        {"D": 1.87e-5, "T": 273.15, "P": 1e5, "p1": 13000.0, "p2": 6500.0, "thickness": 0.002},
+    ),
+    (
+        "equimolar",
+        flux.equimolar_flux,
+        {"D": 1.87e-5, "T": 273.15, "p1": 13000.0, "p2": 6500.0, "thickness": 0.002},
+    ),
+    ("high_flux_correction", flux.high_flux_correction, {"phi": 0.5}),
+    ("high_flux_rate", flux.high_flux_rate, {"F": 1.0, "y_surface": 0.3, "y_bulk": 0.05}),
+    ("ackermann", flux.ackermann_correction, {"N": 0.05, "cp_molar": 34.0, "h": 30.0}),
+    ("wet_bulb", wet_surface.wet_bulb_temperature, {"T": 303.15, "relative_humidity": 0.5}),
+    (
+        "wet_surface",
+        wet_surface.wet_surface_temperature,
+        {"liquid": "ethanol", "gas": "air", "T": 300.0, "y_bulk": 0.0},
+    ),
+    ("convert_permeability", barriers.convert_permeability, {"value": 1.0, "from_unit": "barrer"}),
+    ("convert_flux", barriers.convert_flux, {"value": 1.0, "from_unit": "g(H2O)/(m2 day)"}),
+    ("permeability", barriers.permeability, {"D": 1e-12, "S": 1e-4}),
+    ("steady_flux", barriers.steady_flux, {"layers": [_PET], "p_high": 2e4}),
+    ("b_arrhenius", barriers.arrhenius, {"T": 310.0, "value_ref": 1.0, "T_ref": 298.0, "E": 4e4}),
+    ("time_lag", barriers.time_lag, {"thickness": 5e-5, "D": 1e-12}),
+    ("lag_to_D", barriers.diffusivity_from_time_lag, {"thickness": 5e-5, "lag": 400.0}),
+    ("permeation_curve", barriers.permeation_curve, {"t": 1000.0, "thickness": 5e-5, "D": 1e-12}),
+    ("ingress", barriers.oxygen_ingress, {"area": 0.05, "layers": [_PET], "t": 86400.0}),
+    ("uptake", transient.fractional_uptake, {"shape": "sphere", "t": 100.0, "D": 1e-10, "size": 1e-3}),
+    (
+        "uptake_biot",
+        transient.fractional_uptake,
+        {"shape": "slab", "t": 100.0, "D": 1e-10, "size": 1e-3, "biot": 2.0},
+    ),
+    (
+        "c_profile",
+        transient.concentration_profile,
+        {"shape": "cylinder", "position": 5e-4, "t": 1e3, "D": 1e-10, "size": 1e-3},
+    ),
+    ("semi_inf", transient.semi_infinite_concentration, {"x": 1e-4, "t": 1e3, "D": 1e-10, "c_surface": 1.0}),
+    ("semi_inf_uptake", transient.semi_infinite_uptake, {"t": 1e3, "D": 1e-10, "c_surface": 1.0, "k": 1e-7}),
+    ("half_time", transient.half_time, {"shape": "slab", "D": 1e-10, "size": 1e-3}),
+    ("gas_model", properties.gas_model, {"gas": "nitrogen"}),
+    ("liquid_model", properties.liquid_model, {"liquid": "water"}),
+    ("henry", properties.henry_constant, {"solute": "oxygen", "solvent": "water", "T": 298.0}),
+    ("parachor", properties.parachor, {"liquid": "benzene"}),
+    ("air_viscosity", properties.gas_model("air").viscosity, {"T": 300.0}),
+    ("water_density", properties.liquid_model("water").density, {"T": 300.0}),
+]
+
+_BAD = [
+    float("nan"),
+    float("inf"),
+    -float("inf"),
+    -1.0,
+    0.0,
+    -0.0,
+    1e308,
+    -1e-300,
+    np.array([]),
+    np.array([[1.0, np.nan]]),
+    "abc",
+    "",
+    None,
+    True,
+    1 + 2j,
+    [1.0, "x"],
+    object(),
+    {"a": 1},
+    np.array(["a", "b"]),
+    np.array([1, 2], dtype=np.int64),
+]
+
+
+def _finite(value: Any) -> bool:
+    if value is None or isinstance(value, str | bool):
+        return True
+    if dataclasses.is_dataclass(value) and not isinstance(value, type):
+        return all(_finite(getattr(value, f.name)) for f in dataclasses.fields(value))
+    if isinstance(value, dict | list | tuple):
+        return all(_finite(v) for v in (value.values() if isinstance(value, dict) else value))
+    if isinstance(value, int | float | np.ndarray | np.generic):
+        arr = np.asarray(value)
+        return arr.dtype.kind not in "fc" or bool(np.all(np.isfinite(arr)))
+    return True  # records, models, species: objects, not numbers
+
+
+def _call(fn: Any, kwargs: dict[str, Any]) -> None:
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore", mt.MassTransferWarning)  # envelope warnings are allowed
+        warnings.simplefilter(
+            "error", RuntimeWarning
+        )  # a numpy overflow/invalid is a silent NaN in the making
+        try:
+            out = fn(**kwargs)
+        except mt.MassTransferError:
+            return
+    assert _finite(out), f"non-finite result {out!r}"
+
+
+@pytest.mark.parametrize(("name", "fn", "valid"), CASES, ids=[c[0] for c in CASES])
+def test_valid_call_is_finite(name, fn, valid):
+    _call(fn, valid)
+
+
+@pytest.mark.parametrize(("name", "fn", "valid"), CASES, ids=[c[0] for c in CASES])
+@settings(
+    max_examples=int(os.environ.get("ROBUSTNESS_EXAMPLES", "25")),
+    suppress_health_check=[HealthCheck.function_scoped_fixture, HealthCheck.too_slow],
+    deadline=None,
+)
+@given(data=st.data())
+def test_adversarial_inputs(name, fn, valid, data):
+    key = data.draw(st.sampled_from(sorted(valid)), label="argument")
+    choices = [*_BAD, "LARGE"]
+    bad = data.draw(st.sampled_from(choices), label="value")
+    if isinstance(bad, str) and bad == "LARGE":  # a large array of the valid value
+        v = valid[key]
+        bad = np.full(20_000, v) if isinstance(v, int | float) and not isinstance(v, bool) else v
+    kwargs = {**valid, key: bad}
+    _call(fn, kwargs)
