@@ -275,13 +275,19 @@ def guard(fn: Callable[_P, _R], check_output: bool = True) -> Callable[_P, _R]:
     return wrapper
 
 
-def guard_module(namespace: dict[str, Any], names: Any, unchecked: tuple[str, ...] = ()) -> None:
+def guard_module(
+    namespace: dict[str, Any], names: Any, unchecked: tuple[str, ...] = (), unguarded: tuple[str, ...] = ()
+) -> None:
     """Guard every public function of a module in place (see :func:`guard`).
 
     Functions in ``unchecked`` skip the output check: their results are finite by construction
-    for inputs inside :data:`MAGNITUDE_LIMIT`, and they sit in hot loops.
+    for inputs inside :data:`MAGNITUDE_LIMIT`, and they sit in hot loops.  Functions in
+    ``unguarded`` validate everything themselves and are left unwrapped, to keep a scalar call
+    at about a microsecond; the robustness sweep covers them like the rest.
     """
     for n in names:
         obj = namespace.get(n)
+        if n in unguarded:
+            continue
         if inspect.isfunction(obj) and obj.__module__ == namespace["__name__"]:
             namespace[n] = guard(obj, check_output=n not in unchecked)

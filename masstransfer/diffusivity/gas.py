@@ -733,7 +733,12 @@ _METHOD_KEYS: Final = {name: name for name in GAS_METHODS}
 
 def _prepare(method: str, solute: str | Species, carrier: str | Species) -> tuple[float, ...]:
     key = (method, solute, carrier)
-    got = _PREPARED.get(key)
+    try:
+        got = _PREPARED.get(key)
+    except TypeError:  # an unhashable identifier: let species() explain what it expects
+        species(solute)
+        species(carrier)
+        raise
     if got is not None:
         return got
     a, b = species(solute), species(carrier)
@@ -842,6 +847,10 @@ def gas_diffusivity(
     prepared = _prepare(m, solute, carrier)
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
+    if m == "fuller" and isinstance(Tv, float) and isinstance(Pv, float):  # scalar fast path
+        if Pv > LOW_PRESSURE_LIMIT:
+            _warn_pressure(Pv, "gas_diffusivity(method='fuller')")
+        return float(prepared[0] * Tv**1.75 / Pv)
     check_shapes(T=Tv, P=Pv)
     _warn_pressure(Pv, f"gas_diffusivity(method={m!r})")
     if m == "fuller":
@@ -906,4 +915,4 @@ def gas_diffusivity_in_mixture(
     return blanc(stacked, y)
 
 
-guard_module(globals(), __all__, unchecked=("fuller", "gas_diffusivity"))
+guard_module(globals(), __all__, unchecked=("fuller",), unguarded=("gas_diffusivity",))

@@ -13,6 +13,7 @@ errors are 10-20 %; check designs that affect safety against measured data.
 
 from __future__ import annotations
 
+import functools
 import math
 from dataclasses import dataclass
 from typing import Final, overload
@@ -560,6 +561,12 @@ def liquid_diffusivity_inputs(
     """
     m = normalise_method(method, LIQUID_METHODS)
     a, b = species(solute), species(solvent)
+    return _inputs(a, b, m)
+
+
+@functools.lru_cache(maxsize=512)
+def _inputs(a: Species, b: Species, m: str) -> LiquidDiffusivityInputs:
+    """Apply the special-case rules once per (solute, solvent, method)."""
     notes: list[str] = []
     Va = a.require("Vb", m)
     phi = data.WILKE_CHANG_ASSOCIATION.get(b.CAS or "", 1.0)
