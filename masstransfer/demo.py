@@ -68,14 +68,14 @@ def _falling_rate() -> list[str]:
     from .transient import fractional_release, half_time
 
     D = 5e-10  # m^2/s, effective moisture diffusivity of the clay body (invented)
-    half = 4e-3  # m, half-thickness of an 8 mm tile dried from both faces (invented)
+    half = 4e-3  # m, half-thickness of an 8 mm ware wall dried from both faces (invented)
     t_h = np.array([1.0, 2.0, 4.0, 8.0, 16.0])
     released = np.asarray(fractional_release("slab", t_h * 3600.0, D, half))
     lines = [
         "",
-        "Falling-rate period: moisture diffusing out of the tile body",
+        "Falling-rate period: moisture diffusing out of the ware body",
         "-" * 78,
-        f"  effective D in the body (invented) {D:.1e} m^2/s; tile 8 mm thick, dried from both faces",
+        f"  effective D in the body (invented) {D:.1e} m^2/s; 8 mm wall, dried from both faces",
         f"  half of the removable moisture is gone after {float(half_time('slab', D, half)) / 3600:.2f} h",
         "  time [h]   " + "  ".join(f"{t:5.1f}" for t in t_h),
         "  released   " + "  ".join(f"{r:5.3f}" for r in released),
