@@ -33,3 +33,25 @@ def test_quick_start_has_exactly_two_commands():
     block = text[text.index("```sh", text.index("## Quick start")) + 5 :]
     block = block[: block.index("```")]
     assert len([line for line in block.splitlines() if line.strip()]) == 2
+
+
+def test_tour_blocks_run_in_order():
+    import warnings
+
+    import masstransfer as mt
+
+    text = README.read_text(encoding="utf-8")
+    tour = text[text.index("## A short tour") : text.index("## Testing your own scripts")]
+    blocks = []
+    rest = tour
+    while "```python" in rest:
+        start = rest.index("```python") + len("```python")
+        end = rest.index("```", start)
+        blocks.append(rest[start:end])
+        rest = rest[end + 3 :]
+    assert len(blocks) >= 4
+    namespace: dict[str, object] = {}
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore", mt.EnvelopeWarning)  # the tour shows one on purpose
+        for block in blocks:
+            exec(compile(block, str(README), "exec"), namespace)
