@@ -121,7 +121,7 @@ AIR: Final = MappingProxyType(
     {
         "molar_mass": 0.0289586,  # kg/mol
         "Tb": 78.9,  # K (dew point at 1 atm)
-        "Tc": 132.5306,  # K (maxcondentherm)
+        "Tc": 132.5306,  # K (critical point of the pseudo-pure fluid)
         "Pc": 3.786e6,  # Pa
         "omega": 0.0335,  # [-]
         "sigma": 3.711e-10,  # m
