@@ -30,11 +30,13 @@ from .analogy import (
     sherwood_from_nusselt,
 )
 from .diffusivity import (
+    DiffusivityReport,
     arrhenius_diffusivity,
     blanc,
     bosanquet,
     brokaw,
     chapman_enskog,
+    diffusivity_report,
     effective_diffusivity,
     fuller,
     fuller_volume,
@@ -79,6 +81,7 @@ def __getattr__(name: str) -> object:
 
 
 __all__ = [
+    "DiffusivityReport",
     "EnvelopeError",
     "EnvelopeWarning",
     "InputShapeError",
@@ -103,6 +106,7 @@ __all__ = [
     "correlations",
     "data",
     "diffusivity",
+    "diffusivity_report",
     "dimensionless",
     "effective_diffusivity",
     "errors",

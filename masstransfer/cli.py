@@ -37,6 +37,9 @@ def _parser() -> argparse.ArgumentParser:
     d.add_argument("medium", help="carrier gas (e.g. air) or solvent (e.g. water)")
     _state_args(d)
     d.add_argument("--method", default=None, help="estimation method (default: fuller / wilke-chang)")
+    d.add_argument(
+        "--explain", action="store_true", help="also print the method, accuracy and constants with sources"
+    )
 
     c = sub.add_parser(
         "coefficient",
@@ -131,11 +134,23 @@ def _diffusivity(args: argparse.Namespace) -> str:
             indent=2,
         )
     where = f"gas at {args.pressure:g} Pa" if args.phase == "gas" else "liquid, infinite dilution"
-    return _table(
-        f"Diffusivity of {args.solute} in {args.medium} ({where}); method: {method}",
-        ["T [K]", "D [m^2/s]", "D [cm^2/s]"],
-        [[f"{t:.2f}", f"{d:.4e}", f"{d * 1e4:.4e}"] for t, d in zip(T, D, strict=True)],
-        "Estimates; check safety-relevant designs against measured data.",
+    if args.explain:
+        from .diffusivity import diffusivity_report
+
+        report = diffusivity_report(
+            args.solute, args.medium, T, args.pressure, phase=args.phase, method=method
+        ).summary()
+    else:
+        report = ""
+    return (
+        report
+        + ("\n\n" if report else "")
+        + _table(
+            f"Diffusivity of {args.solute} in {args.medium} ({where}); method: {method}",
+            ["T [K]", "D [m^2/s]", "D [cm^2/s]"],
+            [[f"{t:.2f}", f"{d:.4e}", f"{d * 1e4:.4e}"] for t, d in zip(T, D, strict=True)],
+            "" if report else "Estimates; check safety-relevant designs against measured data.",
+        )
     )
 
 

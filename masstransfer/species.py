@@ -399,7 +399,10 @@ def _air() -> Species:
         dipole=float(a["dipole"]),  # type: ignore[arg-type]
         Vb=float(a["Vb"]),  # type: ignore[arg-type]
         fuller_volume=data.FULLER_SPECIAL_VOLUMES["air"],
-        sources=dict.fromkeys(("molar_mass", "Tb", "Tc", "Pc", "omega", "sigma", "epsilon_k", "Vb"), src),
+        sources={
+            **dict.fromkeys(("molar_mass", "Tb", "Tc", "Pc", "omega", "sigma", "epsilon_k", "Vb"), src),
+            "fuller_volume": "Fuller et al. (1969) special-molecule volume",
+        },
     )
 
 

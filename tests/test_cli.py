@@ -27,6 +27,13 @@ def test_diffusivity_json(capsys):
     assert data["D_m2_per_s"][1] > data["D_m2_per_s"][0]
 
 
+def test_explain_prints_sources(capsys):
+    assert main(["diffusivity", "toluene", "air", "-T", "300", "--explain"]) == 0
+    out = capsys.readouterr().out
+    assert "fuller_volume" in out
+    assert "chemicals" in out
+
+
 def test_liquid_table(capsys):
     assert main(["diffusivity", "benzene", "water", "-T", "298.15", "--phase", "liquid"]) == 0
     assert "m^2/s" in capsys.readouterr().out

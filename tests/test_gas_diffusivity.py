@@ -227,3 +227,17 @@ def test_blanc_mixture_reduces_to_binary_and_to_harmonic_mean():
 def test_high_pressure_warns():
     with pytest.warns(mt.EnvelopeWarning, match="low-pressure"):
         mt.gas_diffusivity("methane", "nitrogen", 300.0, 5e6)
+
+
+def test_report_records_method_constants_and_warnings():
+    r = mt.diffusivity_report("toluene", "air", 350.0)
+    assert r.value == mt.gas_diffusivity("toluene", "air", 350.0)
+    assert r.constants["solute"]["fuller_volume"][0] == pytest.approx(mt.fuller_volume("toluene"))
+    assert "Fuller" in r.accuracy
+    assert "chemicals" in r.constants["solute"]["molar_mass"][1]
+    high = mt.diffusivity_report("methane", "nitrogen", 300.0, 5e6)
+    assert any("low-pressure" in w for w in high.warnings)
+    liq = mt.diffusivity_report("water", "ethanol", 298.15, phase="liquid", method="tyn-calus")
+    assert liq.value == mt.liquid_diffusivity("water", "ethanol", 298.15, method="tyn-calus")
+    assert "dimer" in liq.notes[0]
+    assert "measured data" in liq.summary()

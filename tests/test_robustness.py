@@ -93,6 +93,7 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
         {"solute": "water", "carrier": {"nitrogen": 0.8, "oxygen": 0.2}, "T": 300.0},
     ),
     ("fuller_volume", diffusivity.fuller_volume, {"sp": "benzene"}),
+    ("report", diffusivity.diffusivity_report, {"solute": "water", "medium": "air", "T": 300.0}),
     (
         "wilke_chang",
         diffusivity.wilke_chang,

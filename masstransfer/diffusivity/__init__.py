@@ -28,11 +28,13 @@ from .liquid import (
     wilke_chang,
 )
 from .porous import bosanquet, effective_diffusivity, knudsen_diffusivity
+from .report import DiffusivityReport, diffusivity_report
 from .solid import arrhenius_diffusivity, arrhenius_parameters
 
 __all__ = [
     "GAS_METHODS",
     "LIQUID_METHODS",
+    "DiffusivityReport",
     "LiquidDiffusivityInputs",
     "arrhenius_diffusivity",
     "arrhenius_parameters",
@@ -40,6 +42,7 @@ __all__ = [
     "bosanquet",
     "brokaw",
     "chapman_enskog",
+    "diffusivity_report",
     "effective_diffusivity",
     "fuller",
     "fuller_volume",

@@ -1,0 +1,208 @@
+"""A diffusivity with the statement behind it: method, accuracy, constants and their sources."""
+
+from __future__ import annotations
+
+import warnings
+from collections.abc import Mapping
+from dataclasses import dataclass
+from types import MappingProxyType
+from typing import Literal
+
+from .._typing import ArrayLike, FloatOrArray
+from .._validation import guard_module
+from ..errors import InputValueError
+from ..species import Species, species
+from ._common import normalise_method
+from .gas import GAS_METHODS, fuller_volume, gas_diffusivity
+from .liquid import LIQUID_METHODS, liquid_diffusivity, liquid_diffusivity_inputs
+
+__all__ = ["DiffusivityReport", "diffusivity_report"]
+
+_GAS_CONSTANTS = {
+    "fuller": ("molar_mass", "fuller_volume"),
+    "chapman-enskog": ("molar_mass", "sigma", "epsilon_k"),
+    "wilke-lee": ("molar_mass", "sigma", "epsilon_k", "Tb", "Vb"),
+    "brokaw": ("molar_mass", "Tb", "Vb", "dipole"),
+}
+
+
+@dataclass(frozen=True)
+class DiffusivityReport:
+    """A diffusivity and what it rests on.
+
+    Attributes
+    ----------
+    value : float or numpy.ndarray
+        Diffusivity [m^2/s].
+    solute, medium, phase, method : str
+        What was computed, and how.
+    T : float or numpy.ndarray
+        Temperature [K].
+    P : float or numpy.ndarray or None
+        Pressure [Pa] (gas phase).
+    accuracy : str
+        The typical error the method's sources report.
+    constants : mapping
+        For each species, the constants the method used, as (value, source).
+    notes : tuple of str
+        Special-case rules applied (liquids).
+    warnings : tuple of str
+        Envelope warnings raised by the computation.
+
+    """
+
+    value: FloatOrArray
+    solute: str
+    medium: str
+    phase: str
+    method: str
+    T: FloatOrArray
+    P: FloatOrArray | None
+    accuracy: str
+    constants: Mapping[str, Mapping[str, tuple[float | None, str]]]
+    notes: tuple[str, ...]
+    warnings: tuple[str, ...]
+
+    def summary(self) -> str:
+        """Render a short plain-text statement for a calculation note.
+
+        Returns
+        -------
+        str
+            Several lines: value, method and accuracy, constants with sources,
+            notes and warnings, and the standing caution.
+
+        References
+        ----------
+        See the method's entry in ``GAS_METHODS`` or ``LIQUID_METHODS``.
+
+        Examples
+        --------
+        >>> "Fuller" in diffusivity_report("water", "air", 300.0).summary()
+        True
+
+        """
+        import numpy as np
+
+        v = np.atleast_1d(np.asarray(self.value, dtype=float))
+        shown = f"{v[0]:.4g} m^2/s" if v.size == 1 else f"{v.min():.4g} to {v.max():.4g} m^2/s"
+        lines = [
+            f"D({self.solute} in {self.medium}, {self.phase}) = {shown}",
+            f"method: {self.accuracy}",
+            "constants used (SI units) and their sources:",
+        ]
+        for who, consts in self.constants.items():
+            for name, (val, src) in consts.items():
+                lines.append(f"  {who}.{name} = {val!r} ({src})")
+        lines += [f"note: {n}" for n in self.notes]
+        lines += [f"warning: {w}" for w in self.warnings]
+        lines.append("An estimate: check safety-relevant designs against measured data.")
+        return "\n".join(lines)
+
+
+def _constants(sp: Species, names: tuple[str, ...]) -> dict[str, tuple[float | None, str]]:
+    out: dict[str, tuple[float | None, str]] = {}
+    for n in names:
+        if n == "fuller_volume":
+            src = sp.sources.get("fuller_volume", "Fuller et al. (1969) atomic and ring increments")
+            out[n] = (fuller_volume(sp), src)
+        else:
+            v = getattr(sp, n)
+            out[n] = (
+                None if v is None else float(v),
+                sp.sources.get(n, "user" if v is not None else "absent"),
+            )
+    return out
+
+
+def diffusivity_report(
+    solute: str | Species,
+    medium: str | Species,
+    T: ArrayLike,
+    P: ArrayLike = 101325.0,
+    *,
+    phase: Literal["gas", "liquid"] = "gas",
+    method: str | None = None,
+) -> DiffusivityReport:
+    """Compute a diffusivity and record the method, accuracy, constants and warnings behind it.
+
+    Parameters
+    ----------
+    solute : str or Species
+        Diffusing species.
+    medium : str or Species
+        Carrier gas or solvent.
+    T : float or array_like
+        Temperature [K].
+    P : float or array_like
+        Pressure [Pa] (gas phase only).
+    phase : {'gas', 'liquid'}
+        Phase of the medium.
+    method : str, optional
+        Method name; ``'fuller'`` or ``'wilke-chang'`` by default.
+
+    Returns
+    -------
+    DiffusivityReport
+        The value with its method, stated accuracy, the constants used with
+        their sources, special-case notes and warnings.
+
+    Notes
+    -----
+    Same numbers as :func:`gas_diffusivity` and :func:`liquid_diffusivity`;
+    the report is what a calculation note needs to defend them.
+
+    References
+    ----------
+    Poling, B. E., Prausnitz, J. M., & O'Connell, J. P. (2001). *The
+    Properties of Gases and Liquids*, 5th ed., Chapter 11.
+
+    Examples
+    --------
+    >>> r = diffusivity_report("toluene", "air", 350.0)
+    >>> r.method, round(r.value * 1e6, 2)
+    ('fuller', 10.67)
+
+    """
+    if phase not in ("gas", "liquid"):
+        raise InputValueError(f"phase={phase!r} must be 'gas' or 'liquid'")
+    a, b = species(solute), species(medium)
+    notes: tuple[str, ...]
+    with warnings.catch_warnings(record=True) as caught:
+        warnings.simplefilter("always")
+        if phase == "gas":
+            m = normalise_method(method or "fuller", GAS_METHODS)
+            value = gas_diffusivity(a, b, T, P, m)
+            names = _GAS_CONSTANTS[m]
+            consts = {"solute": _constants(a, names), "medium": _constants(b, names)}
+            accuracy, notes, P_used = GAS_METHODS[m], (), P
+        else:
+            m = normalise_method(method or "wilke-chang", LIQUID_METHODS)
+            value = liquid_diffusivity(a, b, T, m)
+            inp = liquid_diffusivity_inputs(a, b, m)
+            consts = {
+                "solute": {"Vb (as used)": (inp.V_solute, a.sources.get("Vb", "user"))},
+                "medium": {
+                    "molar_mass": (b.molar_mass, b.sources.get("molar_mass", "user")),
+                    "viscosity": (None, "thermo model via masstransfer.properties"),
+                },
+            }
+            if m == "wilke-chang":
+                consts["medium"]["association factor"] = (inp.phi, "Wilke & Chang (1955)")
+            accuracy, notes, P_used = LIQUID_METHODS[m], tuple(inp.notes), None
+    return DiffusivityReport(
+        value=value,
+        solute=a.name,
+        medium=b.name,
+        phase=phase,
+        method=m,
+        T=T,  # type: ignore[arg-type]
+        P=P_used,  # type: ignore[arg-type]
+        accuracy=accuracy,
+        constants=MappingProxyType({k: MappingProxyType(v) for k, v in consts.items()}),
+        notes=tuple(notes),
+        warnings=tuple(str(w.message) for w in caught),
+    )
+
+
+guard_module(globals(), __all__)
