@@ -12,6 +12,7 @@ import inspect
 import math
 import os
 import sys
+import types
 import warnings
 from collections.abc import Callable
 from typing import Any, ParamSpec, TypeVar
@@ -201,9 +202,9 @@ _PACKAGE_DIR = os.path.dirname(os.path.abspath(__file__))
 def warn_caller(message: str, category: type[Warning]) -> None:
     """Issue a warning attributed to the first frame outside this package (the user's code)."""
     level = 2  # stacklevel 2 is the caller of this helper
-    frame = sys._getframe(1)
+    frame: types.FrameType | None = sys._getframe(1)
     while frame is not None and os.path.abspath(frame.f_code.co_filename).startswith(_PACKAGE_DIR):
-        frame = frame.f_back  # type: ignore[assignment]
+        frame = frame.f_back
         level += 1
     warnings.warn(message, category, stacklevel=level)
 

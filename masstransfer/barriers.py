@@ -292,9 +292,12 @@ class Layer:
                 raise InputValueError(
                     f"Layer {self.name!r}: {name}={v!r} must be a finite positive number (SI)"
                 )
-        if self.permeability is None and (self.D is None or self.S is None):
+        if self.permeability is not None:
+            P = float(self.permeability)
+        elif self.D is not None and self.S is not None:
+            P = float(self.D) * float(self.S)
+        else:
             raise InputValueError(f"Layer {self.name!r}: give permeability, or both D and S")
-        P = self.permeability if self.permeability is not None else float(self.D) * float(self.S)  # type: ignore[arg-type]
         if (
             self.permeability is not None
             and self.D is not None

@@ -92,6 +92,11 @@ def demo_report() -> str:
         A short report with units: water-vapour and ethanol diffusivities in
         air along an invented kiln's drying zone, by two methods side by side.
 
+    References
+    ----------
+    The methods' references are in the docstrings of the functions the
+    report calls (gas_diffusivity, mass_transfer_from_heat, fractional_release).
+
     Examples
     --------
     >>> "Fuller" in demo_report()

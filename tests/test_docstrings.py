@@ -2,39 +2,20 @@
 
 from __future__ import annotations
 
+import importlib
 import inspect
+import pkgutil
 import re
 
 import pytest
 
 import masstransfer as mt
-from masstransfer import (
-    analogy,
-    barriers,
-    coefficients,
-    correlations,
-    diffusivity,
-    dimensionless,
-    flux,
-    properties,
-    species,
-    transient,
-    wet_surface,
-)
 
-_MODULES = [
-    mt,
-    analogy,
-    barriers,
-    coefficients,
-    correlations,
-    diffusivity,
-    dimensionless,
-    flux,
-    properties,
-    species,
-    transient,
-    wet_surface,
+# every public module of the package (names without a leading underscore), found, not listed
+_MODULES = [mt] + [
+    importlib.import_module(info.name)
+    for info in pkgutil.walk_packages(mt.__path__, prefix="masstransfer.")
+    if not any(part.startswith("_") for part in info.name.split("."))
 ]
 _UNIT = re.compile(r"\[[^\]]+\]")
 
@@ -71,7 +52,7 @@ def _documented_params(doc: str) -> dict[str, str]:
             current = m.group(1)
             params[current] = m.group(2) or ""
         elif current is not None:
-            params[current] += " " + line.strip()
+            params[current] += "\n" + line.strip()  # first line: the type; then the description
     # the next section header was captured as a parameter name; drop it
     for header in ("Returns", "Raises", "Notes", "References", "Examples", "Yields", "Attributes"):
         params.pop(header, None)
@@ -91,9 +72,9 @@ def test_docstring_matches_signature_and_has_units(qualname, func):
     documented = _documented_params(doc)
     assert set(documented) == set(names), f"{qualname}: documented {sorted(documented)} vs {names}"
     for name, text in documented.items():
-        head = text.split(" ", 1)[0] if text else ""
-        numeric = any(t in text.split(".")[0] for t in ("float", "array_like", "int"))
-        if numeric or head in ("float",):
+        type_line = text.split("\n", 1)[0]
+        numeric = bool(re.search(r"\b(float|int|array_like)\b", type_line))
+        if numeric:
             assert _UNIT.search(text), f"{qualname}: parameter {name} has no [unit]"
     assert "\nReferences\n----------" in doc, f"{qualname} has no References section"
     assert "\nExamples\n--------" in doc, f"{qualname} has no Examples section"

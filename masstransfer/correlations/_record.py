@@ -243,10 +243,11 @@ class Correlation:
         values: dict[str, FloatOrArray] = {}
         extremes: dict[str, tuple[float, float]] = {}
         for name, key in accepted.items():
+            default = self.parameters.get(key)
             if name in given:
                 v = as_float(name, given[name])
-            elif key in self.parameters and self.parameters[key] is not None:
-                v = float(self.parameters[key])  # type: ignore[arg-type]
+            elif default is not None:
+                v = float(default)
             else:
                 raise InputValueError(
                     f"correlation {self.slug!r} needs {name}; pass {name}=... "

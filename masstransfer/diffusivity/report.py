@@ -9,7 +9,7 @@ from types import MappingProxyType
 from typing import Literal
 
 from .._typing import ArrayLike, FloatOrArray
-from .._validation import guard_module
+from .._validation import check_positive, guard_module
 from ..errors import InputValueError
 from ..species import Species, species
 from ._common import normalise_method
@@ -167,18 +167,21 @@ def diffusivity_report(
     if phase not in ("gas", "liquid"):
         raise InputValueError(f"phase={phase!r} must be 'gas' or 'liquid'")
     a, b = species(solute), species(medium)
+    Tv = check_positive("T", T)
+    Pv = check_positive("P", P)
     notes: tuple[str, ...]
+    P_used: FloatOrArray | None
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
         if phase == "gas":
             m = normalise_method(method or "fuller", GAS_METHODS)
-            value = gas_diffusivity(a, b, T, P, m)
+            value = gas_diffusivity(a, b, Tv, Pv, m)
             names = _GAS_CONSTANTS[m]
             consts = {"solute": _constants(a, names), "medium": _constants(b, names)}
-            accuracy, notes, P_used = GAS_METHODS[m], (), P
+            accuracy, notes, P_used = GAS_METHODS[m], (), Pv
         else:
             m = normalise_method(method or "wilke-chang", LIQUID_METHODS)
-            value = liquid_diffusivity(a, b, T, m)
+            value = liquid_diffusivity(a, b, Tv, m)
             inp = liquid_diffusivity_inputs(a, b, m)
             consts = {
                 "solute": {"Vb (as used)": (inp.V_solute, a.sources.get("Vb", "user"))},
@@ -196,8 +199,8 @@ def diffusivity_report(
         medium=b.name,
         phase=phase,
         method=m,
-        T=T,  # type: ignore[arg-type]
-        P=P_used,  # type: ignore[arg-type]
+        T=Tv,
+        P=P_used,
         accuracy=accuracy,
         constants=MappingProxyType({k: MappingProxyType(v) for k, v in consts.items()}),
         notes=tuple(notes),
