@@ -96,9 +96,9 @@ def bench_liquid_viscosity() -> tuple[str, float, float, str]:
 
 
 def _bench_record(slug: str, bare_expr, inputs: dict) -> tuple[str, float, float, str]:
-    from masstransfer import correlations
+    from masstransfer import surface
 
-    rec = correlations.get(slug)
+    rec = surface.correlation(slug)
 
     def ours():
         return rec.nusselt(**inputs)
@@ -131,9 +131,9 @@ def bench_records() -> list[tuple[str, float, float, str]]:
             {"Ra": Ra, "Pr": Pr},
         ),
     ]
-    from masstransfer import correlations
+    from masstransfer import surface
 
-    rec = correlations.get("sphere-ranz-marshall")
+    rec = surface.correlation("sphere-ranz-marshall")
     import math
 
     def bare_scalar():
@@ -161,7 +161,7 @@ def bench_analogy_numeric() -> tuple[str, float, float, str]:
         return h / (rho * cp) * (Pr / Sc) ** (2 / 3)
 
     def ours():
-        return mt.mass_transfer_coefficient_from_heat(h, rho=rho, cp=cp, Pr=Pr, Sc=Sc)
+        return mt.surface.mass_transfer_coefficient_from_heat(h, rho=rho, cp=cp, Pr=Pr, Sc=Sc)
 
     np.testing.assert_allclose(ours(), bare(), rtol=1e-14)
     t_base, t_ours = best(bare, 5), best(ours, 5)
@@ -198,7 +198,7 @@ def bench_analogy_resolved() -> tuple[str, float, float, str]:
 
 
 def bench_uptake() -> tuple[str, float, float, str]:
-    from masstransfer import transient
+    from masstransfer import bodies
 
     t = np.geomspace(1.0, 1e6, 1_000_000)
     D, a = 1e-11, 1e-3
@@ -210,7 +210,7 @@ def bench_uptake() -> tuple[str, float, float, str]:
         return 1 - np.sum(8 / (m**2 * np.pi**2) * np.exp(-(m**2) * np.pi**2 * T / 4), axis=0)
 
     def ours():
-        return transient.fractional_uptake("slab", t, D, a)
+        return bodies.fractional_uptake("slab", t, D, a)
 
     sel = T > 0.05  # where 50 terms have converged, the two agree
     np.testing.assert_allclose(np.asarray(ours())[sel], bare_50_terms()[sel], atol=1e-10)
@@ -249,14 +249,14 @@ def scaling_plot(path: Path) -> None:
     matplotlib.use("Agg")
     import matplotlib.pyplot as plt
 
-    from masstransfer import correlations, transient
+    from masstransfer import bodies, surface
 
-    rec = correlations.get("sphere-ranz-marshall")
+    rec = surface.correlation("sphere-ranz-marshall")
     sizes = np.logspace(1, 7, 13).astype(int)
     series = {
         "gas_diffusivity (named species)": lambda x: mt.gas_diffusivity("toluene", "air", 250.0 + x),
         "correlation record (Ranz-Marshall)": lambda x: rec.nusselt(Re=x, Pr=0.7),
-        "fractional_uptake (slab)": lambda x: transient.fractional_uptake("slab", x, 1e-11, 1e-3),
+        "fractional_uptake (slab)": lambda x: bodies.fractional_uptake("slab", x, 1e-11, 1e-3),
         "bare numpy x**1.75": lambda x: (250.0 + x) ** 1.75,
     }
     fig, ax = plt.subplots(figsize=(6.5, 4.2))

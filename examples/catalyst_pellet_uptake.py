@@ -9,7 +9,7 @@ from __future__ import annotations
 import numpy as np
 
 import masstransfer as mt
-from masstransfer.transient import fractional_uptake, half_time
+from masstransfer.bodies import fractional_uptake, half_time
 
 R_PELLET = 1.5e-3  # m, pellet radius (invented)
 D_EFF = 2e-8  # m^2/s, effective pore diffusivity of the vapour in the pellet (invented)

@@ -9,7 +9,7 @@ regulations.
 from __future__ import annotations
 
 import masstransfer as mt
-from masstransfer.barriers import Layer, convert_permeability, oxygen_ingress
+from masstransfer.bodies import Layer, convert_permeability, oxygen_ingress
 
 BARRER = convert_permeability(1.0, "barrer")
 
@@ -35,7 +35,7 @@ def main() -> None:
     print("Oxygen ingress into a sealed pouch (invented data), 23 C, air outside, scavenged inside")
     for name, layers in LAMINATES.items():
         r = oxygen_ingress(AREA, layers, [d * 86400.0 for d in DAYS], T=296.15, limit_mg=LIMIT_MG)
-        otr = mt.barriers.convert_permeance(r.permeance, "mol/(m2 s Pa)", "cm3(STP)/(m2 day atm)")
+        otr = mt.bodies.convert_permeance(r.permeance, "mol/(m2 s Pa)", "cm3(STP)/(m2 day atm)")
         print(f"\n{name}: OTR {otr:.2f} cm3(STP)/(m2 day atm)")
         for d, mg in zip(DAYS, r.cumulative_mg, strict=True):
             print(f"  after {d:4d} days: {mg:8.2f} mg O2")

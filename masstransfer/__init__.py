@@ -1,140 +1,77 @@
-"""masstransfer: diffusivities, heat-mass transfer analogies and correlations.
+"""masstransfer: diffusivities, heat-mass transfer analogies and mass-transfer correlations.
 
-Numbers in, numbers out (``fuller``, ``wilke_chang``, ...) for tight loops;
-names in (``gas_diffusivity("toluene", "air", T=...)``) for scripts.  SI
-units throughout.  The property databases of ``chemicals`` and ``thermo``
-are loaded on first use, not on import.
+The top level holds the names-in entry points (species names and a state in, a number you can
+defend out), their result types and the two bases of the error and warning families.  Everything
+else lives in one subpackage each, with one public path per function:
+
+``substances``   species constants beyond :class:`Species`; Henry's constants; parachors
+``diffusivity``  numbers-in gas, liquid, porous and solid methods (``fuller``, ``wilke_chang``, ...)
+``surface``      dimensionless groups, the correlation catalogue, analogies, conventions, fluxes
+``bodies``       transient uptake and release, barriers, permeability units
+``testing``      hypothesis strategies and invariant checks for downstream tests
+``constants``    the physical constants the library uses
+``errors``       the whole error and warning family
+
+SI units throughout.  The property databases of ``chemicals`` and ``thermo`` are loaded on first
+use, not on import; ``bodies`` (scipy) and ``testing`` (hypothesis) are imported on first use.
 """
 
 from __future__ import annotations
 
-from . import (
-    analogy,
-    barriers,
-    coefficients,
-    correlations,
-    data,
-    diffusivity,
-    dimensionless,
-    errors,
-    flux,
-    properties,
-    wet_surface,
-)
-from .analogy import (
-    TransferCoefficients,
-    heat_transfer_coefficient_from_mass,
-    mass_transfer_coefficient_from_heat,
-    mass_transfer_from_heat,
-    nusselt_from_sherwood,
-    sherwood_from_nusselt,
-)
-from .diffusivity import (
-    DiffusivityReport,
-    arrhenius_diffusivity,
-    blanc,
-    bosanquet,
-    brokaw,
-    chapman_enskog,
-    diffusivity_report,
-    effective_diffusivity,
-    fuller,
-    fuller_volume,
-    gas_diffusivity,
-    gas_diffusivity_in_mixture,
-    hayduk_minhas,
-    hayduk_minhas_aqueous,
-    knudsen_diffusivity,
-    liquid_diffusivity,
-    rescale_gas_diffusivity,
-    stokes_einstein,
-    tyn_calus,
-    wilke_chang,
-    wilke_lee,
-)
-from .errors import (
-    EnvelopeError,
-    EnvelopeWarning,
-    InputShapeError,
-    InputValueError,
-    MassTransferError,
-    MassTransferWarning,
-    MissingConstantError,
-    OutOfRangeError,
-    UnknownMethodError,
-    UnknownSpeciesError,
-)
-from .properties import gas_model, liquid_model
-from .species import Species, species
-from .wet_surface import wet_bulb_temperature, wet_surface_temperature
+import importlib
+from typing import TYPE_CHECKING
 
-__version__ = "0.1.0"
+from . import constants, diffusivity, errors, substances, surface
+from ._version import __version__
+from .diffusivity._gas import gas_diffusivity
+from .diffusivity._liquid import liquid_diffusivity
+from .diffusivity._report import DiffusivityReport, diffusivity_report
+from .errors import MassTransferError, MassTransferWarning
+from .substances._properties import GasModel, LiquidModel, gas_model, liquid_model
+from .substances._species import Species, species
+from .surface._analogy import TransferCoefficients, mass_transfer_from_heat
+from .surface._wet_surface import wet_bulb_temperature, wet_surface_temperature
+
+if TYPE_CHECKING:
+    from . import bodies, testing
+
+_LAZY = frozenset({"bodies", "testing"})
 
 
 def __getattr__(name: str) -> object:
-    """Import the scipy-backed ``transient`` module on first use (keeps ``import masstransfer`` light)."""
-    if name == "transient":
-        import importlib
-
-        return importlib.import_module(".transient", __name__)
+    """Import ``bodies`` (scipy) and ``testing`` (hypothesis) on first use."""
+    if name in _LAZY:
+        return importlib.import_module(f".{name}", __name__)
     raise AttributeError(f"module {__name__!r} has no attribute {name!r}")
+
+
+def __dir__() -> list[str]:
+    return sorted(__all__)
 
 
 __all__ = [
     "DiffusivityReport",
-    "EnvelopeError",
-    "EnvelopeWarning",
-    "InputShapeError",
-    "InputValueError",
+    "GasModel",
+    "LiquidModel",
     "MassTransferError",
     "MassTransferWarning",
-    "MissingConstantError",
-    "OutOfRangeError",
     "Species",
     "TransferCoefficients",
-    "UnknownMethodError",
-    "UnknownSpeciesError",
     "__version__",
-    "analogy",
-    "arrhenius_diffusivity",
-    "barriers",
-    "blanc",
-    "bosanquet",
-    "brokaw",
-    "chapman_enskog",
-    "coefficients",
-    "correlations",
-    "data",
+    "bodies",
+    "constants",
     "diffusivity",
     "diffusivity_report",
-    "dimensionless",
-    "effective_diffusivity",
     "errors",
-    "flux",
-    "fuller",
-    "fuller_volume",
     "gas_diffusivity",
-    "gas_diffusivity_in_mixture",
     "gas_model",
-    "hayduk_minhas",
-    "hayduk_minhas_aqueous",
-    "heat_transfer_coefficient_from_mass",
-    "knudsen_diffusivity",
     "liquid_diffusivity",
     "liquid_model",
-    "mass_transfer_coefficient_from_heat",
     "mass_transfer_from_heat",
-    "nusselt_from_sherwood",
-    "properties",
-    "rescale_gas_diffusivity",
-    "sherwood_from_nusselt",
     "species",
-    "stokes_einstein",
-    "transient",
-    "tyn_calus",
+    "substances",
+    "surface",
+    "testing",
     "wet_bulb_temperature",
-    "wet_surface",
     "wet_surface_temperature",
-    "wilke_chang",
-    "wilke_lee",
 ]

@@ -111,7 +111,8 @@ def _table(title: str, header: Sequence[str], rows: Sequence[Sequence[str]], foo
 
 
 def _diffusivity(args: argparse.Namespace) -> str:
-    from .diffusivity import gas_diffusivity, liquid_diffusivity
+    from .diffusivity._gas import gas_diffusivity
+    from .diffusivity._liquid import liquid_diffusivity
 
     T = np.asarray(args.temperature, dtype=float)
     if args.phase == "gas":
@@ -135,7 +136,7 @@ def _diffusivity(args: argparse.Namespace) -> str:
         )
     where = f"gas at {args.pressure:g} Pa" if args.phase == "gas" else "liquid, infinite dilution"
     if args.explain:
-        from .diffusivity import diffusivity_report
+        from .diffusivity._report import diffusivity_report
 
         report = diffusivity_report(
             args.solute, args.medium, T, args.pressure, phase=args.phase, method=method
@@ -155,7 +156,7 @@ def _diffusivity(args: argparse.Namespace) -> str:
 
 
 def _coefficient(args: argparse.Namespace) -> str:
-    from .analogy import heat_transfer_coefficient_from_mass, mass_transfer_from_heat
+    from .surface._analogy import heat_transfer_coefficient_from_mass, mass_transfer_from_heat
 
     T = np.asarray(args.temperature, dtype=float)
     if args.h is not None:
@@ -216,10 +217,10 @@ def _coefficient(args: argparse.Namespace) -> str:
 
 
 def _correlations(args: argparse.Namespace) -> str:
-    from . import correlations
+    from .surface import _lookup as catalogue
 
     if args.slug:
-        r = correlations.get(args.slug)
+        r = catalogue.correlation(args.slug)
         info = {
             "slug": r.slug,
             "title": r.title,
@@ -241,9 +242,9 @@ def _correlations(args: argparse.Namespace) -> str:
             return json.dumps(info, indent=2)
         width = max(len(k) for k in info)
         return "\n".join(f"{k.rjust(width)} : {v}" for k, v in info.items())
-    recs = [r for r in correlations.all() if args.geometry in (None, r.geometry)]
+    recs = [r for r in catalogue.all_correlations() if args.geometry in (None, r.geometry)]
     if args.geometry is not None and not recs:
-        correlations.find(args.geometry)  # raises with the accepted geometries
+        catalogue.find_correlations(args.geometry)  # raises with the accepted geometries
     if args.json:
         return json.dumps(
             [
@@ -267,7 +268,7 @@ def _correlations(args: argparse.Namespace) -> str:
 
 
 def _wet_bulb(args: argparse.Namespace) -> str:
-    from .wet_surface import wet_bulb_temperature
+    from .surface._wet_surface import wet_bulb_temperature
 
     T = np.asarray(args.temperature, dtype=float)
     wb = np.atleast_1d(wet_bulb_temperature(T, args.rh, args.pressure))

@@ -4,11 +4,12 @@ from __future__ import annotations
 
 import numpy as np
 
-from .analogy import mass_transfer_from_heat
-from .diffusivity import gas_diffusivity, liquid_diffusivity
-from .flux import high_flux_rate
-from .properties import liquid_model
-from .wet_surface import wet_surface_temperature
+from .diffusivity._gas import gas_diffusivity
+from .diffusivity._liquid import liquid_diffusivity
+from .substances._properties import liquid_model
+from .surface._analogy import mass_transfer_from_heat
+from .surface._flux import high_flux_rate
+from .surface._wet_surface import wet_surface_temperature
 
 __all__ = ["demo_report"]
 
@@ -65,7 +66,7 @@ def _drying_chain() -> list[str]:
 
 def _falling_rate() -> list[str]:
     """Walk the falling-rate period: moisture diffusing out of the ware body."""
-    from .transient import fractional_release, half_time
+    from .bodies._transient import fractional_release, half_time
 
     D = 5e-10  # m^2/s, effective moisture diffusivity of the clay body (invented)
     half = 4e-3  # m, half-thickness of an 8 mm ware wall dried from both faces (invented)

@@ -8,7 +8,7 @@ from hypothesis import given
 from hypothesis import strategies as st
 
 import masstransfer as mt
-from masstransfer import analogy as an
+from masstransfer import surface as an
 
 
 def test_chilton_colburn_by_hand():
@@ -16,7 +16,7 @@ def test_chilton_colburn_by_hand():
     # k_c = h / (rho cp Le^(2/3)), with Le = Sc/Pr; air at 300 K, water vapour (Le about 0.85)
     h, rho, cp, Pr, Sc = 40.0, 1.1614, 1007.0, 0.707, 0.60
     expected = h / (rho * cp * (Sc / Pr) ** (2 / 3))
-    assert mt.mass_transfer_coefficient_from_heat(h, rho=rho, cp=cp, Pr=Pr, Sc=Sc) == pytest.approx(
+    assert mt.surface.mass_transfer_coefficient_from_heat(h, rho=rho, cp=cp, Pr=Pr, Sc=Sc) == pytest.approx(
         expected, rel=1e-14
     )
 
@@ -30,31 +30,31 @@ def test_chilton_colburn_by_hand():
     n=st.sampled_from([2 / 3, 0.6, 0.5]),
 )
 def test_round_trip_h_kc_h(h, rho, cp, Pr, Sc, n):
-    k = mt.mass_transfer_coefficient_from_heat(h, rho=rho, cp=cp, Pr=Pr, Sc=Sc, exponent=n)
-    back = mt.heat_transfer_coefficient_from_mass(k, rho=rho, cp=cp, Pr=Pr, Sc=Sc, exponent=n)
+    k = mt.surface.mass_transfer_coefficient_from_heat(h, rho=rho, cp=cp, Pr=Pr, Sc=Sc, exponent=n)
+    back = mt.surface.heat_transfer_coefficient_from_mass(k, rho=rho, cp=cp, Pr=Pr, Sc=Sc, exponent=n)
     assert back == pytest.approx(h, rel=1e-12)
 
 
 @given(h1=st.floats(0.1, 1e4), dh=st.floats(0.01, 1e3), Sc=st.floats(0.3, 1e3))
 def test_kc_rises_with_h(h1, dh, Sc):
     kw = {"rho": 1.2, "cp": 1007.0, "Pr": 0.71, "Sc": Sc}
-    assert mt.mass_transfer_coefficient_from_heat(h1 + dh, **kw) > mt.mass_transfer_coefficient_from_heat(
-        h1, **kw
-    )
+    assert mt.surface.mass_transfer_coefficient_from_heat(
+        h1 + dh, **kw
+    ) > mt.surface.mass_transfer_coefficient_from_heat(h1, **kw)
 
 
 @given(Pr=st.floats(0.3, 100.0), h=st.floats(1.0, 1e3), rho=st.floats(0.1, 1e3), cp=st.floats(500.0, 5e3))
 def test_lewis_relation_where_le_is_one(Pr, h, rho, cp):
     # Le = 1 (Sc = Pr): h = rho cp k_c exactly (the Lewis relation)
-    k = mt.mass_transfer_coefficient_from_heat(h, rho=rho, cp=cp, Pr=Pr, Sc=Pr)
+    k = mt.surface.mass_transfer_coefficient_from_heat(h, rho=rho, cp=cp, Pr=Pr, Sc=Pr)
     assert h / (rho * cp * k) == pytest.approx(1.0, rel=1e-12)
     assert an.lewis_relation(Pr, Pr) == pytest.approx(1.0)
 
 
 def test_sherwood_nusselt_round_trip():
-    sh = mt.sherwood_from_nusselt(120.0, Pr=0.7, Sc=2.0)
+    sh = mt.surface.sherwood_from_nusselt(120.0, Pr=0.7, Sc=2.0)
     assert sh == pytest.approx(120.0 * (2.0 / 0.7) ** (1 / 3))
-    assert mt.nusselt_from_sherwood(sh, Pr=0.7, Sc=2.0) == pytest.approx(120.0, rel=1e-13)
+    assert mt.surface.nusselt_from_sherwood(sh, Pr=0.7, Sc=2.0) == pytest.approx(120.0, rel=1e-13)
 
 
 def test_turbulent_duct_analogies():
@@ -65,11 +65,11 @@ def test_turbulent_duct_analogies():
     assert an.stanton_von_karman(f, 1.0) == pytest.approx(f / 8)
     assert an.colburn_j_from_friction(f) == pytest.approx(f / 8)
     # against Gnielinski at Re 5e4, Pr 0.7: the analogies fall within 15 % (common practice)
-    from masstransfer import correlations
+    from masstransfer import surface
 
     Re, Pr = 5e4, 0.7
-    fd = float(correlations.darcy_friction_smooth(Re))
-    nu_g = correlations.get("duct-gnielinski").nusselt(Re=Re, Pr=Pr)
+    fd = float(surface.darcy_friction_smooth(Re))
+    nu_g = surface.correlation("duct-gnielinski").nusselt(Re=Re, Pr=Pr)
     for st_ in (an.stanton_prandtl_taylor(fd, Pr), an.stanton_von_karman(fd, Pr)):
         assert st_ * Re * Pr == pytest.approx(nu_g, rel=0.15)
 
@@ -104,20 +104,22 @@ def test_resolved_form_in_a_liquid_and_over_arrays():
 
 
 def test_bad_input_names_argument():
-    with pytest.raises(mt.InputValueError, match=r"^h="):
-        mt.mass_transfer_coefficient_from_heat(-1.0, rho=1.0, cp=1000.0, Pr=0.7, Sc=0.6)
+    with pytest.raises(mt.errors.InputValueError, match=r"^h="):
+        mt.surface.mass_transfer_coefficient_from_heat(-1.0, rho=1.0, cp=1000.0, Pr=0.7, Sc=0.6)
     for arg in ("rho", "cp", "Pr", "Sc"):
         kw = {"rho": 1.0, "cp": 1000.0, "Pr": 0.7, "Sc": 0.6, arg: 0.0}
-        with pytest.raises(mt.InputValueError, match=f"^{arg}="):
-            mt.mass_transfer_coefficient_from_heat(10.0, **kw)
-    with pytest.raises(mt.InputValueError, match=r"^k_c="):
-        mt.heat_transfer_coefficient_from_mass(-0.1, rho=1.0, cp=1000.0, Pr=0.7, Sc=0.6)
-    with pytest.raises(mt.OutOfRangeError):
+        with pytest.raises(mt.errors.InputValueError, match=f"^{arg}="):
+            mt.surface.mass_transfer_coefficient_from_heat(10.0, **kw)
+    with pytest.raises(mt.errors.InputValueError, match=r"^k_c="):
+        mt.surface.heat_transfer_coefficient_from_mass(-0.1, rho=1.0, cp=1000.0, Pr=0.7, Sc=0.6)
+    with pytest.raises(mt.errors.OutOfRangeError):
         mt.mass_transfer_from_heat(500.0, "oxygen", "water", 700.0, phase="liquid")
-    with pytest.raises(mt.InputValueError, match="phase"):
+    with pytest.raises(mt.errors.InputValueError, match="phase"):
         mt.mass_transfer_from_heat(5.0, "oxygen", "water", 300.0, phase="plasma")  # type: ignore[arg-type]
 
 
 def test_zero_h_gives_zero_k():
-    assert mt.mass_transfer_coefficient_from_heat(0.0, rho=1.0, cp=1000.0, Pr=0.7, Sc=0.6) == 0.0
-    assert math.isfinite(mt.mass_transfer_coefficient_from_heat(1e-300, rho=1.0, cp=1e3, Pr=0.7, Sc=0.6))
+    assert mt.surface.mass_transfer_coefficient_from_heat(0.0, rho=1.0, cp=1000.0, Pr=0.7, Sc=0.6) == 0.0
+    assert math.isfinite(
+        mt.surface.mass_transfer_coefficient_from_heat(1e-300, rho=1.0, cp=1e3, Pr=0.7, Sc=0.6)
+    )

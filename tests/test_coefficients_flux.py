@@ -6,8 +6,8 @@ from hypothesis import given
 from hypothesis import strategies as st
 
 import masstransfer as mt
-from masstransfer import coefficients as co
-from masstransfer import flux as fx
+from masstransfer import surface as co
+from masstransfer import surface as fx
 
 R = 8.314462618
 
@@ -34,7 +34,7 @@ def test_fick_flux_and_linear_profile():
     assert np.allclose(np.diff(c), np.diff(c)[0])
     # the flux from the profile's slope equals Fick's law
     assert -2e-9 * (c[-1] - c[0]) / 0.5e-3 == pytest.approx(J)
-    with pytest.raises(mt.InputValueError, match="thickness"):
+    with pytest.raises(mt.errors.InputValueError, match="thickness"):
         fx.fick_flux(2e-9, 40.0, 10.0, 0.0)
 
 
@@ -73,7 +73,7 @@ def test_high_flux_correction_values_and_rate():
     # with N = N_A for a stagnant carrier; the log form and the corrected coefficient agree exactly
     N = fx.high_flux_rate(2.0, 0.3, 0.05)
     assert pytest.approx(2.0 * fx.high_flux_correction(N / 2.0) * (0.3 - 0.05), rel=1e-12) == N * (1 - 0.3)
-    with pytest.raises(mt.InputValueError):
+    with pytest.raises(mt.errors.InputValueError):
         fx.high_flux_rate(2.0, 1.2, 0.0)
 
 
@@ -95,7 +95,7 @@ def test_two_film_overall_coefficients():
 
 
 def test_henry_constants_from_thermo_tables():
-    from masstransfer.properties import henry_constant
+    from masstransfer.substances import henry_constant
 
     # Sander (2015), Atmos. Chem. Phys. 15, 4399: O2 in water at 298.15 K, Hcp about 1.3e-5 mol/(m^3 Pa);
     # on the mole-fraction scale H = c_water / Hcp = 55345/1.3e-5 = 4.26e9 Pa
@@ -105,7 +105,7 @@ def test_henry_constants_from_thermo_tables():
     # solubility falls as T rises
     H = henry_constant("oxygen", "water", np.array([283.15, 298.15, 313.15]))
     assert np.all(np.diff(H) > 0)
-    with pytest.raises(mt.MissingConstantError):
+    with pytest.raises(mt.errors.MissingConstantError):
         henry_constant("oxygen", "n-hexadecane", 298.15)
 
 

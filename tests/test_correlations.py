@@ -9,7 +9,7 @@ from hypothesis import given
 from hypothesis import strategies as st
 
 import masstransfer as mt
-from masstransfer import correlations as cat
+from masstransfer import surface as cat
 
 INC = "Incropera & DeWitt 6th ed."
 pi = math.pi
@@ -253,7 +253,7 @@ _POINTS = [
     ("slug", "inputs", "expected", "source"), _POINTS, ids=[f"{p[0]}-{i}" for i, p in enumerate(_POINTS)]
 )
 def test_record_against_published_equation(slug, inputs, expected, source):
-    rec = cat.get(slug)
+    rec = cat.correlation(slug)
     if expected == "gnielinski":
         from fluids.friction import Clamond
 
@@ -267,11 +267,11 @@ def test_record_against_published_equation(slug, inputs, expected, source):
 
 
 def test_every_record_has_a_published_point():
-    assert {p[0] for p in _POINTS} == {r.slug for r in cat.all()}
+    assert {p[0] for p in _POINTS} == {r.slug for r in cat.all_correlations()}
 
 
 def test_catalogue_size_and_metadata():
-    recs = cat.all()
+    recs = cat.all_correlations()
     assert len(recs) >= 30
     for r in recs:
         assert r.reference
@@ -289,7 +289,7 @@ def test_gnielinski_against_published_friction_form():
     Re, Pr = 5e4, 3.0
     f = (0.790 * math.log(Re) - 1.64) ** -2
     expected = (f / 8) * (Re - 1000) * Pr / (1 + 12.7 * (f / 8) ** 0.5 * (Pr ** (2 / 3) - 1))
-    assert cat.get("duct-gnielinski").nusselt(Re=Re, Pr=Pr) == pytest.approx(expected, rel=0.02)
+    assert cat.correlation("duct-gnielinski").nusselt(Re=Re, Pr=Pr) == pytest.approx(expected, rel=0.02)
 
 
 def test_friction_interpolant_matches_fluids():
@@ -306,26 +306,26 @@ def test_friction_interpolant_matches_fluids():
 @pytest.mark.parametrize("slug", ["sphere-ranz-marshall", "sphere-creeping-rigid", "drop-creeping-mobile"])
 def test_sphere_sherwood_tends_to_two_at_zero_flow(slug):
     # diffusion from a sphere into a quiescent fluid: Sh = 2 (Bird, Stewart & Lightfoot 2nd ed. 22.2)
-    assert cat.get(slug).sherwood(Re=1e-12, Sc=1.0) == pytest.approx(2.0, abs=1e-3)
+    assert cat.correlation(slug).sherwood(Re=1e-12, Sc=1.0) == pytest.approx(2.0, abs=1e-3)
 
 
 def test_sphere_limits_for_records_with_a_lower_re_bound():
     # Froessling and Whitaker are 2 + terms in Re: Re -> 0 gives 2 (outside their envelopes, so a warning)
     for slug in ("sphere-froessling", "sphere-whitaker"):
-        with pytest.warns(mt.EnvelopeWarning):
-            assert cat.get(slug).sherwood(Re=1e-14, Sc=1.0) == pytest.approx(2.0, abs=1e-6)
-    assert cat.get("sphere-free-churchill").sherwood(Ra=0.0, Sc=1.0) == pytest.approx(2.0)
+        with pytest.warns(mt.errors.EnvelopeWarning):
+            assert cat.correlation(slug).sherwood(Re=1e-14, Sc=1.0) == pytest.approx(2.0, abs=1e-6)
+    assert cat.correlation("sphere-free-churchill").sherwood(Ra=0.0, Sc=1.0) == pytest.approx(2.0)
 
 
 def test_laminar_duct_values():
     # Graetz (constant wall) 3.66 and constant flux 4.36 (Incropera Eqs. 8.53, 8.55; published)
-    assert cat.get("duct-laminar-constant-wall").nusselt(Re=500.0, Pr=0.7) == pytest.approx(3.66)
-    assert cat.get("duct-laminar-constant-flux").sherwood(Re=500.0, Sc=600.0) == pytest.approx(4.36)
+    assert cat.correlation("duct-laminar-constant-wall").nusselt(Re=500.0, Pr=0.7) == pytest.approx(3.66)
+    assert cat.correlation("duct-laminar-constant-flux").sherwood(Re=500.0, Sc=600.0) == pytest.approx(4.36)
 
 
 @pytest.mark.parametrize("slug", ["duct-entry-hausen", "duct-entry-graetz-leveque"])
 def test_developing_flow_approaches_fully_developed(slug):
-    rec = cat.get(slug)
+    rec = cat.correlation(slug)
     far = rec.nusselt(Re=500.0, Pr=0.7, L_over_D=1e7)
     assert far == pytest.approx(3.66, rel=1e-3)
     near = rec.nusselt(Re=500.0, Pr=0.7, L_over_D=np.array([1.0, 10.0, 100.0, 1000.0]))
@@ -333,15 +333,15 @@ def test_developing_flow_approaches_fully_developed(slug):
 
 
 def test_unheated_length_zero_recovers_flat_plate():
-    a = cat.get("flat-plate-unheated-start-laminar").nusselt(Re=1e5, Pr=0.7, xi_over_x=0.0)
-    assert a == pytest.approx(cat.get("flat-plate-laminar-local").nusselt(Re=1e5, Pr=0.7))
+    a = cat.correlation("flat-plate-unheated-start-laminar").nusselt(Re=1e5, Pr=0.7, xi_over_x=0.0)
+    assert a == pytest.approx(cat.correlation("flat-plate-laminar-local").nusselt(Re=1e5, Pr=0.7))
 
 
 def test_mixed_plate_is_laminar_below_transition_and_continuous_at_it():
-    rec = cat.get("flat-plate-mixed-average")
+    rec = cat.correlation("flat-plate-mixed-average")
     Re = np.array([1e4, 4.99999e5, 5.00001e5, 1e6])
     nu = rec.nusselt(Re=Re, Pr=0.7)
-    lam = cat.get("flat-plate-laminar-average").nusselt(Re=Re[:2], Pr=0.7)
+    lam = cat.correlation("flat-plate-laminar-average").nusselt(Re=Re[:2], Pr=0.7)
     assert nu[:2] == pytest.approx(lam)
     assert nu[2] == pytest.approx(nu[1], rel=1e-4)  # A = 871 makes the form continuous at Re_c
     lower = rec.nusselt(Re=1e6, Pr=0.7, Re_c=3e5)
@@ -353,16 +353,16 @@ def test_gnielinski_vs_dittus_boelter():
     # so the two agree within 25 % over Re 1e4-1e5, Pr 0.7-10
     Re = np.geomspace(1e4, 1e5, 9)[:, None]
     Pr = np.geomspace(0.7, 10.0, 7)[None, :]
-    g = cat.get("duct-gnielinski").nusselt(Re=Re, Pr=Pr)
-    d = cat.get("duct-dittus-boelter").nusselt(Re=Re, Pr=Pr)
+    g = cat.correlation("duct-gnielinski").nusselt(Re=Re, Pr=Pr)
+    d = cat.correlation("duct-dittus-boelter").nusselt(Re=Re, Pr=Pr)
     assert np.all(np.abs(d / g - 1) < 0.25)
 
 
 def test_ranz_marshall_vs_whitaker_in_overlap():
     # both for spheres in gases; agree within their stated 30 % in Re 10-200 (common practice)
     Re = np.linspace(10.0, 200.0, 20)
-    a = cat.get("sphere-ranz-marshall").nusselt(Re=Re, Pr=0.7)
-    b = cat.get("sphere-whitaker").nusselt(Re=Re, Pr=0.71)
+    a = cat.correlation("sphere-ranz-marshall").nusselt(Re=Re, Pr=0.7)
+    b = cat.correlation("sphere-whitaker").nusselt(Re=Re, Pr=0.71)
     assert np.all(np.abs(a / b - 1) < 0.3)
 
 
@@ -370,34 +370,34 @@ def test_ranz_marshall_vs_whitaker_in_overlap():
 
 
 def test_leaving_envelope_warns_naming_record_input_value_and_range():
-    rec = cat.get("sphere-whitaker")
-    with pytest.warns(mt.EnvelopeWarning, match=r"sphere-whitaker.*Re=1\.0.*3\.5 to 76000"):
+    rec = cat.correlation("sphere-whitaker")
+    with pytest.warns(mt.errors.EnvelopeWarning, match=r"sphere-whitaker.*Re=1\.0.*3\.5 to 76000"):
         rec.nusselt(Re=1.0, Pr=0.71)
-    with pytest.raises(mt.EnvelopeError, match="sphere-whitaker"):
+    with pytest.raises(mt.errors.EnvelopeError, match="sphere-whitaker"):
         rec.nusselt(Re=1.0, Pr=0.71, strict=True)
 
 
 def test_warning_points_at_the_caller():
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
-        cat.get("sphere-whitaker").sherwood(Re=1.0, Sc=0.9)
+        cat.correlation("sphere-whitaker").sherwood(Re=1.0, Sc=0.9)
     assert caught[0].filename == __file__
 
 
 def test_analogy_is_recorded_in_metadata():
-    heat_fitted = cat.get("duct-gnielinski").evaluate("mass", Re=1e4, Sc=1.0)
+    heat_fitted = cat.correlation("duct-gnielinski").evaluate("mass", Re=1e4, Sc=1.0)
     assert heat_fitted.quantity == "Sh"
     assert "fitted on heat" in heat_fitted.analogy
-    mass_fitted = cat.get("duct-linton-sherwood").evaluate("heat", Re=1e4, Pr=1500.0)
+    mass_fitted = cat.correlation("duct-linton-sherwood").evaluate("heat", Re=1e4, Pr=1500.0)
     assert "fitted on mass" in mass_fitted.analogy
-    both = cat.get("sphere-ranz-marshall").evaluate("mass", Re=10.0, Sc=1.0)
+    both = cat.correlation("sphere-ranz-marshall").evaluate("mass", Re=10.0, Sc=1.0)
     assert both.analogy is None
     assert both.inputs == {"Re": 10.0, "Sc": 1.0}
 
 
 def test_array_call_spanning_regimes_warns_once_with_count():
-    rec = cat.get("cylinder-hilpert")
-    with pytest.warns(mt.EnvelopeWarning, match=r"and 1 more"):
+    rec = cat.correlation("cylinder-hilpert")
+    with pytest.warns(mt.errors.EnvelopeWarning, match=r"and 1 more"):
         out = rec.nusselt(Re=np.array([0.1, 0.2, 10.0, 1e3, 1e5]), Pr=0.7)
     assert out.shape == (5,)
 
@@ -406,22 +406,22 @@ def test_array_call_spanning_regimes_warns_once_with_count():
 
 
 def test_get_unknown_slug_lists_close_matches():
-    with pytest.raises(mt.UnknownMethodError, match="sphere-ranz-marshall"):
-        cat.get("sphere-ranz-marshal")
+    with pytest.raises(mt.errors.UnknownMethodError, match="sphere-ranz-marshall"):
+        cat.correlation("sphere-ranz-marshal")
 
 
 def test_find_ranks_and_filters():
-    found = [r.slug for r in cat.find("sphere", Re=100.0, Sc=1.5)]
+    found = [r.slug for r in cat.find_correlations("sphere", Re=100.0, Sc=1.5)]
     assert found[0] == "sphere-froessling"  # fitted on mass, covers Sc 1.5
     assert "sphere-whitaker" in found
     assert "sphere-creeping-rigid" not in found  # Re 100 is outside creeping flow
-    turbulent_plate = [r.slug for r in cat.find("flat plate", Re=2e6, Pr=0.7)]
+    turbulent_plate = [r.slug for r in cat.find_correlations("flat plate", Re=2e6, Pr=0.7)]
     assert "flat-plate-laminar-local" not in turbulent_plate
     assert "flat-plate-mixed-average" in turbulent_plate
-    free = [r.slug for r in cat.find("vertical plate", Ra=1e10, Pr=0.7)]
+    free = [r.slug for r in cat.find_correlations("vertical plate", Ra=1e10, Pr=0.7)]
     assert free == ["vertical-plate-churchill-chu"]
-    with pytest.raises(mt.UnknownMethodError, match="did you mean"):
-        cat.find("spher", Re=1.0)
+    with pytest.raises(mt.errors.UnknownMethodError, match="did you mean"):
+        cat.find_correlations("spher", Re=1.0)
 
 
 # --- bad input --------------------------------------------------------------------------
@@ -429,27 +429,27 @@ def test_find_ranks_and_filters():
 
 @pytest.mark.parametrize("bad", [-1.0, float("nan"), float("inf")])
 def test_bad_inputs_name_the_argument(bad):
-    with pytest.raises(mt.InputValueError, match="Re"):
-        cat.get("sphere-ranz-marshall").nusselt(Re=bad, Pr=0.7)
-    with pytest.raises(mt.InputValueError, match="Sc"):
-        cat.get("sphere-ranz-marshall").sherwood(Re=10.0, Sc=bad)
+    with pytest.raises(mt.errors.InputValueError, match="Re"):
+        cat.correlation("sphere-ranz-marshall").nusselt(Re=bad, Pr=0.7)
+    with pytest.raises(mt.errors.InputValueError, match="Sc"):
+        cat.correlation("sphere-ranz-marshall").sherwood(Re=10.0, Sc=bad)
 
 
 def test_unused_or_missing_inputs_are_errors():
-    rec = cat.get("sphere-ranz-marshall")
-    with pytest.raises(mt.InputValueError, match=r"does not use 'Pr'.*pass Sc"):
+    rec = cat.correlation("sphere-ranz-marshall")
+    with pytest.raises(mt.errors.InputValueError, match=r"does not use 'Pr'.*pass Sc"):
         rec.sherwood(Re=10.0, Pr=0.7)
-    with pytest.raises(mt.InputValueError, match="does not use 'L_over_D'"):
+    with pytest.raises(mt.errors.InputValueError, match="does not use 'L_over_D'"):
         rec.nusselt(Re=10.0, Pr=0.7, L_over_D=3.0)
-    with pytest.raises(mt.InputValueError, match="needs L_over_D"):
-        cat.get("duct-entry-hausen").nusselt(Re=100.0, Pr=0.7)
-    with pytest.raises(mt.InputValueError, match="broadcast"):
+    with pytest.raises(mt.errors.InputValueError, match="needs L_over_D"):
+        cat.correlation("duct-entry-hausen").nusselt(Re=100.0, Pr=0.7)
+    with pytest.raises(mt.errors.InputValueError, match="broadcast"):
         rec.nusselt(Re=np.ones(3), Pr=np.ones(2))
 
 
 # --- invariants ---------------------------------------------------------------------------
 
-_RE_RECORDS = [r for r in cat.all() if "Re" in r.inputs]
+_RE_RECORDS = [r for r in cat.all_correlations() if "Re" in r.inputs]
 
 
 def _inside(rec, name, draw_fraction):
@@ -476,7 +476,7 @@ def test_increases_with_reynolds_inside_envelope(rec, a, b, c):
     assert n2 >= n1 * (1 - 1e-12)
 
 
-@given(rec=st.sampled_from(list(cat.all())), a=st.floats(0.0, 1.0), c=st.floats(0.0, 1.0))
+@given(rec=st.sampled_from(list(cat.all_correlations())), a=st.floats(0.0, 1.0), c=st.floats(0.0, 1.0))
 def test_nusselt_equals_sherwood_when_pr_equals_sc(rec, a, c):
     heat = {k: _inside(rec, k, a if k != "Pr" else c) for k in rec.inputs}
     mass = {("Sc" if k == "Pr" else k): v for k, v in heat.items()}
@@ -484,7 +484,7 @@ def test_nusselt_equals_sherwood_when_pr_equals_sc(rec, a, c):
 
 
 @given(
-    rec=st.sampled_from(list(cat.all())),
+    rec=st.sampled_from(list(cat.all_correlations())),
     fr=st.lists(st.floats(0.0, 1.0), min_size=1, max_size=6),
     c=st.floats(0.0, 1.0),
 )

@@ -4,7 +4,7 @@ import numpy as np
 import pytest
 
 import masstransfer as mt
-from masstransfer import dimensionless as dl
+from masstransfer import surface as dl
 
 
 def test_groups_by_hand():
@@ -52,9 +52,9 @@ def test_arrays_and_errors():
     assert isinstance(out, np.ndarray)
     assert out == pytest.approx([1e4, 2e4])
     assert isinstance(dl.reynolds(1.0, 0.1, 1e-5), float)
-    with pytest.raises(mt.InputValueError, match=r"^nu="):
+    with pytest.raises(mt.errors.InputValueError, match=r"^nu="):
         dl.reynolds(1.0, 0.1, -1e-5)
-    with pytest.raises(mt.InputValueError, match=r"^dT="):
+    with pytest.raises(mt.errors.InputValueError, match=r"^dT="):
         dl.grashof_thermal(0.5, 1 / 300, 0.0, 1.6e-5)
-    with pytest.raises(mt.InputShapeError):
+    with pytest.raises(mt.errors.InputShapeError):
         dl.reynolds(np.ones(2), np.ones(3), 1e-5)

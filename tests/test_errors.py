@@ -12,7 +12,7 @@ import masstransfer as mt
 @pytest.mark.parametrize("arg", ["T", "P"])
 def test_bad_state_names_argument_value_and_fix(arg, bad):
     kwargs = {"T": 300.0, "P": 101325.0, arg: bad}
-    with pytest.raises(mt.InputValueError) as info:
+    with pytest.raises(mt.errors.InputValueError) as info:
         mt.gas_diffusivity("water", "air", **kwargs)
     msg = str(info.value)
     assert msg.startswith(f"{arg}=")
@@ -22,46 +22,46 @@ def test_bad_state_names_argument_value_and_fix(arg, bad):
 
 
 def test_bad_entry_in_array_is_reported():
-    with pytest.raises(mt.InputValueError, match="array of shape \\(3,\\)"):
+    with pytest.raises(mt.errors.InputValueError, match="array of shape \\(3,\\)"):
         mt.gas_diffusivity("water", "air", np.array([300.0, math.nan, 310.0]))
 
 
 def test_mismatched_shapes():
-    with pytest.raises(mt.InputShapeError, match="broadcast"):
+    with pytest.raises(mt.errors.InputShapeError, match="broadcast"):
         mt.gas_diffusivity("water", "air", np.ones(3) * 300, np.ones(4) * 1e5)
 
 
 def test_unknown_species_and_method():
-    with pytest.raises(mt.UnknownSpeciesError):
+    with pytest.raises(mt.errors.UnknownSpeciesError):
         mt.gas_diffusivity("no-such-compound-q", "air", 300.0)
-    with pytest.raises(mt.UnknownMethodError, match="did you mean 'fuller'"):
+    with pytest.raises(mt.errors.UnknownMethodError, match="did you mean 'fuller'"):
         mt.gas_diffusivity("water", "air", 300.0, method="fulller")
-    with pytest.raises(mt.UnknownMethodError, match="wilke-chang"):
+    with pytest.raises(mt.errors.UnknownMethodError, match="wilke-chang"):
         mt.liquid_diffusivity("benzene", "water", 300.0, method="nope")
 
 
 def test_missing_constant_names_method_and_fix():
     lonely = mt.Species(name="oligomer (invented)", molar_mass=0.3)
-    with pytest.raises(mt.MissingConstantError, match=r"sigma.*Chapman-Enskog.*replace"):
+    with pytest.raises(mt.errors.MissingConstantError, match=r"sigma.*Chapman-Enskog.*replace"):
         mt.gas_diffusivity(lonely, "air", 300.0, method="chapman-enskog")
-    with pytest.raises(mt.MissingConstantError, match="fuller_volume"):
+    with pytest.raises(mt.errors.MissingConstantError, match="fuller_volume"):
         mt.gas_diffusivity(lonely, "air", 300.0)
-    with pytest.raises(mt.MissingConstantError, match="Vb"):
+    with pytest.raises(mt.errors.MissingConstantError, match="Vb"):
         mt.liquid_diffusivity(lonely, "water", 300.0)
 
 
 def test_wrong_types():
-    with pytest.raises(mt.InputValueError, match="not a number"):
+    with pytest.raises(mt.errors.InputValueError, match="not a number"):
         mt.gas_diffusivity("water", "air", "300")  # type: ignore[arg-type]
-    with pytest.raises(mt.InputValueError, match="cannot be read"):
+    with pytest.raises(mt.errors.InputValueError, match="cannot be read"):
         mt.gas_diffusivity("water", "air", [300.0, "hot"])  # type: ignore[list-item]
-    with pytest.raises(mt.UnknownSpeciesError):
+    with pytest.raises(mt.errors.UnknownSpeciesError):
         mt.gas_diffusivity(42, "air", 300.0)  # type: ignore[arg-type]
 
 
 def test_molar_mass_in_grams_is_caught():
-    with pytest.raises(mt.InputValueError, match="kg/mol"):
-        mt.fuller(300.0, 1e5, 32.0, 28.0, 16.3, 18.5)
+    with pytest.raises(mt.errors.InputValueError, match="kg/mol"):
+        mt.diffusivity.fuller(300.0, 1e5, 32.0, 28.0, 16.3, 18.5)
 
 
 def test_empty_array_gives_empty_result():

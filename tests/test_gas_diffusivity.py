@@ -43,7 +43,7 @@ def test_brokaw_methyl_chloride_sulfur_dioxide():
     # Poling, Prausnitz & O'Connell 5th ed., Example 11-2: CH3Cl-SO2 at 323 K, 1 bar; the
     # example's Brokaw estimate 0.084 cm^2/s, measured 0.078 (8 % error); constants as given in
     # that example (from memory)
-    D = mt.brokaw(
+    D = mt.diffusivity.brokaw(
         323.0, 1e5, 0.05049, 0.06406, 50.6e-6, 43.8e-6, 249.1, 263.2, 1.9 * 3.33564e-30, 1.6 * 3.33564e-30
     )
     assert pytest.approx(0.084e-4, rel=0.02) == D
@@ -62,12 +62,12 @@ def test_neufeld_against_tabulated_collision_integral():
 
 def test_fuller_volumes_from_structure():
     # Fuller et al. (1969) increments via Poling et al. 5th ed. Table 11-1 (from memory), by hand
-    assert mt.fuller_volume("benzene") == pytest.approx(6 * 15.9 + 6 * 2.31 - 18.3)
-    assert mt.fuller_volume("cyclohexane") == pytest.approx(6 * 15.9 + 12 * 2.31)
-    assert mt.fuller_volume("furan") == pytest.approx(4 * 15.9 + 4 * 2.31 + 6.11 - 18.3)
-    assert mt.fuller_volume("chloroform") == pytest.approx(15.9 + 2.31 + 3 * 21.0)
-    assert mt.fuller_volume("water") == 13.1
-    assert mt.fuller_volume("carbon dioxide") == 26.9
+    assert mt.diffusivity.fuller_volume("benzene") == pytest.approx(6 * 15.9 + 6 * 2.31 - 18.3)
+    assert mt.diffusivity.fuller_volume("cyclohexane") == pytest.approx(6 * 15.9 + 12 * 2.31)
+    assert mt.diffusivity.fuller_volume("furan") == pytest.approx(4 * 15.9 + 4 * 2.31 + 6.11 - 18.3)
+    assert mt.diffusivity.fuller_volume("chloroform") == pytest.approx(15.9 + 2.31 + 3 * 21.0)
+    assert mt.diffusivity.fuller_volume("water") == 13.1
+    assert mt.diffusivity.fuller_volume("carbon dioxide") == 26.9
 
 
 # --- validation table -----------------------------------------------------------
@@ -124,7 +124,7 @@ def test_chapman_enskog_against_cantera(gri30, a, b, T):
     ref = gri30.binary_diff_coeffs[i, j]
     ta, tb = gri30.species(a).transport, gri30.species(b).transport
     k_b = 1.380649e-23
-    ours = mt.chapman_enskog(
+    ours = mt.diffusivity.chapman_enskog(
         T,
         ATM,
         gri30.molecular_weights[i] / 1000,
@@ -212,27 +212,31 @@ def test_broadcasting_T_against_P():
 def test_rescale_matches_fuller_temperature_law():
     d1 = mt.gas_diffusivity("toluene", "air", 300.0, ATM)
     d2 = mt.gas_diffusivity("toluene", "air", 450.0, 2 * ATM)
-    assert mt.rescale_gas_diffusivity(d1, 300.0, ATM, 450.0, 2 * ATM) == pytest.approx(d2, rel=1e-12)
+    assert mt.diffusivity.rescale_gas_diffusivity(d1, 300.0, ATM, 450.0, 2 * ATM) == pytest.approx(
+        d2, rel=1e-12
+    )
 
 
 def test_blanc_mixture_reduces_to_binary_and_to_harmonic_mean():
     d_n2 = mt.gas_diffusivity("water", "nitrogen", 320.0)
     d_co2 = mt.gas_diffusivity("water", "carbon dioxide", 320.0)
-    assert mt.gas_diffusivity_in_mixture("water", {"nitrogen": 1.0}, 320.0) == pytest.approx(d_n2)
-    mixed = mt.gas_diffusivity_in_mixture("water", {"nitrogen": 0.5, "carbon dioxide": 0.5}, 320.0)
+    assert mt.diffusivity.gas_diffusivity_in_mixture("water", {"nitrogen": 1.0}, 320.0) == pytest.approx(d_n2)
+    mixed = mt.diffusivity.gas_diffusivity_in_mixture(
+        "water", {"nitrogen": 0.5, "carbon dioxide": 0.5}, 320.0
+    )
     # Blanc's law by hand: harmonic mean for equal fractions
     assert mixed == pytest.approx(2.0 / (1.0 / d_n2 + 1.0 / d_co2), rel=1e-12)
 
 
 def test_high_pressure_warns():
-    with pytest.warns(mt.EnvelopeWarning, match="low-pressure"):
+    with pytest.warns(mt.errors.EnvelopeWarning, match="low-pressure"):
         mt.gas_diffusivity("methane", "nitrogen", 300.0, 5e6)
 
 
 def test_report_records_method_constants_and_warnings():
     r = mt.diffusivity_report("toluene", "air", 350.0)
     assert r.value == mt.gas_diffusivity("toluene", "air", 350.0)
-    assert r.constants["solute"]["fuller_volume"][0] == pytest.approx(mt.fuller_volume("toluene"))
+    assert r.constants["solute"]["fuller_volume"][0] == pytest.approx(mt.diffusivity.fuller_volume("toluene"))
     assert "Fuller" in r.accuracy
     assert "chemicals" in r.constants["solute"]["molar_mass"][1]
     high = mt.diffusivity_report("methane", "nitrogen", 300.0, 5e6)

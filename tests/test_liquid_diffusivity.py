@@ -19,28 +19,32 @@ def test_wilke_chang_ethylbenzene_in_water():
 def test_wilke_chang_by_hand():
     # Wilke & Chang (1955) equation evaluated by hand: 7.4e-8*(2.6*18.015)**0.5*298/(0.89*74**0.6)
     expected_cgs = 7.4e-8 * (2.6 * 18.015) ** 0.5 * 298.0 / (0.89 * 74.0**0.6)
-    assert mt.wilke_chang(298.0, 0.89e-3, 0.018015, 74e-6, 2.6) == pytest.approx(expected_cgs * 1e-4)
+    assert mt.diffusivity.wilke_chang(298.0, 0.89e-3, 0.018015, 74e-6, 2.6) == pytest.approx(
+        expected_cgs * 1e-4
+    )
 
 
 def test_hayduk_minhas_aqueous_by_hand():
     # Hayduk & Minhas (1982) aqueous form, by hand for V_A = 96 cm^3/mol, 0.89 cP, 298 K
     eps = 9.58 / 96.0 - 1.12
     expected_cgs = 1.25e-8 * (96.0**-0.19 - 0.292) * 298.0**1.52 * 0.89**eps
-    assert mt.hayduk_minhas_aqueous(298.0, 0.89e-3, 96e-6) == pytest.approx(expected_cgs * 1e-4)
+    assert mt.diffusivity.hayduk_minhas_aqueous(298.0, 0.89e-3, 96e-6) == pytest.approx(expected_cgs * 1e-4)
 
 
 def test_tyn_calus_by_hand():
     # Tyn & Calus (1975), by hand: V_A 74, V_B 96 cm^3/mol, parachors 161.6 and 206.0, 0.6 cP
     expected_cgs = 8.93e-8 * (74.0 / 96.0**2) ** (1 / 6) * (206.0 / 161.6) ** 0.6 * 298.0 / 0.6
-    got = mt.tyn_calus(298.0, 0.6e-3, 74e-6, 96e-6, 161.6 / 5.623413e6, 206.0 / 5.623413e6)
+    got = mt.diffusivity.tyn_calus(298.0, 0.6e-3, 74e-6, 96e-6, 161.6 / 5.623413e6, 206.0 / 5.623413e6)
     assert got == pytest.approx(expected_cgs * 1e-4, rel=1e-6)
 
 
 def test_stokes_einstein_for_a_particle():
     # k_B T / (6 pi mu r), by hand, for a 50 nm radius sphere in water at 298.15 K
     expected = 1.380649e-23 * 298.15 / (6 * np.pi * 0.89e-3 * 50e-9)
-    assert mt.stokes_einstein(298.15, 0.89e-3, 50e-9) == pytest.approx(expected)
-    assert mt.stokes_einstein(298.15, 0.89e-3, 50e-9, boundary="slip") == pytest.approx(expected * 1.5)
+    assert mt.diffusivity.stokes_einstein(298.15, 0.89e-3, 50e-9) == pytest.approx(expected)
+    assert mt.diffusivity.stokes_einstein(298.15, 0.89e-3, 50e-9, boundary="slip") == pytest.approx(
+        expected * 1.5
+    )
 
 
 _IDS = [f"{a}-in-{b}" for a, b, *_ in LIQUID_SYSTEMS]
@@ -86,7 +90,9 @@ def test_alcohol_solvent_rule_raises_the_estimate():
     with_rule = mt.liquid_diffusivity("toluene", "ethanol", 298.15, method="tyn-calus")
     inp = mt.diffusivity.liquid_diffusivity_inputs("toluene", "ethanol", "tyn-calus")
     mu = mt.liquid_model("ethanol").viscosity(298.15)
-    without = mt.tyn_calus(298.15, mu, inp.V_solute, inp.V_solvent, inp.parachor_solute, inp.parachor_solvent)
+    without = mt.diffusivity.tyn_calus(
+        298.15, mu, inp.V_solute, inp.V_solvent, inp.parachor_solute, inp.parachor_solvent
+    )
     f = 8 * mu * 1000
     assert with_rule == pytest.approx(without * f ** (-1 / 3) * f**0.6, rel=1e-10)
 
@@ -98,7 +104,7 @@ def test_caller_viscosity_overrides_property_layer():
 
 
 def test_viscous_solvent_warns():
-    with pytest.warns(mt.EnvelopeWarning, match="viscous"):
+    with pytest.warns(mt.errors.EnvelopeWarning, match="viscous"):
         mt.liquid_diffusivity("benzene", "water", 298.15, mu_solvent=0.05)
 
 
@@ -135,7 +141,7 @@ def test_hayduk_minhas_general_and_paraffin_by_hand():
     # Hayduk & Minhas (1982) non-aqueous and n-paraffin forms (Poling et al. 5th ed. 11-9), by hand
     p_a, p_b = 161.6, 206.0
     general = 1.55e-8 * 298.0**1.29 * p_b**0.5 * p_a**-0.42 / (0.6**0.92 * 96.0**0.23)
-    got = mt.hayduk_minhas(298.0, 0.6e-3, 96e-6, p_a / 5.623413e6, p_b / 5.623413e6)
+    got = mt.diffusivity.hayduk_minhas(298.0, 0.6e-3, 96e-6, p_a / 5.623413e6, p_b / 5.623413e6)
     assert got == pytest.approx(general * 1e-4, rel=1e-6)
     eps = 10.2 / 96.0 - 0.791
     paraffin = 13.3e-8 * 298.0**1.47 * 0.3**eps / 96.0**0.71

@@ -72,16 +72,16 @@ def test_array_and_scalar_agree():
 
 def test_solvent_not_liquid_raises():
     w = mt.liquid_model("water")
-    with pytest.raises(mt.OutOfRangeError, match=r"T=700\.0"):
+    with pytest.raises(mt.errors.OutOfRangeError, match=r"T=700\.0"):
         w.viscosity(700.0)
-    with pytest.raises(mt.OutOfRangeError):
+    with pytest.raises(mt.errors.OutOfRangeError):
         w.viscosity(np.array([300.0, 250.0]))
-    with pytest.raises(mt.OutOfRangeError):
+    with pytest.raises(mt.errors.OutOfRangeError):
         mt.liquid_diffusivity("benzene", "water", 200.0)
 
 
 def test_parachor_against_published_values():
-    from masstransfer.properties import parachor
+    from masstransfer.substances import parachor
 
     # Quayle (1953) group-contribution parachors as listed by Poling et al. 5th ed. Section 12-3:
     # benzene about 205, water about 52 (from memory); tabulated cgs form

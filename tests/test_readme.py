@@ -52,6 +52,6 @@ def test_tour_blocks_run_in_order():
     assert len(blocks) >= 4
     namespace: dict[str, object] = {}
     with warnings.catch_warnings():
-        warnings.simplefilter("ignore", mt.EnvelopeWarning)  # the tour shows one on purpose
+        warnings.simplefilter("ignore", mt.errors.EnvelopeWarning)  # the tour shows one on purpose
         for block in blocks:
             exec(compile(block, str(README), "exec"), namespace)

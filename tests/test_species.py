@@ -5,7 +5,7 @@ import dataclasses
 import pytest
 
 import masstransfer as mt
-from masstransfer.species import le_bas_volume
+from masstransfer.substances import le_bas_volume
 
 
 def test_resolves_name_cas_and_formula_to_the_same_species():
@@ -40,7 +40,7 @@ def test_air_pseudo_species():
 
 
 def test_second_lookup_is_cached():
-    from masstransfer.species import _resolve
+    from masstransfer.substances._species import _resolve
 
     first = mt.species("ethyl acetate")
     hits = _resolve.cache_info().hits
@@ -52,7 +52,7 @@ def test_second_lookup_is_cached():
 def test_hand_built_species_and_replace():
     s = mt.Species(name="resin monomer (invented)", molar_mass=0.2, Tb=500.0, Vb=2.0e-4)
     assert s.require("Tb", "test") == 500.0
-    with pytest.raises(mt.MissingConstantError, match="sigma"):
+    with pytest.raises(mt.errors.MissingConstantError, match="sigma"):
         s.require("sigma", "Chapman-Enskog")
     t = mt.species("toluene").replace(Vb=1.2e-4)
     assert t.Vb == 1.2e-4
@@ -78,7 +78,7 @@ def test_le_bas_volume(atoms, smiles, expected_cm3):
 
 
 def test_unknown_species_message_says_how_to_build_one():
-    with pytest.raises(mt.UnknownSpeciesError, match="Species\\(name=") as info:
+    with pytest.raises(mt.errors.UnknownSpeciesError, match="Species\\(name=") as info:
         mt.species("not-a-chemical-xyz")
     assert isinstance(info.value, ValueError)
     assert isinstance(info.value, LookupError)
@@ -96,7 +96,7 @@ def test_unknown_species_message_says_how_to_build_one():
 )
 def test_hand_built_species_rejects_wrong_units(field, value, hint):
     kwargs = {"name": "x", "molar_mass": 0.1, field: value}
-    with pytest.raises(mt.InputValueError, match=hint):
+    with pytest.raises(mt.errors.InputValueError, match=hint):
         mt.Species(**kwargs)
 
 

@@ -11,8 +11,8 @@ from hypothesis import given
 from hypothesis import strategies as st
 
 import masstransfer as mt
-from masstransfer import correlations
-from masstransfer import strategies as mts
+from masstransfer import surface
+from masstransfer import testing as mts
 
 
 @given(mts.gas_states())
@@ -50,7 +50,7 @@ def test_liquid_state_arrays(state):
 
 @given(st.data())
 def test_correlation_inputs_stay_inside_envelopes(data):
-    rec = data.draw(st.sampled_from(list(correlations.all())))
+    rec = data.draw(st.sampled_from(list(surface.all_correlations())))
     inputs = data.draw(mts.correlation_inputs(rec))
     result = rec.evaluate("heat", strict=True, **inputs)  # strict: leaving the envelope would raise
     assert np.all(np.isfinite(result.value))
@@ -65,7 +65,7 @@ def test_exported_round_trip_check(h, Sc):
 
 
 def test_checks_fail_when_the_invariant_fails(monkeypatch):
-    from masstransfer import analogy
+    from masstransfer.surface import _analogy as analogy
 
     real = analogy.heat_transfer_coefficient_from_mass
     monkeypatch.setattr(analogy, "heat_transfer_coefficient_from_mass", lambda k, **kw: 1.01 * real(k, **kw))
@@ -76,7 +76,7 @@ def test_checks_fail_when_the_invariant_fails(monkeypatch):
 def test_missing_hypothesis_gives_a_clear_error():
     code = (
         "import sys; sys.modules['hypothesis'] = None\n"
-        "try:\n    import masstransfer.strategies\nexcept Exception as e:\n"
+        "try:\n    import masstransfer.testing\nexcept Exception as e:\n"
         "    print(type(e).__name__, isinstance(e, ImportError), e)\n"
     )
     out = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, check=True).stdout

@@ -9,7 +9,8 @@ from hypothesis import strategies as st
 from scipy import integrate
 
 import masstransfer as mt
-from masstransfer import transient as tr
+from masstransfer import bodies as tr
+from masstransfer.bodies import _transient
 
 SHAPES = list(tr.SHAPES)
 
@@ -32,9 +33,9 @@ def test_sphere_half_time():
 @pytest.mark.parametrize("shape", SHAPES)
 def test_series_and_short_time_forms_agree(shape, monkeypatch):
     T = np.array([1e-4, 1e-3, 0.003, 0.006, 0.009])
-    short = tr._uptake_constant_surface(shape, T)
-    monkeypatch.setitem(tr._SHORT_TIME, shape, 0.0)
-    series = tr._uptake_constant_surface(shape, T)
+    short = _transient._uptake_constant_surface(shape, T)
+    monkeypatch.setitem(_transient._SHORT_TIME, shape, 0.0)
+    series = _transient._uptake_constant_surface(shape, T)
     assert short == pytest.approx(series, abs=1e-9)
 
 
@@ -152,15 +153,15 @@ def test_fit_diffusivity_recovers_d_with_noise():
 
 
 def test_bad_input():
-    with pytest.raises(mt.UnknownMethodError, match="cube"):
+    with pytest.raises(mt.errors.UnknownMethodError, match="cube"):
         tr.fractional_uptake("cube", 1.0, 1e-9, 1e-3)
-    with pytest.raises(mt.InputValueError, match=r"^t="):
+    with pytest.raises(mt.errors.InputValueError, match=r"^t="):
         tr.fractional_uptake("slab", -1.0, 1e-9, 1e-3)
-    with pytest.raises(mt.InputValueError, match=r"^D="):
+    with pytest.raises(mt.errors.InputValueError, match=r"^D="):
         tr.fractional_uptake("slab", 1.0, 0.0, 1e-3)
-    with pytest.raises(mt.InputValueError, match=r"^size="):
+    with pytest.raises(mt.errors.InputValueError, match=r"^size="):
         tr.fractional_uptake("slab", 1.0, 1e-9, -1e-3)
-    with pytest.raises(mt.InputValueError, match="biot"):
+    with pytest.raises(mt.errors.InputValueError, match="biot"):
         tr.fractional_uptake("slab", 1.0, 1e-9, 1e-3, biot=-2.0)
-    with pytest.raises(mt.InputValueError, match="position"):
+    with pytest.raises(mt.errors.InputValueError, match="position"):
         tr.concentration_profile("slab", 2e-3, 1.0, 1e-9, 1e-3)

@@ -57,11 +57,11 @@ def test_other_liquids_evaporate_colder():
 
 
 def test_bad_input():
-    with pytest.raises(mt.InputValueError, match="relative_humidity"):
+    with pytest.raises(mt.errors.InputValueError, match="relative_humidity"):
         mt.wet_bulb_temperature(300.0, 1.5)
-    with pytest.raises(mt.InputValueError, match="relative_humidity"):
+    with pytest.raises(mt.errors.InputValueError, match="relative_humidity"):
         mt.wet_bulb_temperature(300.0, -0.1)
-    with pytest.raises(mt.InputValueError, match=r"^T="):
+    with pytest.raises(mt.errors.InputValueError, match=r"^T="):
         mt.wet_bulb_temperature(float("nan"), 0.5)
-    with pytest.raises(mt.OutOfRangeError, match="freeze"):
+    with pytest.raises(mt.errors.OutOfRangeError, match="freeze"):
         mt.wet_bulb_temperature(276.0, 0.05)

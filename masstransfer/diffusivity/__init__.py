@@ -1,40 +1,41 @@
-"""Diffusivity estimation: gases, liquids, porous solids and solids."""
+"""Diffusivity estimation: gases, liquids, porous solids and solids.
+
+The names-in entry points :func:`masstransfer.gas_diffusivity`,
+:func:`masstransfer.liquid_diffusivity` and :func:`masstransfer.diffusivity_report` live at the
+top level; the numbers-in methods, the mixture rule and the porous and solid media are here.
+"""
 
 from __future__ import annotations
 
-from .gas import (
+from ._gas import (
     GAS_METHODS,
     blanc,
     brokaw,
     chapman_enskog,
     fuller,
     fuller_volume,
-    gas_diffusivity,
     gas_diffusivity_in_mixture,
     neufeld_collision_integral,
     rescale_gas_diffusivity,
     wilke_lee,
 )
-from .liquid import (
+from ._liquid import (
     LIQUID_METHODS,
     LiquidDiffusivityInputs,
     hayduk_minhas,
     hayduk_minhas_aqueous,
     hayduk_minhas_paraffin,
-    liquid_diffusivity,
     liquid_diffusivity_inputs,
     stokes_einstein,
     tyn_calus,
     wilke_chang,
 )
-from .porous import bosanquet, effective_diffusivity, knudsen_diffusivity
-from .report import DiffusivityReport, diffusivity_report
-from .solid import arrhenius_diffusivity, arrhenius_parameters
+from ._porous import bosanquet, effective_diffusivity, knudsen_diffusivity
+from ._solid import arrhenius_diffusivity, arrhenius_parameters
 
 __all__ = [
     "GAS_METHODS",
     "LIQUID_METHODS",
-    "DiffusivityReport",
     "LiquidDiffusivityInputs",
     "arrhenius_diffusivity",
     "arrhenius_parameters",
@@ -42,17 +43,14 @@ __all__ = [
     "bosanquet",
     "brokaw",
     "chapman_enskog",
-    "diffusivity_report",
     "effective_diffusivity",
     "fuller",
     "fuller_volume",
-    "gas_diffusivity",
     "gas_diffusivity_in_mixture",
     "hayduk_minhas",
     "hayduk_minhas_aqueous",
     "hayduk_minhas_paraffin",
     "knudsen_diffusivity",
-    "liquid_diffusivity",
     "liquid_diffusivity_inputs",
     "neufeld_collision_integral",
     "rescale_gas_diffusivity",

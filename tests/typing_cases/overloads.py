@@ -8,7 +8,7 @@ import numpy as np
 import numpy.typing as npt
 
 import masstransfer as mt
-from masstransfer import barriers, transient
+from masstransfer import bodies
 
 if TYPE_CHECKING:
     from typing_extensions import assert_type
@@ -22,16 +22,21 @@ def cases() -> None:
     assert_type(mt.gas_diffusivity("water", "air", T), npt.NDArray[np.float64])
     assert_type(mt.liquid_diffusivity("benzene", "water", 298.15), float)
     assert_type(mt.liquid_diffusivity("benzene", "water", T), npt.NDArray[np.float64])
-    assert_type(mt.fuller(300.0, 1e5, 0.018, 0.029, 13.1, 19.7), float)
-    assert_type(mt.fuller(T, 1e5, 0.018, 0.029, 13.1, 19.7), npt.NDArray[np.float64])
-    assert_type(mt.mass_transfer_coefficient_from_heat(30.0, rho=1.2, cp=1007.0, Pr=0.7, Sc=0.6), float)
+    assert_type(mt.diffusivity.fuller(300.0, 1e5, 0.018, 0.029, 13.1, 19.7), float)
+    assert_type(mt.diffusivity.fuller(T, 1e5, 0.018, 0.029, 13.1, 19.7), npt.NDArray[np.float64])
     assert_type(
-        mt.mass_transfer_coefficient_from_heat(T, rho=1.2, cp=1007.0, Pr=0.7, Sc=0.6), npt.NDArray[np.float64]
+        mt.surface.mass_transfer_coefficient_from_heat(30.0, rho=1.2, cp=1007.0, Pr=0.7, Sc=0.6), float
     )
-    assert_type(mt.heat_transfer_coefficient_from_mass(0.03, rho=1.2, cp=1007.0, Pr=0.7, Sc=0.6), float)
+    assert_type(
+        mt.surface.mass_transfer_coefficient_from_heat(T, rho=1.2, cp=1007.0, Pr=0.7, Sc=0.6),
+        npt.NDArray[np.float64],
+    )
+    assert_type(
+        mt.surface.heat_transfer_coefficient_from_mass(0.03, rho=1.2, cp=1007.0, Pr=0.7, Sc=0.6), float
+    )
     assert_type(mt.wet_bulb_temperature(303.15, 0.5), float)
     assert_type(mt.wet_bulb_temperature(T, 0.5), npt.NDArray[np.float64])
-    assert_type(transient.fractional_uptake("slab", 10.0, 1e-9, 1e-3), float)
-    assert_type(transient.fractional_uptake("slab", T, 1e-9, 1e-3), npt.NDArray[np.float64])
-    assert_type(barriers.time_lag(5e-5, 1e-12), float)
-    assert_type(barriers.time_lag(T * 1e-7, 1e-12), npt.NDArray[np.float64])
+    assert_type(bodies.fractional_uptake("slab", 10.0, 1e-9, 1e-3), float)
+    assert_type(bodies.fractional_uptake("slab", T, 1e-9, 1e-3), npt.NDArray[np.float64])
+    assert_type(bodies.time_lag(5e-5, 1e-12), float)
+    assert_type(bodies.time_lag(T * 1e-7, 1e-12), npt.NDArray[np.float64])

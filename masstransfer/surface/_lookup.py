@@ -4,10 +4,10 @@ Every record carries its geometry, regime, characteristic length, boundary
 condition, envelope and source, and gives Nu from (Re, Pr) or Sh from
 (Re, Sc) with the same equation::
 
-    import masstransfer as mt
-    rec = mt.correlations.get("sphere-ranz-marshall")
+    from masstransfer import surface
+    rec = surface.correlation("sphere-ranz-marshall")
     rec.sherwood(Re=120.0, Sc=0.6)
-    mt.correlations.find(geometry="sphere", Re=120.0, Sc=0.6)   # best-suited first
+    surface.find_correlations(geometry="sphere", Re=120.0, Sc=0.6)   # best-suited first
 
 Leaving a record's envelope issues an
 :class:`~masstransfer.errors.EnvelopeWarning`; ``strict=True`` raises
@@ -16,7 +16,6 @@ Leaving a record's envelope issues an
 
 from __future__ import annotations
 
-import builtins
 import difflib
 from typing import Any
 
@@ -25,16 +24,14 @@ import numpy as np
 from .._validation import guard, guard_module
 from ..errors import InputValueError, UnknownMethodError
 from ._catalogue import RECORDS, darcy_friction_smooth
-from ._record import Correlation, CorrelationResult
+from ._record import Correlation
 
 __all__ = [
-    "Correlation",
-    "CorrelationResult",
-    "all",
+    "all_correlations",
+    "correlation",
     "darcy_friction_smooth",
-    "find",
+    "find_correlations",
     "geometries",
-    "get",
 ]
 
 _BY_SLUG = {r.slug: r for r in RECORDS}
@@ -42,7 +39,7 @@ if len(_BY_SLUG) != len(RECORDS):  # pragma: no cover - guards the table
     raise RuntimeError("duplicate correlation slugs")
 
 
-def all() -> tuple[Correlation, ...]:
+def all_correlations() -> tuple[Correlation, ...]:
     """Every record of the catalogue.
 
     Returns
@@ -56,7 +53,7 @@ def all() -> tuple[Correlation, ...]:
 
     Examples
     --------
-    >>> len(all()) >= 30
+    >>> len(all_correlations()) >= 30
     True
 
     """
@@ -84,7 +81,7 @@ def geometries() -> tuple[str, ...]:
     return tuple(dict.fromkeys(r.geometry for r in RECORDS))
 
 
-def get(slug: str) -> Correlation:
+def correlation(slug: str) -> Correlation:
     """Look a record up by its slug.
 
     Parameters
@@ -108,7 +105,7 @@ def get(slug: str) -> Correlation:
 
     Examples
     --------
-    >>> get("sphere-ranz-marshall").sherwood(Re=0.0, Sc=1.0)
+    >>> correlation("sphere-ranz-marshall").sherwood(Re=0.0, Sc=1.0)
     2.0
 
     """
@@ -118,11 +115,11 @@ def get(slug: str) -> Correlation:
         close = difflib.get_close_matches(str(slug), list(_BY_SLUG), n=5, cutoff=0.4)
         hint = f"; close matches: {', '.join(close)}" if close else ""
         raise UnknownMethodError(
-            f"no correlation {slug!r}{hint}; masstransfer.correlations.all() lists every record"
+            f"no correlation {slug!r}{hint}; masstransfer.surface.all_correlations() lists every record"
         ) from None
 
 
-def find(
+def find_correlations(
     geometry: str | None = None, *, transport: str | None = None, **conditions: Any
 ) -> list[Correlation]:
     """Find the records whose envelopes cover the given conditions, best-suited first.
@@ -155,7 +152,7 @@ def find(
 
     Examples
     --------
-    >>> [r.slug for r in find("duct", Re=5e4, Pr=3.0)][:2]
+    >>> [r.slug for r in find_correlations("duct", Re=5e4, Pr=3.0)][:2]
     ['duct-gnielinski', 'duct-dittus-boelter']
 
     """
@@ -167,7 +164,7 @@ def find(
         raise InputValueError("pass Sc (mass transfer) or Pr (heat transfer), not both")
     wanted = {("Pr" if k == "Sc" else k): np.asarray(v, dtype=float) for k, v in conditions.items()}
     if geometry is not None and geometry not in geometries():
-        close = difflib.get_close_matches(geometry, builtins.list(geometries()), n=3, cutoff=0.3)
+        close = difflib.get_close_matches(geometry, list(geometries()), n=3, cutoff=0.3)
         raise UnknownMethodError(
             f"geometry={geometry!r} is not in the catalogue"
             + (f" (did you mean {', '.join(repr(c) for c in close)}?)" if close else "")
@@ -198,7 +195,7 @@ def find(
     return [rec for _, rec in hits]
 
 
-guard_module(globals(), ("all", "geometries", "get", "find"))
+guard_module(globals(), ("all_correlations", "geometries", "correlation", "find_correlations"))
 darcy_friction_smooth = guard(darcy_friction_smooth)
 for _m in ("nusselt", "sherwood", "evaluate"):
     # record outputs are finite by construction for inputs inside the accepted magnitudes

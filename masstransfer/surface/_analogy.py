@@ -20,10 +20,11 @@ from typing import Literal, overload
 
 import numpy as np
 
-from ._typing import ArrayLike, FloatArray, FloatOrArray
-from ._validation import check_nonnegative, check_positive, check_shapes, finish, guard_module, warn_caller
-from .errors import InputValueError
-from .species import R_GAS, Species, species
+from .._typing import ArrayLike, FloatArray, FloatOrArray
+from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard_module, warn_caller
+from ..constants import R_GAS
+from ..errors import InputValueError
+from ..substances._species import Species, species
 
 __all__ = [
     "TransferCoefficients",
@@ -225,7 +226,7 @@ def sherwood_from_nusselt(
     -----
     Exact only for correlations of the pure power form C Re^a Pr^m; for
     forms with an additive constant (2 + ... for spheres) evaluate the
-    correlation with Sc instead (``correlations.get(...).sherwood``).
+    correlation with Sc instead (``surface.correlation(...).sherwood``).
 
     References
     ----------
@@ -293,7 +294,7 @@ def colburn_j_from_friction(f_darcy: ArrayLike) -> FloatOrArray:
     ----------
     f_darcy : float or array_like
         Darcy friction factor [-] (e.g. from ``fluids.friction``;
-        :func:`masstransfer.correlations.darcy_friction_smooth`).
+        :func:`masstransfer.surface.darcy_friction_smooth`).
 
     Returns
     -------
@@ -624,8 +625,9 @@ def mass_transfer_from_heat(
     (0.0345, 0.873)
 
     """
-    from .diffusivity import gas_diffusivity, liquid_diffusivity
-    from .properties import gas_model, liquid_model
+    from ..diffusivity._gas import gas_diffusivity
+    from ..diffusivity._liquid import liquid_diffusivity
+    from ..substances._properties import gas_model, liquid_model
 
     if phase not in ("gas", "liquid"):
         raise InputValueError(f"phase={phase!r} must be 'gas' or 'liquid'")

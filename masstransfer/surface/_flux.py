@@ -9,8 +9,8 @@ from __future__ import annotations
 
 import numpy as np
 
-from ._typing import ArrayLike, FloatOrArray
-from ._validation import (
+from .._typing import ArrayLike, FloatOrArray
+from .._validation import (
     as_float,
     check_nonnegative,
     check_positive,
@@ -19,8 +19,8 @@ from ._validation import (
     guard_module,
     in_range,
 )
-from .errors import InputValueError
-from .species import R_GAS
+from ..constants import R_GAS
+from ..errors import InputValueError
 
 __all__ = [
     "ackermann_correction",

@@ -18,9 +18,9 @@ from __future__ import annotations
 
 import numpy as np
 
-from ._typing import ArrayLike, FloatOrArray
-from ._validation import check_positive, check_shapes, finish, guard_module, in_range
-from .species import R_GAS
+from .._typing import ArrayLike, FloatOrArray
+from .._validation import check_positive, check_shapes, finish, guard_module, in_range
+from ..constants import R_GAS
 
 __all__ = [
     "F_from_k",
@@ -424,7 +424,7 @@ def overall_gas_coefficient(k_y: ArrayLike, k_x: ArrayLike, m: ArrayLike) -> Flo
     m : float or array_like
         Slope of the equilibrium line, y* = m x [-]; for Henry's law
         :math:`p = H x`, m = H/P (see
-        :func:`masstransfer.properties.henry_constant`).
+        :func:`masstransfer.substances.henry_constant`).
 
     Returns
     -------

@@ -11,10 +11,10 @@ from typing import Literal
 from .._typing import ArrayLike, FloatOrArray
 from .._validation import check_positive, guard_module
 from ..errors import InputValueError
-from ..species import Species, species
+from ..substances._species import Species, species
 from ._common import normalise_method
-from .gas import GAS_METHODS, fuller_volume, gas_diffusivity
-from .liquid import LIQUID_METHODS, liquid_diffusivity, liquid_diffusivity_inputs
+from ._gas import GAS_METHODS, fuller_volume, gas_diffusivity
+from ._liquid import LIQUID_METHODS, liquid_diffusivity, liquid_diffusivity_inputs
 
 __all__ = ["DiffusivityReport", "diffusivity_report"]
 
@@ -187,7 +187,7 @@ def diffusivity_report(
                 "solute": {"Vb (as used)": (inp.V_solute, a.sources.get("Vb", "user"))},
                 "medium": {
                     "molar_mass": (b.molar_mass, b.sources.get("molar_mass", "user")),
-                    "viscosity": (None, "thermo model via masstransfer.properties"),
+                    "viscosity": (None, "thermo model via masstransfer.substances"),
                 },
             }
             if m == "wilke-chang":

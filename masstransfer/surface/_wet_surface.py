@@ -20,10 +20,11 @@ from typing import overload
 
 import numpy as np
 
-from ._typing import ArrayLike, FloatArray, FloatOrArray
-from ._validation import check_nonnegative, check_positive, check_shapes, finish, guard_module, in_range
-from .errors import OutOfRangeError
-from .species import R_GAS, Species, species
+from .._typing import ArrayLike, FloatArray, FloatOrArray
+from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard_module, in_range
+from ..constants import R_GAS
+from ..errors import OutOfRangeError
+from ..substances._species import Species, species
 
 __all__ = ["wet_bulb_temperature", "wet_surface_temperature"]
 
@@ -89,8 +90,8 @@ def wet_surface_temperature(
     3.7
 
     """
-    from .diffusivity import gas_diffusivity
-    from .properties import gas_model, liquid_model
+    from ..diffusivity._gas import gas_diffusivity
+    from ..substances._properties import gas_model, liquid_model
 
     Tv = check_positive("T", T)
     y = check_nonnegative("y_bulk", y_bulk)
@@ -196,7 +197,7 @@ def wet_bulb_temperature(T: ArrayLike, relative_humidity: ArrayLike, P: ArrayLik
     21.8
 
     """
-    from .properties import liquid_model
+    from ..substances._properties import liquid_model
 
     Tv = check_positive("T", T)
     rh = check_nonnegative("relative_humidity", relative_humidity)

@@ -22,10 +22,10 @@ from typing import Final, overload
 
 import numpy as np
 
-from ._typing import ArrayLike, FloatArray, FloatOrArray
-from ._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard_module
-from .errors import InputValueError, UnknownMethodError
-from .species import R_GAS
+from .._typing import ArrayLike, FloatArray, FloatOrArray
+from .._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard_module
+from ..constants import ATM, R_GAS, T_ICE
+from ..errors import InputValueError, UnknownMethodError
 
 __all__ = [
     "FLUX_UNITS",
@@ -50,10 +50,9 @@ __all__ = [
 # --- units ------------------------------------------------------------------------------
 #: Moles in one cm^3 of ideal gas at STP (273.15 K, 101325 Pa) [mol] (IUPAC older STP; the
 #: convention of the permeation trade's cm^3(STP)).
-_CM3_STP: Final = 1e-6 * 101325.0 / (R_GAS * 273.15)
+_CM3_STP: Final = 1e-6 * ATM / (R_GAS * T_ICE)
 _DAY: Final = 86400.0
-_ATM: Final = 101325.0
-_CMHG: Final = 101325.0 / 76.0
+_CMHG: Final = ATM / 76.0
 _MIL: Final = 25.4e-6
 _IN2_100: Final = 100 * 0.0254**2
 _M_WATER: Final = 0.01801528  # kg/mol
@@ -65,10 +64,10 @@ PERMEABILITY_UNITS: Final = MappingProxyType(
         "mol/(m s Pa)": 1.0,
         "barrer": 1e-10 * _CM3_STP * 1e-2 / (1e-4 * _CMHG),
         "cm3(STP) cm/(cm2 s cmHg)": _CM3_STP * 1e-2 / (1e-4 * _CMHG),
-        "cm3(STP) mm/(m2 day atm)": _CM3_STP * 1e-3 / (_DAY * _ATM),
-        "cm3(STP) um/(m2 day atm)": _CM3_STP * 1e-6 / (_DAY * _ATM),
-        "cm3(STP) mil/(m2 day atm)": _CM3_STP * _MIL / (_DAY * _ATM),
-        "cm3(STP) mil/(100 in2 day atm)": _CM3_STP * _MIL / (_IN2_100 * _DAY * _ATM),
+        "cm3(STP) mm/(m2 day atm)": _CM3_STP * 1e-3 / (_DAY * ATM),
+        "cm3(STP) um/(m2 day atm)": _CM3_STP * 1e-6 / (_DAY * ATM),
+        "cm3(STP) mil/(m2 day atm)": _CM3_STP * _MIL / (_DAY * ATM),
+        "cm3(STP) mil/(100 in2 day atm)": _CM3_STP * _MIL / (_IN2_100 * _DAY * ATM),
         "g(H2O) mm/(m2 day kPa)": 1e-3 / _M_WATER * 1e-3 / (_DAY * 1000.0),
         "g(H2O) mil/(100 in2 day mmHg)": 1e-3 / _M_WATER * _MIL / (_IN2_100 * _DAY * _CMHG / 10.0),
     }
@@ -77,8 +76,8 @@ PERMEABILITY_UNITS: Final = MappingProxyType(
 PERMEANCE_UNITS: Final = MappingProxyType(
     {
         "mol/(m2 s Pa)": 1.0,
-        "cm3(STP)/(m2 day atm)": _CM3_STP / (_DAY * _ATM),
-        "cm3(STP)/(100 in2 day atm)": _CM3_STP / (_IN2_100 * _DAY * _ATM),
+        "cm3(STP)/(m2 day atm)": _CM3_STP / (_DAY * ATM),
+        "cm3(STP)/(100 in2 day atm)": _CM3_STP / (_IN2_100 * _DAY * ATM),
         "GPU": 1e-6 * _CM3_STP / (1e-4 * _CMHG),  # gas permeation unit, 1e-6 cm3(STP)/(cm2 s cmHg)
     }
 )
@@ -409,7 +408,7 @@ def steady_flux(
     for i, lay in enumerate(layers):
         if not isinstance(lay, Layer):
             raise InputValueError(
-                f"layers[{i}] is {type(lay).__name__}, not a Layer; build masstransfer.barriers.Layer(...)"
+                f"layers[{i}] is {type(lay).__name__}, not a Layer; build masstransfer.bodies.Layer(...)"
             )
     ph = float(check_nonnegative("p_high", p_high))
     pl = float(check_nonnegative("p_low", p_low))
@@ -592,7 +591,7 @@ def permeation_curve(t: ArrayLike, thickness: float, D: float, c_upstream: float
     Notes
     -----
     Downstream kept at zero concentration.  Both forms are summed to
-    :data:`masstransfer.transient.SERIES_TOLERANCE`.
+    :data:`masstransfer.bodies.SERIES_TOLERANCE`.
 
     References
     ----------
@@ -606,7 +605,7 @@ def permeation_curve(t: ArrayLike, thickness: float, D: float, c_upstream: float
     """
     from scipy import special
 
-    from .transient import SERIES_TOLERANCE
+    from ._transient import SERIES_TOLERANCE
 
     tv = check_nonnegative("t", t)
     L = float(check_positive("thickness", thickness))

@@ -6,8 +6,8 @@ import numpy as np
 
 from .._typing import ArrayLike, FloatOrArray
 from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard_module
+from ..constants import R_GAS
 from ..errors import InputValueError
-from ..species import R_GAS
 
 __all__ = ["arrhenius_diffusivity", "arrhenius_parameters"]
 

@@ -23,9 +23,9 @@ from typing import Any, Final, overload
 import numpy as np
 from scipy import special
 
-from ._typing import ArrayLike, FloatArray, FloatOrArray
-from ._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard_module
-from .errors import InputValueError, UnknownMethodError
+from .._typing import ArrayLike, FloatArray, FloatOrArray
+from .._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard_module
+from ..errors import InputValueError, UnknownMethodError
 
 __all__ = [
     "SERIES_TOLERANCE",

@@ -1,7 +1,7 @@
 """The records of the catalogue: equations, envelopes and sources.
 
 Each equation is written once, in its heat-transfer form (Nu from Re and
-Pr); :class:`~masstransfer.correlations.Correlation` maps Sc for Pr and Sh
+Pr); :class:`~masstransfer.surface.Correlation` maps Sc for Pr and Sh
 for Nu.  Equation numbers refer to Incropera, DeWitt, Bergman & Lavine,
 *Fundamentals of Heat and Mass Transfer*, 6th ed. (Wiley, 2007) unless
 another source is named; equation numbers and ranges were transcribed
@@ -901,7 +901,7 @@ RECORDS: tuple[Correlation, ...] = (
         accuracy="about 10-20 %",
         accuracy_pct=15.0,
         notes="Ra from the total density difference covers combined thermal and solutal buoyancy "
-        "(masstransfer.dimensionless.grashof_solutal)",
+        "(masstransfer.surface.grashof_solutal)",
         function=_vp_churchill_chu,
     ),
     _r(

@@ -6,7 +6,7 @@ import math
 
 from .._typing import ArrayLike, FloatOrArray
 from .._validation import check_positive, check_shapes, finish, guard_module, in_range
-from ..species import R_GAS
+from ..constants import R_GAS
 
 __all__ = ["bosanquet", "effective_diffusivity", "knudsen_diffusivity"]
 

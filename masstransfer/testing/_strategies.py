@@ -6,7 +6,7 @@ install.  A downstream test::
 
     from hypothesis import given
     import masstransfer as mt
-    from masstransfer import strategies as mts
+    from masstransfer import testing as mts
 
     @given(mts.gas_states())
     def test_my_dryer_model_is_symmetric(state):
@@ -26,19 +26,19 @@ from typing import TYPE_CHECKING, Any, Final
 
 import numpy as np
 
-from .errors import MissingDependencyError
+from ..errors import MissingDependencyError
 
 try:
     from hypothesis import strategies as st
     from hypothesis.extra import numpy as hnp
 except ImportError as exc:  # pragma: no cover - exercised by a test that hides hypothesis
     raise MissingDependencyError(
-        "masstransfer.strategies needs hypothesis; install it with "
+        "masstransfer.testing needs hypothesis; install it with "
         "`pip install hypothesis` (or `pip install masstransfer[test]`)"
     ) from exc
 
 if TYPE_CHECKING:
-    from .correlations import Correlation
+    from ..surface._record import Correlation
 
 __all__ = [
     "GAS_CARRIERS",
@@ -176,8 +176,8 @@ def gas_states(*, arrays: bool = False, max_size: int = 20) -> st.SearchStrategy
 
 def _liquid_ranges() -> dict[str, tuple[float, float]]:
     """Liquid temperature range of each solvent, resolved before any draw."""
-    from .properties import liquid_model
-    from .species import species
+    from ..substances._properties import liquid_model
+    from ..substances._species import species
 
     ranges = {}
     for solvent in SOLVENTS:
@@ -265,8 +265,8 @@ def correlation_inputs(
     Examples
     --------
     >>> from hypothesis import given, settings
-    >>> from masstransfer import correlations
-    >>> rec = correlations.get("sphere-ranz-marshall")
+    >>> from masstransfer import surface
+    >>> rec = surface.correlation("sphere-ranz-marshall")
     >>> @settings(max_examples=10)
     ... @given(correlation_inputs(rec, kind="mass"))
     ... def test_inside(inputs):
@@ -274,9 +274,9 @@ def correlation_inputs(
     >>> test_inside()
 
     """
-    from . import correlations
+    from ..surface import _lookup as catalogue
 
-    rec = correlations.get(record) if isinstance(record, str) else record
+    rec = catalogue.correlation(record) if isinstance(record, str) else record
     mass = kind == "mass"
 
     def bounds(key: str) -> tuple[float, float]:
@@ -337,7 +337,7 @@ def check_analogy_round_trip(h: Any, rho: Any, cp: Any, Pr: Any, Sc: Any, rtol: 
     >>> check_analogy_round_trip(30.0, 1.2, 1007.0, 0.71, 0.6)
 
     """
-    from .analogy import heat_transfer_coefficient_from_mass, mass_transfer_coefficient_from_heat
+    from ..surface._analogy import heat_transfer_coefficient_from_mass, mass_transfer_coefficient_from_heat
 
     k = mass_transfer_coefficient_from_heat(h, rho=rho, cp=cp, Pr=Pr, Sc=Sc)
     back = heat_transfer_coefficient_from_mass(k, rho=rho, cp=cp, Pr=Pr, Sc=Sc)
@@ -369,7 +369,7 @@ def check_gas_symmetry(state: GasState, method: str = "fuller") -> None:
     >>> check_gas_symmetry(GasState("water", "air", 300.0, 101325.0))
 
     """
-    from .diffusivity import gas_diffusivity
+    from ..diffusivity._gas import gas_diffusivity
 
     ab = gas_diffusivity(state.solute, state.carrier, state.T, state.P, method)
     ba = gas_diffusivity(state.carrier, state.solute, state.T, state.P, method)
@@ -404,7 +404,7 @@ def check_gas_pressure_scaling(state: GasState, factor: float = 2.0, method: str
     >>> check_gas_pressure_scaling(GasState("water", "air", 300.0, 101325.0), factor=0.5)
 
     """
-    from .diffusivity import gas_diffusivity
+    from ..diffusivity._gas import gas_diffusivity
 
     d1 = np.asarray(gas_diffusivity(state.solute, state.carrier, state.T, state.P, method))
     d2 = np.asarray(
@@ -438,8 +438,8 @@ def check_nusselt_equals_sherwood(record: str | Correlation, inputs: dict[str, A
     >>> check_nusselt_equals_sherwood("sphere-ranz-marshall", {"Re": 50.0, "Pr": 0.7})
 
     """
-    from . import correlations
+    from ..surface import _lookup as catalogue
 
-    rec = correlations.get(record) if isinstance(record, str) else record
+    rec = catalogue.correlation(record) if isinstance(record, str) else record
     mass = {("Sc" if k == "Pr" else k): v for k, v in inputs.items()}
     np.testing.assert_array_equal(rec.nusselt(**inputs), rec.sherwood(**mass), err_msg="Nu != Sh at Pr = Sc")

@@ -14,11 +14,11 @@ from typing import Any
 
 import numpy as np
 
-from ._typing import ArrayLike, FloatOrArray
-from ._validation import as_float, check_positive, check_shapes, finish, guard_module
+from .._typing import ArrayLike, FloatOrArray
+from .._validation import as_float, check_positive, check_shapes, finish, guard_module
+from ..constants import GRAVITY
 
 __all__ = [
-    "G_STANDARD",
     "archimedes",
     "biot_heat",
     "biot_mass",
@@ -42,8 +42,6 @@ __all__ = [
     "stanton_mass",
 ]
 
-#: Standard acceleration of gravity [m/s^2] (CGPM 1901, exact).
-G_STANDARD = 9.80665
 
 _FLUIDS_CORE: ModuleType | None = None
 
@@ -432,7 +430,7 @@ def peclet_mass(V: ArrayLike, L: ArrayLike, D: ArrayLike) -> FloatOrArray:
 
 
 def grashof_thermal(
-    L: ArrayLike, beta: ArrayLike, dT: ArrayLike, nu: ArrayLike, g: float = G_STANDARD
+    L: ArrayLike, beta: ArrayLike, dT: ArrayLike, nu: ArrayLike, g: float = GRAVITY
 ) -> FloatOrArray:
     """Thermal Grashof number :math:`Gr = g\\beta|\\Delta T|L^3/\\nu^2`.
 
@@ -471,7 +469,7 @@ def grashof_thermal(
 
 
 def grashof_solutal(
-    L: ArrayLike, rho_surface: ArrayLike, rho_bulk: ArrayLike, nu: ArrayLike, g: float = G_STANDARD
+    L: ArrayLike, rho_surface: ArrayLike, rho_bulk: ArrayLike, nu: ArrayLike, g: float = GRAVITY
 ) -> FloatOrArray:
     """Grashof number from a density difference :math:`Gr = g|\\Delta\\rho|L^3/(\\bar\\rho\\nu^2)`.
 
@@ -715,7 +713,7 @@ def graetz(Re: ArrayLike, Pr: ArrayLike, D: ArrayLike, x: ArrayLike) -> FloatOrA
 
 
 def archimedes(
-    d: ArrayLike, rho_fluid: ArrayLike, rho_particle: ArrayLike, mu: ArrayLike, g: float = G_STANDARD
+    d: ArrayLike, rho_fluid: ArrayLike, rho_particle: ArrayLike, mu: ArrayLike, g: float = GRAVITY
 ) -> FloatOrArray:
     """Archimedes number :math:`Ar = g d^3\\rho_f|\\rho_p-\\rho_f|/\\mu^2`.
 

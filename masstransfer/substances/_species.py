@@ -8,7 +8,7 @@ Anything no database knows can be built by hand::
 
     Species(name="my solvent", molar_mass=0.1502, Tb=455.0, Vb=1.9e-4)
 
-Only this module and :mod:`masstransfer.properties` talk to the databases;
+Only this module and :mod:`masstransfer.substances` talk to the databases;
 they are imported on first use, so ``import masstransfer`` stays light.
 """
 
@@ -21,18 +21,15 @@ from collections.abc import Mapping
 from dataclasses import dataclass, field
 from typing import Any
 
-from . import data
+from .. import _tables as data
+from .._validation import guard_module
+from ..constants import DEBYE
+from ..errors import InputValueError, MissingConstantError, UnknownSpeciesError
 from ._databases import quiet
-from ._smiles import Molecule, parse_smiles
-from ._validation import guard_module
-from .errors import InputValueError, MissingConstantError, UnknownSpeciesError
+from ._structure import Molecule, parse_smiles
 
-__all__ = ["DEBYE", "R_GAS", "Species", "le_bas_volume", "species"]
+__all__ = ["Species", "le_bas_volume", "species"]
 
-#: Molar gas constant [J/(mol K)] (CODATA 2018, exact).
-R_GAS = 8.314462618
-#: One debye [C m] (CODATA-derived; common practice).
-DEBYE = 3.33564e-30
 
 _AIR_NAMES = frozenset({"air", "dry air"})
 
@@ -384,7 +381,7 @@ def _lookup(key: str) -> Species:
 @functools.lru_cache(maxsize=1)
 def _air() -> Species:
     a = data.AIR
-    src = "masstransfer.data.AIR (see its sources)"
+    src = "masstransfer._tables.AIR (see its sources)"
     return Species(
         name="air",
         molar_mass=float(a["molar_mass"]),  # type: ignore[arg-type]

@@ -3,7 +3,7 @@
 Numbers in: :func:`wilke_chang`, :func:`hayduk_minhas_aqueous`,
 :func:`hayduk_minhas`, :func:`hayduk_minhas_paraffin`, :func:`tyn_calus`,
 :func:`stokes_einstein`.  Names in: :func:`liquid_diffusivity`, which
-fetches the solvent viscosity from :mod:`masstransfer.properties` unless the
+fetches the solvent viscosity from :mod:`masstransfer.substances` unless the
 caller passes one, and applies the published special-case recommendations
 (documented on :func:`liquid_diffusivity`).
 
@@ -20,11 +20,12 @@ from typing import Final, overload
 
 import numpy as np
 
-from .. import data
+from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_positive, check_shapes, finish, guard_module, warn_caller
+from ..constants import AVOGADRO, BOLTZMANN, DEBYE
 from ..errors import EnvelopeWarning, InputValueError
-from ..species import DEBYE, Species, species
+from ..substances._species import Species, species
 from ._common import normalise_method
 
 __all__ = [
@@ -40,10 +41,6 @@ __all__ = [
     "wilke_chang",
 ]
 
-#: Boltzmann constant [J/K] (exact, SI 2019).
-K_BOLTZMANN: Final = 1.380649e-23
-#: Avogadro constant [1/mol] (exact, SI 2019).
-N_AVOGADRO: Final = 6.02214076e23
 #: Parachor conversion: SI [N^0.25 m^2.75/mol] -> tabulated cm-g-s form.
 _PARACHOR_CGS: Final = 5.623413e6
 #: Solvent viscosity above which the correlations warn [Pa s] (Poling et al.
@@ -448,7 +445,7 @@ def stokes_einstein(
     c = {"stick": 6.0, "slip": 4.0}.get(boundary)
     if c is None:
         raise InputValueError(f"boundary={boundary!r} is not 'stick' or 'slip'; choose one")
-    return finish(K_BOLTZMANN * Tv / (c * math.pi * mu * r))
+    return finish(BOLTZMANN * Tv / (c * math.pi * mu * r))
 
 
 # --------------------------------------------------------------------------
@@ -492,7 +489,7 @@ def _is_acid(s: Species) -> bool:
     mol = s.molecule
     if mol is None:
         return False
-    from ..species import _le_bas_class
+    from ..substances._species import _le_bas_class
 
     return any(el == "O" and _le_bas_class(mol, i) == "O_acid" for i, el in enumerate(mol.elements))
 
@@ -546,7 +543,7 @@ def liquid_diffusivity_inputs(
     Notes
     -----
     Molar volumes come from ``thermo`` at the normal boiling point, or Le
-    Bas volumes; parachors from :func:`masstransfer.properties.parachor`.
+    Bas volumes; parachors from :func:`masstransfer.substances.parachor`.
 
     References
     ----------
@@ -581,7 +578,7 @@ def _inputs(a: Species, b: Species, m: str) -> LiquidDiffusivityInputs:
         return LiquidDiffusivityInputs(Va, None, None, None, phi, "aqueous", ())
     if m == "hayduk-minhas" and _is_n_paraffin(b):
         return LiquidDiffusivityInputs(Va, None, None, None, phi, "n-paraffin", ())
-    from ..properties import parachor
+    from ..substances._properties import parachor
 
     Vb = b.require("Vb", m)
     Pa, Pb = parachor(a), parachor(b)
@@ -653,7 +650,7 @@ def liquid_diffusivity(
         picks the aqueous form for water, the n-paraffin form for normal
         alkane solvents and the general form otherwise.
     mu_solvent : float or array_like, optional
-        Solvent viscosity [Pa s]; from :func:`masstransfer.properties.liquid_model`
+        Solvent viscosity [Pa s]; from :func:`masstransfer.liquid_model`
         when omitted.
     phi : float, optional
         Wilke-Chang association factor [-]; overrides the tabulated value.
@@ -708,7 +705,7 @@ def liquid_diffusivity(
     Tv = check_positive("T", T)
     inp = liquid_diffusivity_inputs(solute, solvent, m)
     if mu_solvent is None:
-        from ..properties import liquid_model
+        from ..substances._properties import liquid_model
 
         mu: FloatOrArray = liquid_model(solvent).viscosity(Tv)
     else:
@@ -721,7 +718,7 @@ def liquid_diffusivity(
     if m == "stokes-einstein":
         r = radius
         if r is None:
-            r = (3.0 * inp.V_solute / (4.0 * math.pi * N_AVOGADRO)) ** (1.0 / 3.0)
+            r = (3.0 * inp.V_solute / (4.0 * math.pi * AVOGADRO)) ** (1.0 / 3.0)
         return stokes_einstein(Tv, mu, r)
     if inp.form == "aqueous":
         return hayduk_minhas_aqueous(Tv, mu, inp.V_solute)

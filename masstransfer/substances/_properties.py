@@ -19,7 +19,7 @@ Gas density is the ideal-gas value :math:`\\rho = PM/(RT)`; gas viscosity,
 thermal conductivity and heat capacity are the low-pressure values.  They
 suit carrier gases up to a few bar away from their critical point.  Air is
 treated as a mixture of N2, O2 and Ar (composition in
-:data:`masstransfer.data.AIR`) with the Wilke viscosity and Wassiljewa
+:data:`masstransfer._tables.AIR`) with the Wilke viscosity and Wassiljewa
 (Herning-Zipperer) conductivity mixing rules of ``chemicals``.
 """
 
@@ -34,12 +34,13 @@ from typing import Any
 import numpy as np
 from numpy.polynomial import chebyshev as _cheb
 
-from . import data
+from .. import _tables as data
+from .._typing import ArrayLike, FloatArray, FloatOrArray
+from .._validation import check_positive, check_shapes, finish, guard, guard_module
+from ..constants import DEBYE, R_GAS
+from ..errors import MissingConstantError, OutOfRangeError
 from ._databases import quiet
-from ._typing import ArrayLike, FloatArray, FloatOrArray
-from ._validation import check_positive, check_shapes, finish, guard, guard_module
-from .errors import MissingConstantError, OutOfRangeError
-from .species import DEBYE, R_GAS, Species, species
+from ._species import Species, species
 
 __all__ = [
     "INTERPOLATION_RTOL",

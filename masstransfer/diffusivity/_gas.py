@@ -21,11 +21,12 @@ from typing import Final, overload
 
 import numpy as np
 
-from .. import data
+from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_positive, check_shapes, finish, guard_module, warn_caller
+from ..constants import DEBYE
 from ..errors import EnvelopeWarning, InputValueError, MissingConstantError
-from ..species import DEBYE, Species, species
+from ..substances._species import Species, species
 from ._common import normalise_method
 
 __all__ = [
@@ -199,7 +200,7 @@ def fuller_volume(sp: str | Species) -> float:
     Notes
     -----
     Volumes: Fuller, Ensley & Giddings (1969) as tabulated in Poling,
-    Prausnitz & O'Connell (2001), Table 11-1 (see :mod:`masstransfer.data`).
+    Prausnitz & O'Connell (2001), Table 11-1 (see :mod:`masstransfer._tables`).
     A user-supplied ``Species.fuller_volume`` takes precedence.
 
     References
@@ -718,7 +719,7 @@ def _wilke_lee_params(s: Species) -> tuple[float, float]:
     tabulated = (
         "tabulated" in s.sources.get("sigma", "")
         or "Svehla" in s.sources.get("sigma", "")
-        or s.sources.get("sigma", "").startswith(("masstransfer.data", "user"))
+        or s.sources.get("sigma", "").startswith(("masstransfer._tables", "user"))
     )
     if s.sigma is not None and s.epsilon_k is not None and tabulated:
         return s.sigma, s.epsilon_k

@@ -1,0 +1,14 @@
+"""Substances: species identity and constants, and their property models over temperature.
+
+This subpackage is the only door to ``thermo`` and ``chemicals``; both are imported inside
+functions, on first use.  The entry points :func:`masstransfer.species`,
+:class:`masstransfer.Species`, :func:`masstransfer.gas_model` and
+:func:`masstransfer.liquid_model` live at the top level; the rest is here.
+"""
+
+from __future__ import annotations
+
+from ._properties import INTERPOLATION_RTOL, PropertyCurve, henry_constant, parachor
+from ._species import le_bas_volume
+
+__all__ = ["INTERPOLATION_RTOL", "PropertyCurve", "henry_constant", "le_bas_volume", "parachor"]
