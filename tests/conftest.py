@@ -1,10 +1,15 @@
-"""Shared test configuration: a deterministic hypothesis profile for CI."""
+"""Shared test configuration: a deterministic hypothesis profile for CI; shared data importable."""
 
 from __future__ import annotations
 
 import os
+import sys
+from pathlib import Path
 
 from hypothesis import HealthCheck, settings
+
+# tests/ mirrors the package in subfolders; the shared validation tables live at tests/ itself
+sys.path.insert(0, str(Path(__file__).parent))
 
 settings.register_profile(
     "ci",
