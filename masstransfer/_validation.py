@@ -7,6 +7,7 @@ costs microseconds; everything else is converted once with
 
 from __future__ import annotations
 
+import dataclasses
 import functools
 import inspect
 import math
@@ -15,12 +16,12 @@ import sys
 import types
 import warnings
 from collections.abc import Callable
-from typing import Any, ParamSpec, TypeVar
+from typing import Any, ParamSpec, TypeVar, overload
 
 import numpy as np
 
 from ._typing import FloatArray, FloatOrArray
-from .errors import InputShapeError, InputValueError, MassTransferError
+from .errors import InputShapeError, InputTypeError, InputValueError
 
 __all__ = [
     "MAGNITUDE_LIMIT",
@@ -31,7 +32,6 @@ __all__ = [
     "check_shapes",
     "finish",
     "guard",
-    "guard_module",
     "in_range",
     "scalar",
     "warn_caller",
@@ -55,17 +55,31 @@ def as_float(name: str, value: Any) -> FloatOrArray:
     if type(value) is float or type(value) is int:
         return float(value)
     if isinstance(value, bool | str | bytes | complex) or value is None:
-        raise InputValueError(f"{name}={value!r} is not a number; pass a float or an array of floats")
-    if isinstance(value, np.ndarray) and value.dtype.kind not in "biuf":
-        raise InputValueError(
-            f"{name} is an array of {value.dtype} values, not numbers; pass floats or an array of floats"
+        raise InputTypeError(
+            f"{name}={value!r} is a {type(value).__name__}, not a number; pass a float or an array of floats"
         )
-    try:
-        arr = np.asarray(value, dtype=float)
-    except (TypeError, ValueError) as exc:
-        raise InputValueError(
-            f"{name}={value!r} cannot be read as numbers ({exc}); pass a float or an array of floats"
-        ) from None
+    if isinstance(value, np.ndarray):
+        if type(value) is not np.ndarray and hasattr(value, "mask"):
+            raise InputTypeError(
+                f"{name} is a masked array; the mask would be lost: pass the unmasked entries "
+                "(value.compressed()) or fill them (value.filled(...))"
+            )
+        raw = value
+    else:
+        try:
+            raw = np.asarray(value)
+        except (TypeError, ValueError) as exc:
+            raise InputShapeError(
+                f"{name}={value!r} cannot be read as an array of numbers ({exc}); "
+                "pass a float or a rectangular array of floats"
+            ) from exc
+    if raw.dtype.kind not in "iuf":
+        what = {"b": "booleans", "c": "complex numbers", "U": "strings", "S": "bytes", "O": "objects"}
+        raise InputTypeError(
+            f"{name} holds {what.get(raw.dtype.kind, str(raw.dtype))}, not real numbers; "
+            "pass a float or an array of floats"
+        )
+    arr = raw.astype(float, copy=False)
     if arr.ndim == 0:
         return float(arr)
     return arr
@@ -209,86 +223,92 @@ def warn_caller(message: str, category: type[Warning]) -> None:
     warnings.warn(message, category, stacklevel=level)
 
 
-def _suspects(fn: Callable[..., Any], args: tuple[Any, ...], kwargs: dict[str, Any]) -> str:
-    """Name the arguments most likely to be at fault (wrong type or extreme magnitude)."""
+def _suspect(fn: Callable[..., Any], args: tuple[Any, ...], kwargs: dict[str, Any]) -> str:
+    """Name the argument most likely at fault for an arithmetic failure: the most extreme magnitude."""
     try:
         bound = inspect.signature(fn).bind_partial(*args, **kwargs).arguments
     except TypeError:
         bound = dict(kwargs)
-    worst: list[str] = []
+    worst_name, worst_score, worst_shown = "", -1.0, ""
     for name, v in bound.items():
-        if isinstance(v, complex | dict | set) or v is None or type(v) is object:
-            worst.append(f"{name}={v!r}")
-            continue
         try:
             arr = np.asarray(v, dtype=float)
         except (TypeError, ValueError):
-            if not isinstance(v, str):
-                worst.append(f"{name}={v!r}")
             continue
-        if arr.size and (not np.all(np.isfinite(arr)) or np.max(np.abs(arr)) > 1e30):
-            worst.append(f"{name}={'array' if arr.ndim else repr(float(arr))}")
-    return (
-        ("check " + ", ".join(worst)) if worst else "check the types, shapes and magnitudes of the arguments"
-    )
+        if arr.size == 0:
+            continue
+        with np.errstate(all="ignore"):
+            mag = np.abs(arr[np.isfinite(arr) & (arr != 0.0)])
+            score = float(np.max(np.abs(np.log10(mag)))) if mag.size else 0.0
+        if score > worst_score:
+            shown = repr(float(arr)) if arr.ndim == 0 else f"an array of shape {arr.shape}"
+            worst_name, worst_score, worst_shown = name, score, shown
+    if not worst_name:
+        return "check the magnitudes of the arguments"
+    return f"{worst_name}={worst_shown} is the most extreme input; bring it closer to a physical value"
 
 
-def _finite_out(out: Any) -> bool:
-    if isinstance(out, float):
+def _finite_out(out: Any, depth: int = 0) -> bool:
+    """Tell whether every float inside ``out`` is finite (floats, arrays, tuples, dataclass fields)."""
+    if type(out) is float:
         return math.isfinite(out)
-    if isinstance(out, np.ndarray) and out.dtype.kind == "f":
-        return bool(np.isfinite(out).all())
-    if isinstance(out, tuple) and all(isinstance(v, float) for v in out):
-        return all(math.isfinite(v) for v in out)
+    if isinstance(out, np.ndarray):
+        return out.dtype.kind not in "fc" or bool(np.isfinite(out).all())
+    if depth > 2:
+        return True
+    if isinstance(out, tuple | list):
+        return all(_finite_out(v, depth + 1) for v in out)
+    if dataclasses.is_dataclass(out) and not isinstance(out, type):
+        return all(_finite_out(getattr(out, f.name), depth + 1) for f in dataclasses.fields(out))
+    if isinstance(out, float):  # numpy float64 and other float subclasses
+        return math.isfinite(out)
     return True
 
 
-def guard(fn: Callable[_P, _R], check_output: bool = True) -> Callable[_P, _R]:
-    """Wrap a public function so that it only ever returns finite numbers or raises our errors.
+_ARITHMETIC = (FloatingPointError, OverflowError, ZeroDivisionError, RuntimeWarning)
 
-    Arithmetic failures (overflow, division by zero, numpy warnings raised as errors) and stray
-    type or value errors from deep inside numpy or the databases become
-    :class:`~masstransfer.errors.InputValueError` naming the function and the suspect arguments.
-    With ``check_output`` a non-finite float or float-array result raises as well.
+
+@overload
+def guard(fn: Callable[_P, _R], /) -> Callable[_P, _R]: ...
+@overload
+def guard(*, check_output: bool = True) -> Callable[[Callable[_P, _R]], Callable[_P, _R]]: ...
+
+
+def guard(
+    fn: Callable[_P, _R] | None = None, /, *, check_output: bool = True
+) -> Callable[_P, _R] | Callable[[Callable[_P, _R]], Callable[_P, _R]]:
+    """Decorate a public function so that arithmetic failures become library errors, and only those.
+
+    Written at each ``def`` (``@guard`` or ``@guard(check_output=False)``).  The numeric
+    conditions the guard exists for (overflow, division by zero, invalid operations raised as
+    ``FloatingPointError`` or as ``RuntimeWarning`` under ``-W error``, and, with
+    ``check_output``, a non-finite float anywhere in the result, result objects included) raise
+    :class:`~masstransfer.errors.InputValueError` naming the most extreme argument, chained with
+    ``from exc``.  Every other exception, the library's own errors and internal bugs alike
+    (``AttributeError``, ``KeyError``, ``IndexError``, a stray ``TypeError``), propagates as
+    itself with its full traceback.  Argument domains are declared inside each function by the
+    ``check_*`` helpers of this module, once, before any arithmetic.
     """
-    name = getattr(fn, "__qualname__", getattr(fn, "__name__", "function"))
 
-    @functools.wraps(fn)
-    def wrapper(*args: _P.args, **kwargs: _P.kwargs) -> _R:
-        try:
-            out = fn(*args, **kwargs)
-        except MassTransferError:
-            raise
-        except (RuntimeWarning, OverflowError, ZeroDivisionError, FloatingPointError) as exc:
-            raise InputValueError(
-                f"{name}: the inputs overflow the equations ({exc}); {_suspects(fn, args, kwargs)}"
-            ) from None
-        except (TypeError, ValueError, KeyError, IndexError, AttributeError) as exc:
-            raise InputValueError(
-                f"{name}: the inputs could not be used ({exc}); {_suspects(fn, args, kwargs)}"
-            ) from None
-        if check_output and not _finite_out(out):
-            raise InputValueError(
-                f"{name}: the result is not finite for these inputs; {_suspects(fn, args, kwargs)}"
-            )
-        return out
+    def decorate(f: Callable[_P, _R]) -> Callable[_P, _R]:
+        name = getattr(f, "__qualname__", getattr(f, "__name__", "function"))
 
-    return wrapper
+        @functools.wraps(f)
+        def wrapper(*args: _P.args, **kwargs: _P.kwargs) -> _R:
+            try:
+                out = f(*args, **kwargs)
+            except _ARITHMETIC as exc:
+                raise InputValueError(
+                    f"{name}: the inputs overflow the equations ({exc}); {_suspect(f, args, kwargs)}"
+                ) from exc
+            if check_output and not _finite_out(out):
+                raise InputValueError(
+                    f"{name}: the result is not finite for these inputs; {_suspect(f, args, kwargs)}"
+                )
+            return out
 
+        return wrapper
 
-def guard_module(
-    namespace: dict[str, Any], names: Any, unchecked: tuple[str, ...] = (), unguarded: tuple[str, ...] = ()
-) -> None:
-    """Guard every public function of a module in place (see :func:`guard`).
-
-    Functions in ``unchecked`` skip the output check: their results are finite by construction
-    for inputs inside :data:`MAGNITUDE_LIMIT`, and they sit in hot loops.  Functions in
-    ``unguarded`` validate everything themselves and are left unwrapped, to keep a scalar call
-    at about a microsecond; the robustness sweep covers them like the rest.
-    """
-    for n in names:
-        obj = namespace.get(n)
-        if n in unguarded:
-            continue
-        if inspect.isfunction(obj) and obj.__module__ == namespace["__name__"]:
-            namespace[n] = guard(obj, check_output=n not in unchecked)
+    if fn is not None:
+        return decorate(fn)
+    return decorate

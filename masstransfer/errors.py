@@ -12,6 +12,7 @@ __all__ = [
     "EnvelopeError",
     "EnvelopeWarning",
     "InputShapeError",
+    "InputTypeError",
     "InputValueError",
     "MassTransferError",
     "MassTransferWarning",
@@ -29,6 +30,10 @@ class MassTransferError(Exception):
 
 class InputValueError(MassTransferError, ValueError):
     """An argument has a value the method cannot accept (NaN, inf, <= 0, ...)."""
+
+
+class InputTypeError(MassTransferError, TypeError):
+    """An argument has the wrong type (a string, None, a complex number, ... where a number belongs)."""
 
 
 class InputShapeError(InputValueError):

@@ -50,11 +50,39 @@ def test_missing_constant_names_method_and_fix():
         mt.liquid_diffusivity(lonely, "water", 300.0)
 
 
-def test_wrong_types():
-    with pytest.raises(mt.errors.InputValueError, match="not a number"):
-        mt.gas_diffusivity("water", "air", "300")  # type: ignore[arg-type]
-    with pytest.raises(mt.errors.InputValueError, match="cannot be read"):
-        mt.gas_diffusivity("water", "air", [300.0, "hot"])  # type: ignore[list-item]
+def test_wrong_types_are_type_errors_of_the_family():
+    for bad in ("300", [300.0, "hot"], ["300"], None, 300.0 + 0j, True, np.array([True])):
+        with pytest.raises(mt.errors.InputTypeError, match=r"not a number|not real numbers") as err:
+            mt.gas_diffusivity("water", "air", bad)  # type: ignore[arg-type]
+        assert isinstance(err.value, TypeError)
+        assert isinstance(err.value, mt.MassTransferError)
+        assert "T" in str(err.value)
+
+
+def test_masked_array_is_refused_not_unmasked():
+    T = np.ma.array([300.0, 1e9], mask=[False, True])
+    with pytest.raises(mt.errors.InputTypeError, match="masked"):
+        mt.diffusivity.fuller(T, 1e5, 0.018, 0.029, 13.1, 19.7)
+
+
+def test_internal_bug_surfaces_as_itself(monkeypatch):
+    """A broken helper inside the library is not dressed up as an input error."""
+    from masstransfer.surface import _conventions
+
+    def broken(*args: object, **kwargs: object) -> float:
+        raise AttributeError("internal helper is broken")
+
+    monkeypatch.setattr(_conventions, "check_positive", broken)
+    with pytest.raises(AttributeError, match="internal helper is broken") as err:
+        mt.surface.ky_from_kc(0.01, T=300.0, P=1e5)
+    assert not isinstance(err.value, mt.MassTransferError)
+    assert err.traceback[-1].name == "broken"  # the traceback reaches the helper itself
+
+
+def test_overflow_is_an_input_error_chained_and_named():
+    with pytest.raises(mt.errors.InputValueError, match=r"not finite|overflow") as err:
+        mt.surface.grashof_thermal(L=1e59, beta=1e50, dT=1.0, nu=1e-45)
+    assert "L=1e+59 is the most extreme input" in str(err.value)
     with pytest.raises(mt.errors.UnknownSpeciesError):
         mt.gas_diffusivity(42, "air", 300.0)  # type: ignore[arg-type]
 

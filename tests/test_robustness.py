@@ -224,28 +224,25 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
     ("water_density", mt.liquid_model("water").density, {"T": 300.0}),
 ]
 
-_BAD = [
-    float("nan"),
-    float("inf"),
-    -float("inf"),
-    -1.0,
-    0.0,
-    -0.0,
-    1e308,
-    -1e-300,
-    np.array([]),
-    np.array([[1.0, np.nan]]),
+# Bad values, grouped by the error each must give for a numeric argument.
+_NON_FINITE = [float("nan"), float("inf"), -float("inf"), 1e308, np.array([[1.0, np.nan]])]
+_SIGN_OR_ZERO = [-1.0, 0.0, -0.0, -1e-300]  # valid for some arguments, an InputValueError for others
+_NOT_NUMBERS = [
     "abc",
     "",
     None,
     True,
     1 + 2j,
     [1.0, "x"],
+    ["300"],
     object(),
     {"a": 1},
     np.array(["a", "b"]),
-    np.array([1, 2], dtype=np.int64),
+    np.array([True, False]),
+    np.array([1 + 1j]),
 ]
+_OTHER = [np.array([]), np.array([1, 2], dtype=np.int64)]  # a result, or an InputValueError
+_BAD = [*_NON_FINITE, *_SIGN_OR_ZERO, *_NOT_NUMBERS, *_OTHER]
 
 
 def _finite(value: Any) -> bool:
@@ -261,7 +258,11 @@ def _finite(value: Any) -> bool:
     return True  # records, models, species: objects, not numbers
 
 
-def _call(fn: Any, kwargs: dict[str, Any]) -> None:
+def _outcome(fn: Any, kwargs: dict[str, Any]) -> BaseException | None:
+    """Call ``fn``; return the library error it raised, or None after checking the result is finite.
+
+    Any exception outside the library's family propagates and fails the test as itself.
+    """
     with warnings.catch_warnings():
         warnings.simplefilter("ignore", mt.MassTransferWarning)  # envelope warnings are allowed
         warnings.simplefilter(
@@ -269,14 +270,41 @@ def _call(fn: Any, kwargs: dict[str, Any]) -> None:
         )  # a numpy overflow/invalid is a silent NaN in the making
         try:
             out = fn(**kwargs)
-        except mt.MassTransferError:
-            return
+        except mt.MassTransferError as exc:
+            return exc
     assert _finite(out), f"non-finite result {out!r}"
+    return None
+
+
+def _kind(valid: Any) -> str:
+    if isinstance(valid, str):
+        return "name"
+    if isinstance(valid, bool) or not isinstance(valid, int | float | np.ndarray):
+        return "object"
+    return "number"
+
+
+def _expected(kind: str, bad: Any) -> tuple[tuple[type[BaseException], ...], bool]:
+    """The error classes a bad value may give for an argument of this kind, and whether success is allowed."""
+    value_error = (mt.errors.InputValueError,)
+    type_error = (mt.errors.InputTypeError,)
+    if kind == "number":
+        if any(bad is b for b in _NON_FINITE):
+            return value_error, False
+        if any(bad is b for b in _NOT_NUMBERS):
+            return type_error, False
+        return value_error, True  # sign, zero, empty and integer arrays: some arguments accept them
+    if kind == "name":
+        if isinstance(bad, str):  # an unknown name or method: a lookup/value error of the family
+            return (mt.errors.UnknownSpeciesError, mt.errors.InputValueError), False
+        return type_error, bad is None  # None means "the default" for optional choices
+    # objects (layers, records, species, models): anything else is the wrong type
+    return (*type_error, mt.errors.InputValueError), bad is None
 
 
 @pytest.mark.parametrize(("name", "fn", "valid"), CASES, ids=[c[0] for c in CASES])
 def test_valid_call_is_finite(name, fn, valid):
-    _call(fn, valid)
+    assert _outcome(fn, valid) is None
 
 
 @pytest.mark.parametrize(("name", "fn", "valid"), CASES, ids=[c[0] for c in CASES])
@@ -288,10 +316,16 @@ def test_valid_call_is_finite(name, fn, valid):
 @given(data=st.data())
 def test_adversarial_inputs(name, fn, valid, data):
     key = data.draw(st.sampled_from(sorted(valid)), label="argument")
-    choices = [*_BAD, "LARGE"]
-    bad = data.draw(st.sampled_from(choices), label="value")
-    if isinstance(bad, str) and bad == "LARGE":  # a large array of the valid value
+    bad = data.draw(st.sampled_from([*range(len(_BAD)), -1]), label="value")
+    if bad == -1:  # a large array of the valid value: a result or an error, never a hang or a NaN
         v = valid[key]
-        bad = np.full(20_000, v) if isinstance(v, int | float) and not isinstance(v, bool) else v
-    kwargs = {**valid, key: bad}
-    _call(fn, kwargs)
+        big = np.full(20_000, v) if isinstance(v, int | float) and not isinstance(v, bool) else v
+        _outcome(fn, {**valid, key: big})
+        return
+    value = _BAD[bad]
+    allowed, may_succeed = _expected(_kind(valid[key]), value)
+    err = _outcome(fn, {**valid, key: value})
+    if err is None:
+        assert may_succeed, f"{name}({key}={value!r}) returned a result; expected {allowed}"
+    else:
+        assert isinstance(err, allowed), f"{name}({key}={value!r}) raised {type(err).__name__}: {err}"

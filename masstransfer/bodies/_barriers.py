@@ -23,7 +23,7 @@ from typing import Final, overload
 import numpy as np
 
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard_module
+from .._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard
 from ..constants import ATM, R_GAS, T_ICE
 from ..errors import InputValueError, UnknownMethodError
 
@@ -107,6 +107,7 @@ def _convert(
     return finish(np.asarray(v) * (table[from_unit] / table[to_unit]))
 
 
+@guard
 def convert_permeability(value: ArrayLike, from_unit: str, to_unit: str = "mol/(m s Pa)") -> FloatOrArray:
     """Convert a permeability between the trade's units.
 
@@ -144,6 +145,7 @@ def convert_permeability(value: ArrayLike, from_unit: str, to_unit: str = "mol/(
     return _convert(value, from_unit, to_unit, PERMEABILITY_UNITS, "permeability")
 
 
+@guard
 def convert_permeance(value: ArrayLike, from_unit: str, to_unit: str = "mol/(m2 s Pa)") -> FloatOrArray:
     """Convert a permeance (transmission rate per unit pressure difference).
 
@@ -179,6 +181,7 @@ def convert_permeance(value: ArrayLike, from_unit: str, to_unit: str = "mol/(m2 
     return _convert(value, from_unit, to_unit, PERMEANCE_UNITS, "permeance")
 
 
+@guard
 def convert_flux(value: ArrayLike, from_unit: str, to_unit: str = "mol/(m2 s)") -> FloatOrArray:
     """Convert a transmission rate (flux) between the trade's units.
 
@@ -219,6 +222,7 @@ def convert_flux(value: ArrayLike, from_unit: str, to_unit: str = "mol/(m2 s)") 
 # --- layers ---------------------------------------------------------------------------------
 
 
+@guard
 def permeability(D: ArrayLike, S: ArrayLike) -> FloatOrArray:
     """Permeability from diffusivity and solubility, :math:`\\mathcal{P} = D S`.
 
@@ -348,6 +352,7 @@ class BarrierResult:
     resistances: FloatArray
 
 
+@guard
 def steady_flux(
     layers: Sequence[Layer],
     p_high: float,
@@ -434,6 +439,7 @@ def steady_flux(
     )
 
 
+@guard
 def arrhenius(T: ArrayLike, value_ref: ArrayLike, T_ref: float, E: ArrayLike) -> FloatOrArray:
     """Arrhenius temperature dependence of D, S or permeability.
 
@@ -487,6 +493,7 @@ def time_lag(thickness: float, D: float) -> float: ...
 def time_lag(thickness: FloatArray, D: ArrayLike) -> FloatArray: ...
 @overload
 def time_lag(thickness: ArrayLike, D: ArrayLike) -> FloatOrArray: ...
+@guard
 def time_lag(thickness: ArrayLike, D: ArrayLike) -> FloatOrArray:
     """Time lag of a membrane, :math:`\\theta = L^2/(6D)`.
 
@@ -525,6 +532,7 @@ def time_lag(thickness: ArrayLike, D: ArrayLike) -> FloatOrArray:
     return finish(L * L / (6.0 * Dv))
 
 
+@guard
 def diffusivity_from_time_lag(thickness: float, lag: float, lag_stderr: float = 0.0) -> tuple[float, float]:
     """Diffusivity from a measured time lag, :math:`D = L^2/(6\\theta)`, with its standard error.
 
@@ -560,6 +568,7 @@ def diffusivity_from_time_lag(thickness: float, lag: float, lag_stderr: float = 
     return D, D * se / th
 
 
+@guard
 def permeation_curve(t: ArrayLike, thickness: float, D: float, c_upstream: float = 1.0) -> FloatOrArray:
     """Cumulative amount permeated per unit area through an initially empty membrane.
 
@@ -633,6 +642,7 @@ def permeation_curve(t: ArrayLike, thickness: float, D: float, c_upstream: float
     return finish((L * c1 * out).reshape(np.shape(tv)))
 
 
+@guard
 def fit_time_lag(t: ArrayLike, Q: ArrayLike, t_min: float | None = None) -> tuple[float, float, float, float]:
     """Fit the steady-state asymptote of a permeation curve: slope and time lag.
 
@@ -734,6 +744,7 @@ class IngressResult:
     assumption: str
 
 
+@guard
 def oxygen_ingress(
     area: float,
     layers: Sequence[Layer],
@@ -821,6 +832,3 @@ def oxygen_ingress(
         time_to_limit=t_lim,
         assumption="steady permeation from sealing (time lag ignored), constant inside partial pressure",
     )
-
-
-guard_module(globals(), __all__, unchecked=())

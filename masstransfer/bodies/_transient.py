@@ -24,7 +24,7 @@ import numpy as np
 from scipy import special
 
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard_module
+from .._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard
 from ..errors import InputValueError, UnknownMethodError
 
 __all__ = [
@@ -242,6 +242,7 @@ def fractional_uptake(
 def fractional_uptake(
     shape: str, t: ArrayLike, D: ArrayLike, size: ArrayLike, biot: ArrayLike | None = ...
 ) -> FloatOrArray: ...
+@guard
 def fractional_uptake(
     shape: str, t: ArrayLike, D: ArrayLike, size: ArrayLike, biot: ArrayLike | None = None
 ) -> FloatOrArray:
@@ -319,6 +320,7 @@ def fractional_uptake(
     return finish(out.reshape(shape_out))
 
 
+@guard
 def fractional_release(
     shape: str, t: ArrayLike, D: ArrayLike, size: ArrayLike, biot: ArrayLike | None = None
 ) -> FloatOrArray:
@@ -361,6 +363,7 @@ def fractional_release(
     return fractional_uptake(shape, t, D, size, biot)
 
 
+@guard
 def concentration_profile(
     shape: str,
     position: ArrayLike,
@@ -522,6 +525,7 @@ def _profile(shape: str, X: FloatArray, T: FloatArray, biot: float | None) -> Fl
 # --- semi-infinite medium -------------------------------------------------------------------
 
 
+@guard
 def semi_infinite_concentration(
     x: ArrayLike,
     t: ArrayLike,
@@ -606,6 +610,7 @@ def semi_infinite_concentration(
     return finish(np.asarray(ci) + (np.asarray(cs) - np.asarray(ci)) * theta)
 
 
+@guard
 def semi_infinite_uptake(
     t: ArrayLike,
     D: ArrayLike,
@@ -669,6 +674,7 @@ def semi_infinite_uptake(
 # --- inverse problems ---------------------------------------------------------------------------
 
 
+@guard
 def half_time(shape: str, D: ArrayLike, size: ArrayLike) -> FloatOrArray:
     """Time at which half the equilibrium uptake is reached (surface at equilibrium).
 
@@ -741,6 +747,7 @@ class DiffusivityFit:
     n_points: int
 
 
+@guard
 def fit_diffusivity(
     shape: str,
     t: ArrayLike,
@@ -826,6 +833,3 @@ def fit_diffusivity(
         residual_rms=math.sqrt(float(r @ r) / tv.size),
         n_points=int(tv.size),
     )
-
-
-guard_module(globals(), __all__, unchecked=())

@@ -23,7 +23,7 @@ import numpy as np
 
 from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_positive, check_shapes, finish, guard_module, warn_caller
+from .._validation import check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import DEBYE
 from ..errors import EnvelopeWarning, InputValueError, MissingConstantError
 from ..substances._species import Species, species
@@ -84,6 +84,7 @@ def fuller(T: float, P: float, M_a: float, M_b: float, v_a: float, v_b: float) -
 def fuller(T: FloatArray, P: ArrayLike, M_a: float, M_b: float, v_a: float, v_b: float) -> FloatArray: ...
 @overload
 def fuller(T: ArrayLike, P: ArrayLike, M_a: float, M_b: float, v_a: float, v_b: float) -> FloatOrArray: ...
+@guard(check_output=False)
 def fuller(
     T: ArrayLike,
     P: ArrayLike,
@@ -172,6 +173,7 @@ def _fuller_constant(Ma: FloatOrArray, Mb: FloatOrArray, va: FloatOrArray, vb: F
     return finish(0.00143 * 1e-4 * _BAR / (M_ab**0.5 * (va ** (1.0 / 3.0) + vb ** (1.0 / 3.0)) ** 2))
 
 
+@guard
 def fuller_volume(sp: str | Species) -> float:
     """Fuller diffusion volume of a species, from its formula and structure.
 
@@ -244,6 +246,7 @@ _NEUFELD: Final = (1.06036, 0.15610, 0.19300, 0.47635, 1.03587, 1.52996, 1.76474
 _TSTAR_RANGE: Final = (0.3, 100.0)
 
 
+@guard
 def neufeld_collision_integral(T_star: ArrayLike) -> FloatOrArray:
     """Diffusion collision integral of the Lennard-Jones 12-6 potential.
 
@@ -342,6 +345,7 @@ def _brokaw_pair(
     return math.sqrt(sa * sb), math.sqrt(ea * eb), da * db
 
 
+@guard
 def chapman_enskog(
     T: ArrayLike,
     P: ArrayLike,
@@ -415,6 +419,7 @@ def chapman_enskog(
     return _kinetic(Tv, Pv, 0.00266, _m_ab(float(Ma), float(Mb)), float(s) * 1e10, float(e), 0.0)
 
 
+@guard
 def wilke_lee(
     T: ArrayLike,
     P: ArrayLike,
@@ -495,6 +500,7 @@ def _wilke_lee_constant(M_ab: float) -> float:
     return (3.03 - 0.98 / math.sqrt(M_ab)) * 1e-3
 
 
+@guard
 def brokaw(
     T: ArrayLike,
     P: ArrayLike,
@@ -594,6 +600,7 @@ def brokaw(
     return _kinetic(Tv, Pv, 0.00266, _m_ab(float(Ma), float(Mb)), s_ab, e_ab, d2)
 
 
+@guard
 def blanc(D_binary: ArrayLike, mole_fractions: ArrayLike) -> FloatOrArray:
     """Diffusivity of a dilute solute in a gas mixture by Blanc's law.
 
@@ -644,6 +651,7 @@ def blanc(D_binary: ArrayLike, mole_fractions: ArrayLike) -> FloatOrArray:
     return finish(1.0 / np.sum(yn / D, axis=-1))
 
 
+@guard
 def rescale_gas_diffusivity(
     D_ref: ArrayLike,
     T_ref: float,
@@ -860,6 +868,7 @@ def gas_diffusivity(
     return _kinetic(Tv, Pv, c, M_ab, sig, eps, d2)
 
 
+@guard
 def gas_diffusivity_in_mixture(
     solute: str | Species,
     carrier: Mapping[str, float] | Mapping[str | Species, float],
@@ -914,6 +923,3 @@ def gas_diffusivity_in_mixture(
     Ds = [np.asarray(gas_diffusivity(solute, n, T, P, method)) for n in names]
     stacked = np.stack(np.broadcast_arrays(*Ds), axis=-1)
     return blanc(stacked, y)
-
-
-guard_module(globals(), __all__, unchecked=("fuller",), unguarded=("gas_diffusivity",))

@@ -22,7 +22,7 @@ import numpy as np
 
 from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_positive, check_shapes, finish, guard_module, warn_caller
+from .._validation import check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import AVOGADRO, BOLTZMANN, DEBYE
 from ..errors import EnvelopeWarning, InputValueError
 from ..substances._species import Species, species
@@ -83,6 +83,7 @@ def _check_volume(name: str, V: FloatOrArray) -> None:
         )
 
 
+@guard
 def wilke_chang(
     T: ArrayLike,
     mu_solvent: ArrayLike,
@@ -149,6 +150,7 @@ def wilke_chang(
     return finish(D_cgs * 1e-4)
 
 
+@guard
 def hayduk_minhas_aqueous(T: ArrayLike, mu_water: ArrayLike, V_solute: float) -> FloatOrArray:
     """Infinite-dilution diffusivity in water by Hayduk and Minhas.
 
@@ -201,6 +203,7 @@ def hayduk_minhas_aqueous(T: ArrayLike, mu_water: ArrayLike, V_solute: float) ->
     return finish(D_cgs * 1e-4)
 
 
+@guard
 def hayduk_minhas_paraffin(T: ArrayLike, mu_solvent: ArrayLike, V_solute: float) -> FloatOrArray:
     """Infinite-dilution diffusivity in normal paraffins by Hayduk and Minhas.
 
@@ -253,6 +256,7 @@ def hayduk_minhas_paraffin(T: ArrayLike, mu_solvent: ArrayLike, V_solute: float)
     return finish(D_cgs * 1e-4)
 
 
+@guard
 def hayduk_minhas(
     T: ArrayLike,
     mu_solvent: ArrayLike,
@@ -325,6 +329,7 @@ def hayduk_minhas(
     return finish(D_cgs * 1e-4)
 
 
+@guard
 def tyn_calus(
     T: ArrayLike,
     mu_solvent: ArrayLike,
@@ -395,6 +400,7 @@ def tyn_calus(
     return finish(D_cgs * 1e-4)
 
 
+@guard
 def stokes_einstein(
     T: ArrayLike, mu_solvent: ArrayLike, radius: ArrayLike, boundary: str = "stick"
 ) -> FloatOrArray:
@@ -520,6 +526,7 @@ def _is_nonpolar(s: Species) -> bool:
     return s.dipole is None or s.dipole < 0.5 * DEBYE
 
 
+@guard
 def liquid_diffusivity_inputs(
     solute: str | Species, solvent: str | Species, method: str = "wilke-chang"
 ) -> LiquidDiffusivityInputs:
@@ -625,6 +632,7 @@ def liquid_diffusivity(
     phi: float | None = ...,
     radius: float | None = ...,
 ) -> FloatOrArray: ...
+@guard
 def liquid_diffusivity(
     solute: str | Species,
     solvent: str | Species,
@@ -737,6 +745,3 @@ def liquid_diffusivity(
     if inp.form == "general":
         return hayduk_minhas(Tv, mu, Vb, inp.parachor_solute, Pb)
     return tyn_calus(Tv, mu, inp.V_solute, Vb, inp.parachor_solute, Pb)
-
-
-guard_module(globals(), __all__, unchecked=())

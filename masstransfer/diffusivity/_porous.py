@@ -5,12 +5,13 @@ from __future__ import annotations
 import math
 
 from .._typing import ArrayLike, FloatOrArray
-from .._validation import check_positive, check_shapes, finish, guard_module, in_range
+from .._validation import check_positive, check_shapes, finish, guard, in_range
 from ..constants import R_GAS
 
 __all__ = ["bosanquet", "effective_diffusivity", "knudsen_diffusivity"]
 
 
+@guard
 def knudsen_diffusivity(T: ArrayLike, pore_diameter: ArrayLike, M: float) -> FloatOrArray:
     """Knudsen diffusivity of a gas in a straight cylindrical pore.
 
@@ -59,6 +60,7 @@ def knudsen_diffusivity(T: ArrayLike, pore_diameter: ArrayLike, M: float) -> Flo
     return finish(d / 3.0 * (8.0 * R_GAS * Tv / (math.pi * Mv)) ** 0.5)
 
 
+@guard
 def bosanquet(D_molecular: ArrayLike, D_knudsen: ArrayLike) -> FloatOrArray:
     """Combine molecular and Knudsen diffusivities in the transition regime (Bosanquet).
 
@@ -98,6 +100,7 @@ def bosanquet(D_molecular: ArrayLike, D_knudsen: ArrayLike) -> FloatOrArray:
     return finish(1.0 / (1.0 / Dm + 1.0 / Dk))
 
 
+@guard
 def effective_diffusivity(
     D: ArrayLike, porosity: ArrayLike, tortuosity: ArrayLike, constriction: ArrayLike = 1.0
 ) -> FloatOrArray:
@@ -146,6 +149,3 @@ def effective_diffusivity(
     in_range("tortuosity", tau, 1.0, math.inf, "pass a tortuosity factor of 1 or more")
     in_range("constriction", dl, 0.0, 1.0, "pass a constriction factor between 0 and 1")
     return finish(eps * dl * Dv / tau)
-
-
-guard_module(globals(), __all__, unchecked=())

@@ -9,7 +9,7 @@ from types import MappingProxyType
 from typing import Literal
 
 from .._typing import ArrayLike, FloatOrArray
-from .._validation import check_positive, guard_module
+from .._validation import check_positive, guard
 from ..errors import InputValueError
 from ..substances._species import Species, species
 from ._common import normalise_method
@@ -115,6 +115,7 @@ def _constants(sp: Species, names: tuple[str, ...]) -> dict[str, tuple[float | N
     return out
 
 
+@guard
 def diffusivity_report(
     solute: str | Species,
     medium: str | Species,
@@ -206,6 +207,3 @@ def diffusivity_report(
         notes=tuple(notes),
         warnings=tuple(str(w.message) for w in caught),
     )
-
-
-guard_module(globals(), __all__)

@@ -5,13 +5,14 @@ from __future__ import annotations
 import numpy as np
 
 from .._typing import ArrayLike, FloatOrArray
-from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard_module
+from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard
 from ..constants import R_GAS
 from ..errors import InputValueError
 
 __all__ = ["arrhenius_diffusivity", "arrhenius_parameters"]
 
 
+@guard
 def arrhenius_diffusivity(T: ArrayLike, D0: ArrayLike, Ea: ArrayLike) -> FloatOrArray:
     """Diffusivity in a solid or polymer from an Arrhenius law.
 
@@ -57,6 +58,7 @@ def arrhenius_diffusivity(T: ArrayLike, D0: ArrayLike, Ea: ArrayLike) -> FloatOr
     return finish(D0v * np.exp(-Eav / (R_GAS * np.asarray(Tv))))
 
 
+@guard
 def arrhenius_parameters(T: ArrayLike, D: ArrayLike) -> tuple[float, float]:
     """Fit D0 and Ea of an Arrhenius law to measured diffusivities.
 
@@ -101,6 +103,3 @@ def arrhenius_parameters(T: ArrayLike, D: ArrayLike) -> tuple[float, float]:
         raise InputValueError("T needs at least two distinct temperatures to fit Ea")
     slope, intercept = np.polyfit(1.0 / Tv, np.log(Dv), 1)
     return float(np.exp(intercept)), float(-slope * R_GAS)
-
-
-guard_module(globals(), __all__, unchecked=())

@@ -36,7 +36,7 @@ from numpy.polynomial import chebyshev as _cheb
 
 from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_positive, check_shapes, finish, guard, guard_module
+from .._validation import check_positive, check_shapes, finish, guard
 from ..constants import DEBYE, R_GAS
 from ..errors import MissingConstantError, OutOfRangeError
 from ._databases import quiet
@@ -85,6 +85,7 @@ class PropertyCurve:
     T_max: float
     coefficients: FloatArray
 
+    @guard
     def __call__(self, T: ArrayLike) -> FloatOrArray:
         """Evaluate at temperatures ``T`` [K]; returns values in :attr:`unit`."""
         Tv = check_positive("T", T)
@@ -194,6 +195,7 @@ class GasModel:
         """Highest temperature all curves cover [K]."""
         return min(self.mu.T_max, self.k.T_max, self.cp_molar.T_max)
 
+    @guard
     def density(self, T: ArrayLike, P: ArrayLike = 101325.0) -> FloatOrArray:
         """Ideal-gas density [kg/m^3] at ``T`` [K] and ``P`` [Pa]."""
         Tv = check_positive("T", T)
@@ -201,22 +203,27 @@ class GasModel:
         check_shapes(T=Tv, P=Pv)
         return finish(Pv * self.species.molar_mass / (R_GAS * Tv))
 
+    @guard
     def viscosity(self, T: ArrayLike) -> FloatOrArray:
         """Dynamic viscosity [Pa s] at ``T`` [K]."""
         return self.mu(T)
 
+    @guard
     def thermal_conductivity(self, T: ArrayLike) -> FloatOrArray:
         """Thermal conductivity [W/(m K)] at ``T`` [K]."""
         return self.k(T)
 
+    @guard
     def heat_capacity(self, T: ArrayLike) -> FloatOrArray:
         """Isobaric specific heat capacity [J/(kg K)] at ``T`` [K]."""
         return finish(np.asarray(self.cp_molar(T)) / self.species.molar_mass)
 
+    @guard
     def kinematic_viscosity(self, T: ArrayLike, P: ArrayLike = 101325.0) -> FloatOrArray:
         """Kinematic viscosity [m^2/s] at ``T`` [K] and ``P`` [Pa]."""
         return finish(np.asarray(self.viscosity(T)) / np.asarray(self.density(T, P)))
 
+    @guard
     def prandtl(self, T: ArrayLike) -> FloatOrArray:
         """Prandtl number [-] at ``T`` [K]."""
         cp = np.asarray(self.heat_capacity(T))
@@ -250,26 +257,32 @@ class LiquidModel:
         """Highest temperature of the viscosity and density models [K]."""
         return min(self.mu.T_max, self.molar_volume.T_max)
 
+    @guard
     def density(self, T: ArrayLike) -> FloatOrArray:
         """Saturated-liquid density [kg/m^3] at ``T`` [K]."""
         return finish(self.species.molar_mass / np.asarray(self.molar_volume(T)))
 
+    @guard
     def viscosity(self, T: ArrayLike) -> FloatOrArray:
         """Dynamic viscosity [Pa s] at ``T`` [K]."""
         return self.mu(T)
 
+    @guard
     def thermal_conductivity(self, T: ArrayLike) -> FloatOrArray:
         """Thermal conductivity [W/(m K)] at ``T`` [K]."""
         return self.k(T)
 
+    @guard
     def heat_capacity(self, T: ArrayLike) -> FloatOrArray:
         """Isobaric specific heat capacity [J/(kg K)] at ``T`` [K]."""
         return finish(np.asarray(self.cp_molar(T)) / self.species.molar_mass)
 
+    @guard
     def vapor_pressure(self, T: ArrayLike) -> FloatOrArray:
         """Saturation (vapour) pressure [Pa] at ``T`` [K]."""
         return self._need(self.psat, "vapour pressure")(T)
 
+    @guard
     def enthalpy_vaporization(self, T: ArrayLike) -> FloatOrArray:
         """Specific enthalpy of vaporisation [J/kg] at ``T`` [K]."""
         return finish(
@@ -284,6 +297,7 @@ class LiquidModel:
         return curve
 
 
+@guard
 def gas_model(gas: str | Species) -> GasModel:
     """Resolve the carrier-gas property models of ``gas`` (cached per species).
 
@@ -319,6 +333,7 @@ def gas_model(gas: str | Species) -> GasModel:
     return _gas_model(species(gas))
 
 
+@guard
 def liquid_model(liquid: str | Species) -> LiquidModel:
     """Resolve the solvent-liquid property models of ``liquid`` (cached per species).
 
@@ -492,6 +507,7 @@ def _optional_curve(prop: Any, quantity: str, unit: str, T_low: float, T_high: f
 _PARACHOR_T = 298.15
 
 
+@guard
 def parachor(liquid: str | Species) -> float:
     """Parachor of a species from its surface tension and liquid density.
 
@@ -579,6 +595,7 @@ def _compute_parachor(sp: Species) -> float:
 _HENRY_TABLES = ("Sander T dep", "ChemSep Henry", "Sander Const")
 
 
+@guard
 def henry_constant(solute: str | Species, solvent: str | Species, T: ArrayLike) -> FloatOrArray:
     """Henry's-law constant of a dilute gas in a solvent, :math:`p_A = H\\,x_A`.
 
@@ -654,26 +671,3 @@ def _henry_coefficients(a: Species, b: Species) -> tuple[float, ...]:
         f"no Henry's-law constant for {a.name!r} in {b.name!r} in the thermo tables "
         f"({', '.join(_HENRY_TABLES)}); pass your own constant to the numeric functions"
     )
-
-
-guard_module(globals(), __all__)
-for _cls, _methods in (
-    (PropertyCurve, ("__call__",)),
-    (
-        GasModel,
-        ("density", "viscosity", "thermal_conductivity", "heat_capacity", "kinematic_viscosity", "prandtl"),
-    ),
-    (
-        LiquidModel,
-        (
-            "density",
-            "viscosity",
-            "thermal_conductivity",
-            "heat_capacity",
-            "vapor_pressure",
-            "enthalpy_vaporization",
-        ),
-    ),
-):
-    for _m in _methods:
-        setattr(_cls, _m, guard(getattr(_cls, _m)))

@@ -22,7 +22,7 @@ from dataclasses import dataclass, field
 from typing import Any
 
 from .. import _tables as data
-from .._validation import guard_module
+from .._validation import guard
 from ..constants import DEBYE
 from ..errors import InputValueError, MissingConstantError, UnknownSpeciesError
 from ._databases import quiet
@@ -194,6 +194,7 @@ def _molecule(smiles: str) -> Molecule | None:
         return None
 
 
+@guard
 def le_bas_volume(atoms: Mapping[str, int], smiles: str | None = None) -> float:
     """Molar volume at the normal boiling point by the Le Bas additive method.
 
@@ -303,6 +304,7 @@ def _chain_length(mol: Molecule, start: int, exclude: int) -> int:
     return len(seen) - 1
 
 
+@guard
 def species(identifier: str | Species) -> Species:
     """Resolve a species by name, CAS number or formula (cached).
 
@@ -574,6 +576,3 @@ def _vb_from_thermo(
         return _opt(vl.T_dependent_property(Tb))
     except Exception:
         return None
-
-
-guard_module(globals(), ("species", "le_bas_volume"))

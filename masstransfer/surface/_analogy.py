@@ -21,7 +21,7 @@ from typing import Literal, overload
 import numpy as np
 
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard_module, warn_caller
+from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import R_GAS
 from ..errors import InputValueError
 from ..substances._species import Species, species
@@ -62,6 +62,7 @@ def mass_transfer_coefficient_from_heat(
 def mass_transfer_coefficient_from_heat(
     h: ArrayLike, *, rho: ArrayLike, cp: ArrayLike, Pr: ArrayLike, Sc: ArrayLike, exponent: float = ...
 ) -> FloatOrArray: ...
+@guard(check_output=False)
 def mass_transfer_coefficient_from_heat(
     h: ArrayLike,
     *,
@@ -142,6 +143,7 @@ def heat_transfer_coefficient_from_mass(
 def heat_transfer_coefficient_from_mass(
     k_c: ArrayLike, *, rho: ArrayLike, cp: ArrayLike, Pr: ArrayLike, Sc: ArrayLike, exponent: float = ...
 ) -> FloatOrArray: ...
+@guard(check_output=False)
 def heat_transfer_coefficient_from_mass(
     k_c: ArrayLike,
     *,
@@ -198,6 +200,7 @@ def heat_transfer_coefficient_from_mass(
     return finish(kv * (a["rho"] * a["cp"] * (a["Sc"] / a["Pr"]) ** n))
 
 
+@guard
 def sherwood_from_nusselt(
     Nu: ArrayLike, *, Pr: ArrayLike, Sc: ArrayLike, exponent: float = 1.0 / 3.0
 ) -> FloatOrArray:
@@ -244,6 +247,7 @@ def sherwood_from_nusselt(
     return finish(a["Nu"] * (a["Sc"] / a["Pr"]) ** m)
 
 
+@guard
 def nusselt_from_sherwood(
     Sh: ArrayLike, *, Pr: ArrayLike, Sc: ArrayLike, exponent: float = 1.0 / 3.0
 ) -> FloatOrArray:
@@ -287,6 +291,7 @@ def nusselt_from_sherwood(
     return finish(a["Sh"] * (a["Pr"] / a["Sc"]) ** m)
 
 
+@guard
 def colburn_j_from_friction(f_darcy: ArrayLike) -> FloatOrArray:
     """Colburn j-factor from a friction factor: :math:`j_H = j_D = f_{Fanning}/2 = f_{Darcy}/8`.
 
@@ -320,6 +325,7 @@ def colburn_j_from_friction(f_darcy: ArrayLike) -> FloatOrArray:
     return finish(f / 8.0)
 
 
+@guard
 def stanton_reynolds(f_darcy: ArrayLike) -> FloatOrArray:
     """Reynolds analogy for turbulent duct flow, :math:`St = f/8` (Pr = Sc = 1).
 
@@ -352,6 +358,7 @@ def stanton_reynolds(f_darcy: ArrayLike) -> FloatOrArray:
     return finish(f / 8.0)
 
 
+@guard
 def stanton_prandtl_taylor(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     """Prandtl-Taylor analogy for turbulent duct flow.
 
@@ -389,6 +396,7 @@ def stanton_prandtl_taylor(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     return finish(g / (1.0 + 5.0 * np.sqrt(g) * (np.asarray(a["Pr"]) - 1.0)))
 
 
+@guard
 def stanton_von_karman(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     """Von Karman analogy for turbulent duct flow (three-layer model).
 
@@ -433,6 +441,7 @@ def stanton_von_karman(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     return finish(g / (1.0 + 5.0 * np.sqrt(g) * (P - 1.0 + np.log(1.0 + 5.0 / 6.0 * (P - 1.0)))))
 
 
+@guard
 def lewis_relation(Pr: ArrayLike, Sc: ArrayLike, exponent: float = _TWO_THIRDS) -> FloatOrArray:
     """Ratio :math:`h/(\\rho c_p k_c) = Le^{n}` that the analogy predicts.
 
@@ -472,6 +481,7 @@ def lewis_relation(Pr: ArrayLike, Sc: ArrayLike, exponent: float = _TWO_THIRDS) 
     return finish((a["Sc"] / a["Pr"]) ** n)
 
 
+@guard
 def psychrometric_ratio(h: ArrayLike, k_Y: ArrayLike, c_s: ArrayLike) -> FloatOrArray:
     """Psychrometric ratio :math:`h/(k_Y c_s)`.
 
@@ -566,6 +576,7 @@ class TransferCoefficients:
     warnings: tuple[str, ...]
 
 
+@guard
 def mass_transfer_from_heat(
     h: ArrayLike,
     solute: str | Species,
@@ -698,10 +709,3 @@ def mass_transfer_from_heat(
         method=f"Chilton-Colburn analogy (exponent {n_text}); diffusivity by {method}",
         warnings=tuple(str(w.message) for w in caught),
     )
-
-
-guard_module(
-    globals(),
-    __all__,
-    unchecked=("mass_transfer_coefficient_from_heat", "heat_transfer_coefficient_from_mass"),
-)

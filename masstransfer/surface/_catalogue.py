@@ -16,7 +16,7 @@ from typing import Any
 
 import numpy as np
 
-from .._validation import check_positive
+from .._validation import check_positive, guard
 from ._record import Correlation
 
 __all__ = ["RECORDS"]
@@ -200,6 +200,7 @@ def _friction_fit() -> tuple[np.ndarray[Any, np.dtype[np.float64]], float, float
     return coef, lo, hi
 
 
+@guard
 def darcy_friction_smooth(Re: Any) -> Any:
     """Smooth-pipe Darcy friction factor from ``fluids`` (Clamond's Colebrook solution).
 

@@ -19,7 +19,7 @@ from __future__ import annotations
 import numpy as np
 
 from .._typing import ArrayLike, FloatOrArray
-from .._validation import check_positive, check_shapes, finish, guard_module, in_range
+from .._validation import check_positive, check_shapes, finish, guard, in_range
 from ..constants import R_GAS
 
 __all__ = [
@@ -39,6 +39,7 @@ __all__ = [
 ]
 
 
+@guard
 def log_mean(a: ArrayLike, b: ArrayLike) -> FloatOrArray:
     """Logarithmic mean :math:`(a-b)/\\ln(a/b)`, equal to a where a = b.
 
@@ -82,6 +83,7 @@ def log_mean(a: ArrayLike, b: ArrayLike) -> FloatOrArray:
     return finish(out)
 
 
+@guard
 def kG_from_kc(k_c: ArrayLike, T: ArrayLike) -> FloatOrArray:
     """Gas-side coefficient on a partial-pressure basis, :math:`k_G = k_c/(RT)`.
 
@@ -113,6 +115,7 @@ def kG_from_kc(k_c: ArrayLike, T: ArrayLike) -> FloatOrArray:
     return finish(k / (R_GAS * Tv))
 
 
+@guard
 def kc_from_kG(k_G: ArrayLike, T: ArrayLike) -> FloatOrArray:
     """Concentration-basis coefficient from k_G, :math:`k_c = k_G RT`.
 
@@ -144,6 +147,7 @@ def kc_from_kG(k_G: ArrayLike, T: ArrayLike) -> FloatOrArray:
     return finish(k * R_GAS * Tv)
 
 
+@guard
 def ky_from_kc(k_c: ArrayLike, T: ArrayLike, P: ArrayLike) -> FloatOrArray:
     """Gas-side coefficient on a mole-fraction basis, :math:`k_y = k_c P/(RT)`.
 
@@ -178,6 +182,7 @@ def ky_from_kc(k_c: ArrayLike, T: ArrayLike, P: ArrayLike) -> FloatOrArray:
     return finish(k * Pv / (R_GAS * Tv))
 
 
+@guard
 def kc_from_ky(k_y: ArrayLike, T: ArrayLike, P: ArrayLike) -> FloatOrArray:
     """Concentration-basis coefficient from k_y, :math:`k_c = k_y RT/P`.
 
@@ -212,6 +217,7 @@ def kc_from_ky(k_y: ArrayLike, T: ArrayLike, P: ArrayLike) -> FloatOrArray:
     return finish(k * R_GAS * Tv / Pv)
 
 
+@guard
 def kx_from_kL(k_L: ArrayLike, c_total: ArrayLike) -> FloatOrArray:
     """Liquid-side coefficient on a mole-fraction basis, :math:`k_x = k_L c`.
 
@@ -243,6 +249,7 @@ def kx_from_kL(k_L: ArrayLike, c_total: ArrayLike) -> FloatOrArray:
     return finish(k * c)
 
 
+@guard
 def kL_from_kx(k_x: ArrayLike, c_total: ArrayLike) -> FloatOrArray:
     """Concentration-basis liquid coefficient from k_x, :math:`k_L = k_x/c`.
 
@@ -274,6 +281,7 @@ def kL_from_kx(k_x: ArrayLike, c_total: ArrayLike) -> FloatOrArray:
     return finish(k / c)
 
 
+@guard
 def F_from_k(k: ArrayLike, y_BM: ArrayLike) -> FloatOrArray:
     """F-type (equimolar) coefficient from a stagnant-film coefficient, :math:`F = k\\,y_{B,M}`.
 
@@ -309,6 +317,7 @@ def F_from_k(k: ArrayLike, y_BM: ArrayLike) -> FloatOrArray:
     return finish(kv * y)
 
 
+@guard
 def k_from_F(F: ArrayLike, y_BM: ArrayLike) -> FloatOrArray:
     """Stagnant-film coefficient from an F-type coefficient, :math:`k = F/y_{B,M}`.
 
@@ -341,6 +350,7 @@ def k_from_F(F: ArrayLike, y_BM: ArrayLike) -> FloatOrArray:
     return finish(Fv / y)
 
 
+@guard
 def mass_basis_from_molar(k_y: ArrayLike, M_mix: ArrayLike) -> FloatOrArray:
     """Mass-fraction-basis coefficient from a mole-fraction-basis one (dilute A).
 
@@ -378,6 +388,7 @@ def mass_basis_from_molar(k_y: ArrayLike, M_mix: ArrayLike) -> FloatOrArray:
     return finish(k * M)
 
 
+@guard
 def molar_basis_from_mass(k_omega: ArrayLike, M_mix: ArrayLike) -> FloatOrArray:
     """Mole-fraction-basis coefficient from a mass-fraction-basis one (dilute A).
 
@@ -410,6 +421,7 @@ def molar_basis_from_mass(k_omega: ArrayLike, M_mix: ArrayLike) -> FloatOrArray:
     return finish(k / M)
 
 
+@guard
 def overall_gas_coefficient(k_y: ArrayLike, k_x: ArrayLike, m: ArrayLike) -> FloatOrArray:
     """Overall gas-phase coefficient of two films in series.
 
@@ -454,6 +466,7 @@ def overall_gas_coefficient(k_y: ArrayLike, k_x: ArrayLike, m: ArrayLike) -> Flo
     return finish(1.0 / (1.0 / ky + mv / kx))
 
 
+@guard
 def overall_liquid_coefficient(k_y: ArrayLike, k_x: ArrayLike, m: ArrayLike) -> FloatOrArray:
     """Overall liquid-phase coefficient of two films in series.
 
@@ -493,6 +506,3 @@ def overall_liquid_coefficient(k_y: ArrayLike, k_x: ArrayLike, m: ArrayLike) -> 
     mv = check_positive("m", m)
     check_shapes(k_y=ky, k_x=kx, m=mv)
     return finish(1.0 / (1.0 / (mv * ky) + 1.0 / kx))
-
-
-guard_module(globals(), __all__, unchecked=())

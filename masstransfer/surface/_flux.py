@@ -16,7 +16,7 @@ from .._validation import (
     check_positive,
     check_shapes,
     finish,
-    guard_module,
+    guard,
     in_range,
 )
 from ..constants import R_GAS
@@ -33,6 +33,7 @@ __all__ = [
 ]
 
 
+@guard
 def fick_flux(D: ArrayLike, c1: ArrayLike, c2: ArrayLike, thickness: ArrayLike) -> FloatOrArray:
     """Steady diffusive flux through a layer by Fick's first law.
 
@@ -80,6 +81,7 @@ def fick_flux(D: ArrayLike, c1: ArrayLike, c2: ArrayLike, thickness: ArrayLike) 
     return finish(Dv * (a - b) / L)
 
 
+@guard
 def fick_profile(x: ArrayLike, c1: ArrayLike, c2: ArrayLike, thickness: ArrayLike) -> FloatOrArray:
     """Steady concentration profile across a layer: linear between the faces.
 
@@ -121,6 +123,7 @@ def fick_profile(x: ArrayLike, c1: ArrayLike, c2: ArrayLike, thickness: ArrayLik
     return finish(a + (b - a) * xv / L)
 
 
+@guard
 def equimolar_flux(
     D: ArrayLike, T: ArrayLike, p1: ArrayLike, p2: ArrayLike, thickness: ArrayLike
 ) -> FloatOrArray:
@@ -165,6 +168,7 @@ def equimolar_flux(
     return finish(Dv * (a - b) / (R_GAS * Tv * z))
 
 
+@guard
 def stagnant_film_flux(
     D: ArrayLike, T: ArrayLike, P: ArrayLike, p1: ArrayLike, p2: ArrayLike, thickness: ArrayLike
 ) -> FloatOrArray:
@@ -223,6 +227,7 @@ def stagnant_film_flux(
     return finish(Dv * Pv / (R_GAS * Tv * z) * np.log((Pv - b) / (Pv - a)))
 
 
+@guard
 def high_flux_correction(phi: ArrayLike) -> FloatOrArray:
     """Film-theory correction of a low-flux coefficient for a finite total flux.
 
@@ -269,6 +274,7 @@ def high_flux_correction(phi: ArrayLike) -> FloatOrArray:
     return finish(out)
 
 
+@guard
 def ackermann_correction(N: ArrayLike, cp_molar: ArrayLike, h: ArrayLike) -> FloatOrArray:
     """Ackermann correction of a heat-transfer coefficient for mass transfer through it.
 
@@ -309,6 +315,7 @@ def ackermann_correction(N: ArrayLike, cp_molar: ArrayLike, h: ArrayLike) -> Flo
     return high_flux_correction(np.asarray(Nv) * cp / hv)
 
 
+@guard
 def high_flux_rate(
     F: ArrayLike, y_surface: ArrayLike, y_bulk: ArrayLike, flux_ratio: ArrayLike = 1.0
 ) -> FloatOrArray:
@@ -367,6 +374,3 @@ def high_flux_rate(
             "y < 1); check y_surface, y_bulk and flux_ratio"
         )
     return finish(r * Fv * np.log(num / den))
-
-
-guard_module(globals(), __all__, unchecked=())

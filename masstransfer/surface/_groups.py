@@ -15,7 +15,7 @@ from typing import Any
 import numpy as np
 
 from .._typing import ArrayLike, FloatOrArray
-from .._validation import as_float, check_positive, check_shapes, finish, guard_module
+from .._validation import as_float, check_positive, check_shapes, finish, guard
 from ..constants import GRAVITY
 
 __all__ = [
@@ -61,6 +61,7 @@ def _pos(**kw: ArrayLike) -> dict[str, FloatOrArray]:
     return out
 
 
+@guard
 def reynolds(V: ArrayLike, L: ArrayLike, nu: ArrayLike) -> FloatOrArray:
     """Reynolds number :math:`Re = VL/\\nu`.
 
@@ -92,6 +93,7 @@ def reynolds(V: ArrayLike, L: ArrayLike, nu: ArrayLike) -> FloatOrArray:
     return finish(_fc().Reynolds(a["V"], a["L"], nu=a["nu"]))
 
 
+@guard
 def prandtl(cp: ArrayLike, k: ArrayLike, mu: ArrayLike) -> FloatOrArray:
     """Prandtl number :math:`Pr = c_p\\mu/k`.
 
@@ -123,6 +125,7 @@ def prandtl(cp: ArrayLike, k: ArrayLike, mu: ArrayLike) -> FloatOrArray:
     return finish(_fc().Prandtl(Cp=a["cp"], k=a["k"], mu=a["mu"]))
 
 
+@guard
 def schmidt(D: ArrayLike, nu: ArrayLike) -> FloatOrArray:
     """Schmidt number :math:`Sc = \\nu/D`.
 
@@ -152,6 +155,7 @@ def schmidt(D: ArrayLike, nu: ArrayLike) -> FloatOrArray:
     return finish(_fc().Schmidt(a["D"], nu=a["nu"]))
 
 
+@guard
 def lewis(alpha: ArrayLike, D: ArrayLike) -> FloatOrArray:
     """Lewis number :math:`Le = \\alpha/D = Sc/Pr`.
 
@@ -181,6 +185,7 @@ def lewis(alpha: ArrayLike, D: ArrayLike) -> FloatOrArray:
     return finish(_fc().Lewis(a["D"], alpha=a["alpha"]))
 
 
+@guard
 def nusselt(h: ArrayLike, L: ArrayLike, k: ArrayLike) -> FloatOrArray:
     """Nusselt number :math:`Nu = hL/k`.
 
@@ -212,6 +217,7 @@ def nusselt(h: ArrayLike, L: ArrayLike, k: ArrayLike) -> FloatOrArray:
     return finish(_fc().Nusselt(a["h"], a["L"], a["k"]))
 
 
+@guard
 def sherwood(k_c: ArrayLike, L: ArrayLike, D: ArrayLike) -> FloatOrArray:
     """Sherwood number :math:`Sh = k_cL/D`.
 
@@ -243,6 +249,7 @@ def sherwood(k_c: ArrayLike, L: ArrayLike, D: ArrayLike) -> FloatOrArray:
     return finish(_fc().Sherwood(a["k_c"], a["L"], a["D"]))
 
 
+@guard
 def stanton_heat(h: ArrayLike, V: ArrayLike, rho: ArrayLike, cp: ArrayLike) -> FloatOrArray:
     """Heat-transfer Stanton number :math:`St = h/(\\rho c_p V)`.
 
@@ -276,6 +283,7 @@ def stanton_heat(h: ArrayLike, V: ArrayLike, rho: ArrayLike, cp: ArrayLike) -> F
     return finish(_fc().Stanton(a["h"], a["V"], a["rho"], a["cp"]))
 
 
+@guard
 def stanton_mass(k_c: ArrayLike, V: ArrayLike) -> FloatOrArray:
     """Mass-transfer Stanton number :math:`St_m = k_c/V`.
 
@@ -306,6 +314,7 @@ def stanton_mass(k_c: ArrayLike, V: ArrayLike) -> FloatOrArray:
     return finish(a["k_c"] / a["V"])
 
 
+@guard
 def colburn_j_heat(St: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     """Colburn j-factor for heat transfer :math:`j_H = St\\,Pr^{2/3}`.
 
@@ -336,6 +345,7 @@ def colburn_j_heat(St: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     return finish(a["St"] * a["Pr"] ** (2.0 / 3.0))
 
 
+@guard
 def colburn_j_mass(St_m: ArrayLike, Sc: ArrayLike) -> FloatOrArray:
     """Colburn j-factor for mass transfer :math:`j_D = St_m\\,Sc^{2/3}`.
 
@@ -367,6 +377,7 @@ def colburn_j_mass(St_m: ArrayLike, Sc: ArrayLike) -> FloatOrArray:
     return finish(a["St_m"] * a["Sc"] ** (2.0 / 3.0))
 
 
+@guard
 def peclet_heat(V: ArrayLike, L: ArrayLike, alpha: ArrayLike) -> FloatOrArray:
     """Heat-transfer Peclet number :math:`Pe = VL/\\alpha = Re\\,Pr`.
 
@@ -398,6 +409,7 @@ def peclet_heat(V: ArrayLike, L: ArrayLike, alpha: ArrayLike) -> FloatOrArray:
     return finish(_fc().Peclet_heat(a["V"], a["L"], alpha=a["alpha"]))
 
 
+@guard
 def peclet_mass(V: ArrayLike, L: ArrayLike, D: ArrayLike) -> FloatOrArray:
     """Mass-transfer Peclet number :math:`Pe_m = VL/D = Re\\,Sc`.
 
@@ -429,6 +441,7 @@ def peclet_mass(V: ArrayLike, L: ArrayLike, D: ArrayLike) -> FloatOrArray:
     return finish(_fc().Peclet_mass(a["V"], a["L"], a["D"]))
 
 
+@guard
 def grashof_thermal(
     L: ArrayLike, beta: ArrayLike, dT: ArrayLike, nu: ArrayLike, g: float = GRAVITY
 ) -> FloatOrArray:
@@ -468,6 +481,7 @@ def grashof_thermal(
     return finish(_fc().Grashof(a["L"], a["beta"], d, 0.0, nu=a["nu"], g=a["g"]))
 
 
+@guard
 def grashof_solutal(
     L: ArrayLike, rho_surface: ArrayLike, rho_bulk: ArrayLike, nu: ArrayLike, g: float = GRAVITY
 ) -> FloatOrArray:
@@ -517,6 +531,7 @@ def grashof_solutal(
     return finish(a["g"] * np.abs(rs - rb) / (0.5 * (rs + rb)) * a["L"] ** 3 / a["nu"] ** 2)
 
 
+@guard
 def rayleigh(Gr: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     """Rayleigh number :math:`Ra = Gr\\,Pr` (or :math:`Gr\\,Sc` for mass transfer).
 
@@ -546,6 +561,7 @@ def rayleigh(Gr: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     return finish(_fc().Rayleigh(a["Pr"], a["Gr"]))
 
 
+@guard
 def biot_heat(h: ArrayLike, L: ArrayLike, k_solid: ArrayLike) -> FloatOrArray:
     """Heat-transfer Biot number :math:`Bi = hL/k_s`.
 
@@ -577,6 +593,7 @@ def biot_heat(h: ArrayLike, L: ArrayLike, k_solid: ArrayLike) -> FloatOrArray:
     return finish(_fc().Biot(a["h"], a["L"], a["k_solid"]))
 
 
+@guard
 def biot_mass(k_c: ArrayLike, L: ArrayLike, D_solid: ArrayLike, partition: ArrayLike = 1.0) -> FloatOrArray:
     """Mass-transfer Biot number :math:`Bi_m = k_cL/(K D_s)`.
 
@@ -616,6 +633,7 @@ def biot_mass(k_c: ArrayLike, L: ArrayLike, D_solid: ArrayLike, partition: Array
     return finish(a["k_c"] * a["L"] / (a["partition"] * a["D_solid"]))
 
 
+@guard
 def fourier_heat(t: ArrayLike, L: ArrayLike, alpha: ArrayLike) -> FloatOrArray:
     """Heat-transfer Fourier number :math:`Fo = \\alpha t/L^2`.
 
@@ -647,6 +665,7 @@ def fourier_heat(t: ArrayLike, L: ArrayLike, alpha: ArrayLike) -> FloatOrArray:
     return finish(_fc().Fourier_heat(a["t"], a["L"], alpha=a["alpha"]))
 
 
+@guard
 def fourier_mass(t: ArrayLike, L: ArrayLike, D: ArrayLike) -> FloatOrArray:
     """Mass-transfer Fourier number :math:`Fo_m = Dt/L^2`.
 
@@ -678,6 +697,7 @@ def fourier_mass(t: ArrayLike, L: ArrayLike, D: ArrayLike) -> FloatOrArray:
     return finish(_fc().Fourier_mass(a["t"], a["L"], a["D"]))
 
 
+@guard
 def graetz(Re: ArrayLike, Pr: ArrayLike, D: ArrayLike, x: ArrayLike) -> FloatOrArray:
     """Graetz number :math:`Gz = (D/x)\\,Re\\,Pr` (use Sc for mass transfer).
 
@@ -712,6 +732,7 @@ def graetz(Re: ArrayLike, Pr: ArrayLike, D: ArrayLike, x: ArrayLike) -> FloatOrA
     return finish(a["D"] / a["x"] * a["Re"] * a["Pr"])
 
 
+@guard
 def archimedes(
     d: ArrayLike, rho_fluid: ArrayLike, rho_particle: ArrayLike, mu: ArrayLike, g: float = GRAVITY
 ) -> FloatOrArray:
@@ -748,6 +769,3 @@ def archimedes(
     a = _pos(d=d, rho_fluid=rho_fluid, rho_particle=rho_particle, mu=mu, g=g)
     rf, rp = np.asarray(a["rho_fluid"]), np.asarray(a["rho_particle"])
     return finish(a["g"] * a["d"] ** 3 * rf * np.abs(rp - rf) / a["mu"] ** 2)
-
-
-guard_module(globals(), __all__, unchecked=())

@@ -21,7 +21,7 @@ from typing import Any
 
 import numpy as np
 
-from .._validation import guard, guard_module
+from .._validation import guard
 from ..errors import InputValueError, UnknownMethodError
 from ._catalogue import RECORDS, darcy_friction_smooth
 from ._record import Correlation
@@ -39,6 +39,7 @@ if len(_BY_SLUG) != len(RECORDS):  # pragma: no cover - guards the table
     raise RuntimeError("duplicate correlation slugs")
 
 
+@guard
 def all_correlations() -> tuple[Correlation, ...]:
     """Every record of the catalogue.
 
@@ -60,6 +61,7 @@ def all_correlations() -> tuple[Correlation, ...]:
     return RECORDS
 
 
+@guard
 def geometries() -> tuple[str, ...]:
     """List the geometries the catalogue covers.
 
@@ -81,6 +83,7 @@ def geometries() -> tuple[str, ...]:
     return tuple(dict.fromkeys(r.geometry for r in RECORDS))
 
 
+@guard
 def correlation(slug: str) -> Correlation:
     """Look a record up by its slug.
 
@@ -119,6 +122,7 @@ def correlation(slug: str) -> Correlation:
         ) from None
 
 
+@guard
 def find_correlations(
     geometry: str | None = None, *, transport: str | None = None, **conditions: Any
 ) -> list[Correlation]:
@@ -193,10 +197,3 @@ def find_correlations(
         hits.append(((missing, matches, acc, rec.slug), rec))
     hits.sort(key=lambda h: h[0])
     return [rec for _, rec in hits]
-
-
-guard_module(globals(), ("all_correlations", "geometries", "correlation", "find_correlations"))
-darcy_friction_smooth = guard(darcy_friction_smooth)
-for _m in ("nusselt", "sherwood", "evaluate"):
-    # record outputs are finite by construction for inputs inside the accepted magnitudes
-    setattr(Correlation, _m, guard(getattr(Correlation, _m), check_output=False))

@@ -11,7 +11,7 @@ from typing import Any, Literal
 import numpy as np
 
 from .._typing import FloatOrArray
-from .._validation import MAGNITUDE_LIMIT, as_float, check_shapes, finish, warn_caller
+from .._validation import MAGNITUDE_LIMIT, as_float, check_shapes, finish, guard, warn_caller
 from ..errors import EnvelopeError, EnvelopeWarning, InputValueError
 
 __all__ = ["Correlation", "CorrelationResult"]
@@ -131,6 +131,7 @@ class Correlation:
 
     # -- evaluation --------------------------------------------------------
 
+    @guard(check_output=False)
     def nusselt(self, *, strict: bool = False, **inputs: Any) -> FloatOrArray:
         """Nusselt number from the heat-form inputs (e.g. ``Re=..., Pr=...``).
 
@@ -150,6 +151,7 @@ class Correlation:
         """
         return self.evaluate("heat", strict=strict, stacklevel=3, **inputs).value
 
+    @guard(check_output=False)
     def sherwood(self, *, strict: bool = False, **inputs: Any) -> FloatOrArray:
         """Sherwood number from the mass-form inputs (e.g. ``Re=..., Sc=...``).
 
@@ -168,6 +170,7 @@ class Correlation:
         """
         return self.evaluate("mass", strict=strict, stacklevel=3, **inputs).value
 
+    @guard(check_output=False)
     def evaluate(
         self, kind: Kind, *, strict: bool = False, stacklevel: int = 2, **inputs: Any
     ) -> CorrelationResult:

@@ -21,7 +21,7 @@ from typing import overload
 import numpy as np
 
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard_module, in_range
+from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, in_range
 from ..constants import R_GAS
 from ..errors import OutOfRangeError
 from ..substances._species import Species, species
@@ -31,6 +31,7 @@ __all__ = ["wet_bulb_temperature", "wet_surface_temperature"]
 _ITERATIONS = 48  # bisection halvings: a 300 K bracket resolved to about 1e-12 K
 
 
+@guard
 def wet_surface_temperature(
     liquid: str | Species,
     gas: str | Species,
@@ -158,6 +159,7 @@ def wet_bulb_temperature(T: float, relative_humidity: float, P: float = ...) -> 
 def wet_bulb_temperature(T: FloatArray, relative_humidity: ArrayLike, P: ArrayLike = ...) -> FloatArray: ...
 @overload
 def wet_bulb_temperature(T: ArrayLike, relative_humidity: ArrayLike, P: ArrayLike = ...) -> FloatOrArray: ...
+@guard
 def wet_bulb_temperature(T: ArrayLike, relative_humidity: ArrayLike, P: ArrayLike = 101325.0) -> FloatOrArray:
     """Psychrometric wet-bulb temperature of humid air, from the heat-mass analogy.
 
@@ -209,6 +211,3 @@ def wet_bulb_temperature(T: ArrayLike, relative_humidity: ArrayLike, P: ArrayLik
     if (y >= 1).any():
         raise OutOfRangeError("the water vapour pressure at T exceeds P; lower T or raise P")
     return wet_surface_temperature("water", "air", Tv, finish(y), Pv)
-
-
-guard_module(globals(), __all__, unchecked=())
