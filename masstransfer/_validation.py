@@ -90,7 +90,8 @@ def _bad(name: str, value: FloatOrArray, mask: Any, what: str, fix: str) -> Inpu
         shown = repr(value)
     else:
         bad = np.asarray(value)[mask]
-        shown = f"{bad.ravel()[0]!r} (first of {bad.size} bad entries in an array of shape {np.shape(value)})"
+        first = float(bad.ravel()[0])
+        shown = f"{first!r} (first of {bad.size} bad entries in an array of shape {np.shape(value)})"
     return InputValueError(f"{name}={shown} {what}; {fix}")
 
 

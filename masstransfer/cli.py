@@ -2,14 +2,17 @@
 
 Subcommands: ``demo``, ``diffusivity``, ``coefficient``, ``correlations``
 and ``wet-bulb``.  Readable tables with units by default, ``--json`` for
-scripts.  Errors from the library print one line and exit with status 2.
+scripts.  Errors from the library print one line (a JSON object with ``--json``) and exit with
+status 2; cautions (envelope warnings) go to stderr, or into the JSON under ``"warnings"``.
 """
 
 from __future__ import annotations
 
 import argparse
 import json
+import os
 import sys
+import warnings
 from collections.abc import Sequence
 from typing import Any
 
@@ -318,23 +321,56 @@ def main(argv: Sequence[str] | None = None) -> int:
 
     """
     args = _parser().parse_args(argv)
+    as_json = bool(getattr(args, "json", False))
     handlers = {
         "diffusivity": _diffusivity,
         "coefficient": _coefficient,
         "correlations": _correlations,
         "wet-bulb": _wet_bulb,
     }
-    try:
-        if args.command == "demo":
-            from .demo import demo_report
+    # one process, one thread: recording every warning here is safe, and keeps `-W error`
+    # (or any user filter) from turning a library caution into a traceback
+    with warnings.catch_warnings(record=True) as caught:
+        warnings.simplefilter("always")
+        try:
+            if args.command == "demo":
+                from .demo import demo_report
 
-            out = demo_report()
-        else:
-            out = handlers[args.command](args)
-    except MassTransferError as exc:
+                out = demo_report()
+            else:
+                out = handlers[args.command](args)
+        except MassTransferError as exc:
+            return _emit_error(exc, as_json)
+    notes = list(dict.fromkeys(f"{w.category.__name__}: {w.message}" for w in caught))
+    if as_json and notes:
+        data = json.loads(out)
+        if isinstance(data, dict):
+            data["warnings"] = list(dict.fromkeys([*data.get("warnings", []), *notes]))
+            out = json.dumps(data, indent=2)
+            notes = []
+    return _emit(out, notes)
+
+
+def _emit_error(exc: MassTransferError, as_json: bool) -> int:
+    """Report a rejected input: one line on stderr, or a JSON object on stdout with ``--json``."""
+    if as_json:
+        _emit(json.dumps({"error": {"type": type(exc).__name__, "message": str(exc)}}, indent=2), [])
+    else:
         print(f"masstransfer: error: {exc}", file=sys.stderr)
-        return 2
-    print(out)
+    return 2
+
+
+def _emit(out: str, notes: Sequence[str]) -> int:
+    """Print the result (and cautions on stderr); a reader that closes the pipe early ends it quietly."""
+    try:
+        for note in notes:
+            print(f"masstransfer: caution: {note}", file=sys.stderr)
+        print(out)
+        sys.stdout.flush()
+    except BrokenPipeError:
+        # the reader (head, less) has gone: silence the interpreter's own flush at exit
+        devnull = os.open(os.devnull, os.O_WRONLY)
+        os.dup2(devnull, sys.stdout.fileno())
     return 0
 
 
