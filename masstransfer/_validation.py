@@ -7,15 +7,18 @@ costs microseconds; everything else is converted once with
 
 from __future__ import annotations
 
+import contextlib
+import contextvars
 import dataclasses
 import functools
 import inspect
 import math
 import os
 import sys
+import threading
 import types
 import warnings
-from collections.abc import Callable
+from collections.abc import Callable, Iterator
 from typing import Any, ParamSpec, TypeVar, overload
 
 import numpy as np
@@ -30,6 +33,7 @@ __all__ = [
     "check_nonnegative",
     "check_positive",
     "check_shapes",
+    "collect_warnings",
     "finish",
     "guard",
     "in_range",
@@ -214,14 +218,65 @@ _R = TypeVar("_R")
 _PACKAGE_DIR = os.path.dirname(os.path.abspath(__file__))
 
 
+#: Warnings collected by :func:`collect_warnings` in the current thread or task (None: emit them).
+_COLLECTOR: contextvars.ContextVar[list[tuple[str, type[Warning]]] | None] = contextvars.ContextVar(
+    "masstransfer_warning_collector", default=None
+)
+#: The "already shown" registry of our warnings, per calling location.  Python keeps one per module
+#: keyed on the full text, which grows without bound when the text names input values; this one
+#: is bounded (cleared when full: at worst a caution is shown once more).
+_REGISTRIES: dict[str, dict[Any, Any]] = {}
+_REGISTRY_LIMIT = 1024  # entries per calling file
+_REGISTRY_LOCK = threading.Lock()
+
+
+@contextlib.contextmanager
+def collect_warnings() -> Iterator[list[tuple[str, type[Warning]]]]:
+    """Collect the library's own warnings issued inside the block instead of emitting them.
+
+    Thread- and task-local (a :class:`contextvars.ContextVar`): unlike
+    :class:`warnings.catch_warnings` it touches no process-wide filter, so concurrent callers
+    neither lose nor receive each other's warnings.  The caller re-issues what it collected
+    with :func:`warn_caller` once the block ends, so the user's filters decide as usual.
+    """
+    bucket: list[tuple[str, type[Warning]]] = []
+    token = _COLLECTOR.set(bucket)
+    try:
+        yield bucket
+    finally:
+        _COLLECTOR.reset(token)
+
+
 def warn_caller(message: str, category: type[Warning]) -> None:
-    """Issue a warning attributed to the first frame outside this package (the user's code)."""
-    level = 2  # stacklevel 2 is the caller of this helper
+    """Issue a warning attributed to the first frame outside this package (the user's code).
+
+    Inside :func:`collect_warnings` the warning is collected instead.  The user's filters apply
+    as for :func:`warnings.warn`; the de-duplication registry is the bounded one above.
+    """
+    bucket = _COLLECTOR.get()
+    if bucket is not None:
+        bucket.append((message, category))
+        return
     frame: types.FrameType | None = sys._getframe(1)
     while frame is not None and os.path.abspath(frame.f_code.co_filename).startswith(_PACKAGE_DIR):
         frame = frame.f_back
-        level += 1
-    warnings.warn(message, category, stacklevel=level)
+    if frame is None:  # called from inside the package only (e.g. at import): attribute it here
+        warnings.warn(message, category, stacklevel=2)
+        return
+    filename = frame.f_code.co_filename
+    with _REGISTRY_LOCK:
+        registry = _REGISTRIES.setdefault(filename, {})
+        if len(registry) > _REGISTRY_LIMIT:
+            registry.clear()
+    warnings.warn_explicit(
+        message,
+        category,
+        filename,
+        frame.f_lineno,
+        module=frame.f_globals.get("__name__"),
+        registry=registry,
+        module_globals=frame.f_globals,
+    )
 
 
 def _suspect(fn: Callable[..., Any], args: tuple[Any, ...], kwargs: dict[str, Any]) -> str:
