@@ -9,6 +9,7 @@ a numpy RuntimeWarning (a silent NaN in the making), fails the test.
 from __future__ import annotations
 
 import dataclasses
+import inspect
 import os
 import warnings
 from typing import Any
@@ -276,9 +277,19 @@ def _outcome(fn: Any, kwargs: dict[str, Any]) -> BaseException | None:
     return None
 
 
+def _default(fn: Any, key: str) -> Any:
+    try:
+        param = inspect.signature(fn).parameters.get(key)
+    except (TypeError, ValueError):
+        return inspect.Parameter.empty
+    return inspect.Parameter.empty if param is None else param.default
+
+
 def _kind(valid: Any) -> str:
     if isinstance(valid, str):
         return "name"
+    if isinstance(valid, list | tuple) and valid and all(type(v) in (int, float) for v in valid):
+        return "number"
     if isinstance(valid, bool) or not isinstance(valid, int | float | np.ndarray):
         return "object"
     return "number"
@@ -324,6 +335,8 @@ def test_adversarial_inputs(name, fn, valid, data):
         return
     value = _BAD[bad]
     allowed, may_succeed = _expected(_kind(valid[key]), value)
+    if value is None and _default(fn, key) is None:
+        may_succeed = True  # None is this parameter's own default
     err = _outcome(fn, {**valid, key: value})
     if err is None:
         assert may_succeed, f"{name}({key}={value!r}) returned a result; expected {allowed}"

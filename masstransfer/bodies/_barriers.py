@@ -23,9 +23,9 @@ from typing import Final, overload
 import numpy as np
 
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard
+from .._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard, scalar
 from ..constants import ATM, R_GAS, T_ICE
-from ..errors import InputValueError, UnknownMethodError
+from ..errors import InputTypeError, InputValueError, UnknownMethodError
 
 __all__ = [
     "FLUX_UNITS",
@@ -97,6 +97,8 @@ def _convert(
     value: ArrayLike, from_unit: str, to_unit: str, table: MappingProxyType[str, float], kind: str
 ) -> FloatOrArray:
     for arg, unit in (("from_unit", from_unit), ("to_unit", to_unit)):
+        if not isinstance(unit, str):
+            raise InputTypeError(f"{arg}={unit!r} is a {type(unit).__name__}, not a {kind} unit name")
         if unit not in table:
             raise UnknownMethodError(
                 f"{arg}={unit!r} is not a {kind} unit; accepted: {', '.join(repr(u) for u in table)}"
@@ -408,18 +410,24 @@ def steady_flux(
     0.413
 
     """
+    if isinstance(layers, Layer) or not isinstance(layers, Sequence) or isinstance(layers, str):
+        raise InputTypeError(
+            f"layers={layers!r} is a {type(layers).__name__}; pass a list of masstransfer.bodies.Layer"
+        )
     if not layers:
         raise InputValueError("layers is empty; pass at least one Layer")
     for i, lay in enumerate(layers):
         if not isinstance(lay, Layer):
-            raise InputValueError(
+            raise InputTypeError(
                 f"layers[{i}] is {type(lay).__name__}, not a Layer; build masstransfer.bodies.Layer(...)"
             )
-    ph = float(check_nonnegative("p_high", p_high))
-    pl = float(check_nonnegative("p_low", p_low))
-    Tv = float(check_positive("T", T))
-    r_out = R_GAS * Tv / float(check_positive("k_high", k_high)) if k_high is not None else 0.0
-    r_in = R_GAS * Tv / float(check_positive("k_low", k_low)) if k_low is not None else 0.0
+    ph = float(check_nonnegative("p_high", scalar("p_high", p_high)))
+    pl = float(check_nonnegative("p_low", scalar("p_low", p_low)))
+    Tv = float(check_positive("T", scalar("T", T)))
+    r_out = (
+        R_GAS * Tv / float(check_positive("k_high", scalar("k_high", k_high))) if k_high is not None else 0.0
+    )
+    r_in = R_GAS * Tv / float(check_positive("k_low", scalar("k_low", k_low))) if k_low is not None else 0.0
     res = np.array([r_out, *[lay.resistance for lay in layers], r_in])
     total = float(res.sum())
     N = (ph - pl) / total
@@ -479,7 +487,7 @@ def arrhenius(T: ArrayLike, value_ref: ArrayLike, T_ref: float, E: ArrayLike) ->
     """
     Tv = check_positive("T", T)
     v0 = check_positive("value_ref", value_ref)
-    T0 = float(check_positive("T_ref", T_ref))
+    T0 = float(check_positive("T_ref", scalar("T_ref", T_ref)))
     Ev = as_float("E", E)
     if not np.all(np.isfinite(Ev)):
         raise InputValueError("E is not finite; pass a finite energy [J/mol]")
@@ -561,9 +569,9 @@ def diffusivity_from_time_lag(thickness: float, lag: float, lag_stderr: float = 
     (1.0, 4.8)
 
     """
-    L = float(check_positive("thickness", thickness))
-    th = float(check_positive("lag", lag))
-    se = float(check_nonnegative("lag_stderr", lag_stderr))
+    L = float(check_positive("thickness", scalar("thickness", thickness)))
+    th = float(check_positive("lag", scalar("lag", lag)))
+    se = float(check_nonnegative("lag_stderr", scalar("lag_stderr", lag_stderr)))
     D = L * L / (6 * th)
     return D, D * se / th
 
@@ -617,9 +625,9 @@ def permeation_curve(t: ArrayLike, thickness: float, D: float, c_upstream: float
     from ._transient import SERIES_TOLERANCE
 
     tv = check_nonnegative("t", t)
-    L = float(check_positive("thickness", thickness))
-    Dv = float(check_positive("D", D))
-    c1 = float(check_nonnegative("c_upstream", c_upstream))
+    L = float(check_positive("thickness", scalar("thickness", thickness)))
+    Dv = float(check_positive("D", scalar("D", D)))
+    c1 = float(check_nonnegative("c_upstream", scalar("c_upstream", c_upstream)))
     tau = np.atleast_1d(np.asarray(tv, dtype=float) * Dv / L**2)
     out = np.zeros_like(tau)
     short = (tau > 0) & (tau < 0.1)
@@ -683,7 +691,7 @@ def fit_time_lag(t: ArrayLike, Q: ArrayLike, t_min: float | None = None) -> tupl
     qv = np.asarray(as_float("Q", Q), dtype=float).ravel()
     if tv.shape != qv.shape or tv.size < 3:
         raise InputValueError("t and Q must be 1-D arrays of equal length with at least three points")
-    cut = float(np.median(tv)) if t_min is None else float(check_nonnegative("t_min", t_min))
+    cut = float(np.median(tv)) if t_min is None else float(check_nonnegative("t_min", scalar("t_min", t_min)))
     sel = tv >= cut
     if sel.sum() < 3:
         raise InputValueError("fewer than three points after t_min; lower t_min or record longer")
@@ -807,9 +815,9 @@ def oxygen_ingress(
     (210, 2.14)
 
     """
-    A = float(check_positive("area", area))
-    po = float(check_nonnegative("p_outside", p_outside))
-    pi = float(check_nonnegative("p_inside", p_inside))
+    A = float(check_positive("area", scalar("area", area)))
+    po = float(check_nonnegative("p_outside", scalar("p_outside", p_outside)))
+    pi = float(check_nonnegative("p_inside", scalar("p_inside", p_inside)))
     if pi > po:
         raise InputValueError("p_inside exceeds p_outside: oxygen would leave the pack; check the pressures")
     tv = np.atleast_1d(np.asarray(check_nonnegative("t", t), dtype=float))
@@ -820,7 +828,7 @@ def oxygen_ingress(
     ml = cum / _CM3_STP
     t_lim = None
     if limit_mg is not None:
-        lim = float(check_positive("limit_mg", limit_mg))
+        lim = float(check_positive("limit_mg", scalar("limit_mg", limit_mg)))
         t_lim = lim / (rate * _M_O2_MG) if rate > 0 else math.inf
     return IngressResult(
         rate=rate,

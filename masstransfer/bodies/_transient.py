@@ -24,8 +24,16 @@ import numpy as np
 from scipy import special
 
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard
-from ..errors import InputValueError, UnknownMethodError
+from .._validation import (
+    check_finite,
+    check_nonnegative,
+    check_positive,
+    check_shapes,
+    finish,
+    guard,
+    scalar,
+)
+from ..errors import InputTypeError, InputValueError, UnknownMethodError
 
 __all__ = [
     "SERIES_TOLERANCE",
@@ -50,8 +58,18 @@ _SHORT_TIME: Final = {"slab": 0.05, "cylinder": 0.01, "sphere": 0.05}
 _MAX_TERMS: Final = 20000
 
 
+def _biot(biot: Any) -> float | None:
+    """Validate a mass Biot number: None (no surface resistance) or one finite, positive number."""
+    if biot is None:
+        return None
+    bi = scalar("biot", biot)
+    return float(check_positive("biot", bi, "pass a positive Biot number, or None for no surface resistance"))
+
+
 def _shape(shape: str) -> str:
-    if not isinstance(shape, str) or shape.lower() not in SHAPES:
+    if not isinstance(shape, str):
+        raise InputTypeError(f"shape={shape!r} is a {type(shape).__name__}; pass one of {', '.join(SHAPES)}")
+    if shape.lower() not in SHAPES:
         raise UnknownMethodError(f"shape={shape!r} is not one of {', '.join(SHAPES)}; choose one of them")
     return shape.lower()
 
@@ -308,13 +326,10 @@ def fractional_uptake(
     flat = T.ravel()
     out = np.zeros_like(flat)
     pos = flat > 0
-    if biot is None or (isinstance(biot, int | float) and math.isinf(biot)):
+    bi = _biot(biot)
+    if bi is None:
         out[pos] = _uptake_constant_surface(s, flat[pos])
     else:
-        bi = as_float("biot", biot)
-        if not isinstance(bi, float):
-            raise InputValueError("biot must be a single number (one body, one surface condition)")
-        check_positive("biot", bi, "pass a positive Biot number, or None for no surface resistance")
         out[pos] = _uptake_surface_resistance(s, flat[pos], bi)
     out = np.clip(out, 0.0, 1.0)
     return finish(out.reshape(shape_out))
@@ -416,8 +431,8 @@ def concentration_profile(
     s = _shape(shape)
     x = check_nonnegative("position", position)
     tv = check_nonnegative("t", t)
-    Dv = float(check_positive("D", D))
-    a = float(check_positive("size", size))
+    Dv = float(check_positive("D", scalar("D", D)))
+    a = float(check_positive("size", scalar("size", size)))
     check_shapes(position=x, t=tv)
     if np.any(np.asarray(x) > a * (1 + 1e-12)):
         raise InputValueError(f"position must lie between 0 and size={a!r} (centre to surface)")
@@ -426,14 +441,14 @@ def concentration_profile(
     out = np.zeros_like(Xf)
     pos = Tf > 0
     if pos.any():
-        out[pos] = _profile(s, Xf[pos], Tf[pos], biot)
+        out[pos] = _profile(s, Xf[pos], Tf[pos], _biot(biot))
     return finish(np.clip(out, 0.0, 1.0).reshape(X.shape))
 
 
 def _profile(shape: str, X: FloatArray, T: FloatArray, biot: float | None) -> FloatArray:
     T0 = float(T.min())
     size = X.size
-    if biot is None or math.isinf(biot):
+    if biot is None:
         if shape == "slab":
             if _SHORT_TIME["slab"] > T0:
                 # Crank (4.16): image erfc terms, rapidly convergent at short times
@@ -591,8 +606,8 @@ def semi_infinite_concentration(
     xv = check_nonnegative("x", x)
     tv = check_nonnegative("t", t)
     Dv = check_positive("D", D)
-    cs = as_float("c_surface", c_surface)
-    ci = as_float("c_initial", c_initial)
+    cs = check_finite("c_surface", c_surface)
+    ci = check_finite("c_initial", c_initial)
     check_shapes(x=xv, t=tv, D=Dv, c_surface=cs, c_initial=ci)
     for name, v in (("c_surface", cs), ("c_initial", ci)):
         if not np.all(np.isfinite(v)):
@@ -658,8 +673,8 @@ def semi_infinite_uptake(
     """
     tv = check_nonnegative("t", t)
     Dv = check_positive("D", D)
-    cs = as_float("c_surface", c_surface)
-    ci = as_float("c_initial", c_initial)
+    cs = check_finite("c_surface", c_surface)
+    ci = check_finite("c_initial", c_initial)
     check_shapes(t=tv, D=Dv, c_surface=cs, c_initial=ci)
     rt = np.sqrt(np.asarray(Dv * tv, dtype=float))
     dc = np.asarray(cs) - np.asarray(ci)
@@ -801,7 +816,7 @@ def fit_diffusivity(
     s = _shape(shape)
     tv = np.atleast_1d(np.asarray(check_positive("t", t), dtype=float))
     fv = np.atleast_1d(np.asarray(check_nonnegative("fraction", fraction), dtype=float))
-    a = float(check_positive("size", size))
+    a = float(check_positive("size", scalar("size", size)))
     if tv.shape != fv.shape or tv.ndim != 1 or tv.size < 2:
         raise InputValueError("t and fraction must be 1-D arrays of equal length, at least two points")
     if (fv > 1.0 + 0.05).any():

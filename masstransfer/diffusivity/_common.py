@@ -5,7 +5,7 @@ from __future__ import annotations
 import difflib
 from collections.abc import Iterable
 
-from ..errors import UnknownMethodError
+from ..errors import InputTypeError, UnknownMethodError
 
 __all__ = ["normalise_method"]
 
@@ -14,8 +14,9 @@ def normalise_method(method: str, accepted: Iterable[str], argument: str = "meth
     """Map ``method`` to its canonical name (case, '_' and ' ' are ignored)."""
     names = list(accepted)
     if not isinstance(method, str):
-        raise UnknownMethodError(
-            f"{argument}={method!r} is not a method name; choose one of {', '.join(names)}"
+        raise InputTypeError(
+            f"{argument}={method!r} is a {type(method).__name__}, not a method name; "
+            f"choose one of {', '.join(names)}"
         )
     key = method.strip().lower().replace("_", "-").replace(" ", "-")
     if key in names:

@@ -23,7 +23,7 @@ import numpy as np
 
 from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_positive, check_shapes, finish, guard, warn_caller
+from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, scalar, warn_caller
 from ..constants import DEBYE
 from ..errors import EnvelopeWarning, InputValueError, MissingConstantError
 from ..substances._species import Species, species
@@ -411,8 +411,10 @@ def chapman_enskog(
     check_shapes(T=Tv, P=Pv)
     Ma = check_positive("M_a", M_a)
     Mb = check_positive("M_b", M_b)
-    s = check_positive("sigma_ab", sigma_ab)
-    e = check_positive("epsilon_ab_k", epsilon_ab_k)
+    s = check_positive("sigma_ab", scalar("sigma_ab", sigma_ab))
+    e = check_positive("epsilon_ab_k", scalar("epsilon_ab_k", epsilon_ab_k))
+    Ma = check_positive("M_a", scalar("M_a", Ma))
+    Mb = check_positive("M_b", scalar("M_b", Mb))
     _check_M("M_a", Ma)
     _check_M("M_b", Mb)
     _warn_pressure(Pv, "chapman_enskog")
@@ -589,8 +591,7 @@ def brokaw(
     for name, v in (("Vb_a", Vb_a), ("Vb_b", Vb_b), ("Tb_a", Tb_a), ("Tb_b", Tb_b)):
         check_positive(name, v)
     for name, v in (("dipole_a", dipole_a), ("dipole_b", dipole_b)):
-        if not (isinstance(v, int | float) and math.isfinite(v) and v >= 0):
-            raise InputValueError(f"{name}={v!r} must be a finite dipole moment >= 0 [C m]")
+        check_nonnegative(name, scalar(name, v), f"pass a finite dipole moment >= 0 [C m] for {name}")
     _check_M("M_a", Ma)
     _check_M("M_b", Mb)
     _warn_pressure(Pv, "brokaw")

@@ -17,6 +17,7 @@ from __future__ import annotations
 import dataclasses
 import functools
 import math
+import re
 from collections.abc import Mapping
 from dataclasses import dataclass, field
 from typing import Any
@@ -24,13 +25,14 @@ from typing import Any
 from .. import _tables as data
 from .._validation import guard
 from ..constants import DEBYE
-from ..errors import InputValueError, MissingConstantError, UnknownSpeciesError
+from ..errors import InputTypeError, InputValueError, MissingConstantError, UnknownSpeciesError
 from ._databases import quiet
 from ._structure import Molecule, parse_smiles
 
 __all__ = ["Species", "le_bas_volume", "species"]
 
 
+_CAS_PATTERN = re.compile(r"\d{2,7}-\d{2}-\d")
 _AIR_NAMES = frozenset({"air", "dry air"})
 
 _FLOAT_FIELDS = (
@@ -351,11 +353,19 @@ def species(identifier: str | Species) -> Species:
     if isinstance(identifier, Species):
         return identifier
     if not isinstance(identifier, str):
-        raise UnknownSpeciesError(
-            f"species={identifier!r} is neither a name, CAS number or formula string nor a "
-            "Species; pass a string such as 'toluene', or build masstransfer.Species(...)"
+        raise InputTypeError(
+            f"species={identifier!r} is a {type(identifier).__name__}, neither a name, CAS number or "
+            "formula string nor a Species; pass a string such as 'toluene' or build masstransfer.Species(...)"
         )
-    return _resolve(identifier.strip())
+    text = identifier.strip()
+    if not (any(ch.isalpha() for ch in text) or _CAS_PATTERN.fullmatch(text)):
+        # blank, punctuation or bare digits: the databases would match them to unrelated entries
+        raise UnknownSpeciesError(
+            f"species={identifier!r} is not a name, CAS number or formula; pass a name such as "
+            "'toluene' or a CAS number such as '108-88-3', or build it by hand: "
+            "masstransfer.Species(name=..., molar_mass=..., ...)"
+        )
+    return _resolve(text)
 
 
 @functools.lru_cache(maxsize=1024)

@@ -21,8 +21,8 @@ from typing import Any
 
 import numpy as np
 
-from .._validation import guard
-from ..errors import InputValueError, UnknownMethodError
+from .._validation import check_finite, guard
+from ..errors import InputTypeError, InputValueError, UnknownMethodError
 from ._catalogue import RECORDS, darcy_friction_smooth
 from ._record import Correlation
 
@@ -112,9 +112,13 @@ def correlation(slug: str) -> Correlation:
     2.0
 
     """
+    if not isinstance(slug, str):
+        raise InputTypeError(
+            f"slug={slug!r} is a {type(slug).__name__}; pass a record's slug such as 'duct-gnielinski'"
+        )
     try:
         return _BY_SLUG[slug]
-    except (KeyError, TypeError):
+    except KeyError:
         close = difflib.get_close_matches(str(slug), list(_BY_SLUG), n=5, cutoff=0.4)
         hint = f"; close matches: {', '.join(close)}" if close else ""
         raise UnknownMethodError(
@@ -160,13 +164,20 @@ def find_correlations(
     ['duct-gnielinski', 'duct-dittus-boelter']
 
     """
+    if geometry is not None and not isinstance(geometry, str):
+        raise InputTypeError(f"geometry={geometry!r} is a {type(geometry).__name__}; pass a geometry name")
+    if transport is not None and not isinstance(transport, str):
+        raise InputTypeError(
+            f"transport={transport!r} is a {type(transport).__name__}; pass 'heat' or 'mass'"
+        )
+    checked = {k: check_finite(k, v) for k, v in conditions.items()}
     if transport is None:
         transport = "mass" if "Sc" in conditions else "heat"
     if transport not in ("heat", "mass"):
         raise InputValueError(f"transport={transport!r} must be 'heat' or 'mass'")
     if "Sc" in conditions and "Pr" in conditions:
         raise InputValueError("pass Sc (mass transfer) or Pr (heat transfer), not both")
-    wanted = {("Pr" if k == "Sc" else k): np.asarray(v, dtype=float) for k, v in conditions.items()}
+    wanted = {("Pr" if k == "Sc" else k): np.asarray(v, dtype=float) for k, v in checked.items()}
     if geometry is not None and geometry not in geometries():
         close = difflib.get_close_matches(geometry, list(geometries()), n=3, cutoff=0.3)
         raise UnknownMethodError(
