@@ -83,7 +83,7 @@ def test_overflow_is_an_input_error_chained_and_named():
     with pytest.raises(mt.errors.InputValueError, match=r"not finite|overflow") as err:
         mt.surface.grashof_thermal(L=1e59, beta=1e50, dT=1.0, nu=1e-45)
     assert "L=1e+59 is the most extreme input" in str(err.value)
-    with pytest.raises(mt.errors.UnknownSpeciesError):
+    with pytest.raises(mt.errors.InputTypeError):
         mt.gas_diffusivity(42, "air", 300.0)  # type: ignore[arg-type]
 
 

@@ -486,10 +486,10 @@ def wilke_lee(
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
     check_shapes(T=Tv, P=Pv)
-    Ma = check_positive("M_a", M_a)
-    Mb = check_positive("M_b", M_b)
-    s = check_positive("sigma_ab", sigma_ab)
-    e = check_positive("epsilon_ab_k", epsilon_ab_k)
+    Ma = check_positive("M_a", scalar("M_a", M_a))
+    Mb = check_positive("M_b", scalar("M_b", M_b))
+    s = check_positive("sigma_ab", scalar("sigma_ab", sigma_ab))
+    e = check_positive("epsilon_ab_k", scalar("epsilon_ab_k", epsilon_ab_k))
     _check_M("M_a", Ma)
     _check_M("M_b", Mb)
     _warn_pressure(Pv, "wilke_lee")
@@ -586,10 +586,10 @@ def brokaw(
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
     check_shapes(T=Tv, P=Pv)
-    Ma = check_positive("M_a", M_a)
-    Mb = check_positive("M_b", M_b)
+    Ma = check_positive("M_a", scalar("M_a", M_a))
+    Mb = check_positive("M_b", scalar("M_b", M_b))
     for name, v in (("Vb_a", Vb_a), ("Vb_b", Vb_b), ("Tb_a", Tb_a), ("Tb_b", Tb_b)):
-        check_positive(name, v)
+        check_positive(name, scalar(name, v))
     for name, v in (("dipole_a", dipole_a), ("dipole_b", dipole_b)):
         check_nonnegative(name, scalar(name, v), f"pass a finite dipole moment >= 0 [C m] for {name}")
     _check_M("M_a", Ma)
@@ -853,7 +853,7 @@ def gas_diffusivity(
     0.361
 
     """
-    m = _METHOD_KEYS.get(method) or normalise_method(method, GAS_METHODS)
+    m = (_METHOD_KEYS.get(method) if type(method) is str else None) or normalise_method(method, GAS_METHODS)
     prepared = _prepare(m, solute, carrier)
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)

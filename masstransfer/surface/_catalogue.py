@@ -16,7 +16,7 @@ from typing import Any
 
 import numpy as np
 
-from .._validation import MAGNITUDE_LIMIT, check_positive, finish, guard, in_range
+from .._validation import check_positive, finish, guard, in_range
 from ._record import Correlation
 
 __all__ = ["RECORDS"]
@@ -233,9 +233,7 @@ def darcy_friction_smooth(Re: Any) -> Any:
 
     coef, lo, hi = _friction_fit()
     Re = _arr(check_positive("Re", Re, "pass a positive Reynolds number"))
-    in_range(
-        "Re", finish(Re), 1.0, MAGNITUDE_LIMIT, "the Colebrook equation needs Re >= 1 (a turbulent-flow form)"
-    )
+    in_range("Re", finish(Re), 5.0, 1e15, "the Colebrook (turbulent) form is solved for 5 <= Re <= 1e15")
     u = np.log(Re)
     x = (2 * u - (lo + hi)) / (hi - lo)
     inside = (u >= lo) & (u <= hi)
