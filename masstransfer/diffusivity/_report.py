@@ -5,9 +5,9 @@ from __future__ import annotations
 import warnings
 from collections.abc import Mapping
 from dataclasses import dataclass
-from types import MappingProxyType
 from typing import Literal
 
+from .._frozen import FrozenMapping, FrozenResult
 from .._typing import ArrayLike, FloatOrArray
 from .._validation import check_positive, guard
 from ..errors import InputValueError
@@ -26,8 +26,8 @@ _GAS_CONSTANTS = {
 }
 
 
-@dataclass(frozen=True)
-class DiffusivityReport:
+@dataclass(frozen=True, eq=False)
+class DiffusivityReport(FrozenResult):
     """A diffusivity and what it rests on.
 
     Attributes
@@ -203,7 +203,7 @@ def diffusivity_report(
         T=Tv,
         P=P_used,
         accuracy=accuracy,
-        constants=MappingProxyType({k: MappingProxyType(v) for k, v in consts.items()}),
+        constants=FrozenMapping(consts),
         notes=tuple(notes),
         warnings=tuple(str(w.message) for w in caught),
     )

@@ -20,6 +20,7 @@ from typing import Literal, overload
 
 import numpy as np
 
+from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import R_GAS
@@ -521,8 +522,8 @@ def psychrometric_ratio(h: ArrayLike, k_Y: ArrayLike, c_s: ArrayLike) -> FloatOr
 # --------------------------------------------------------------------------
 
 
-@dataclass(frozen=True)
-class TransferCoefficients:
+@dataclass(frozen=True, eq=False)
+class TransferCoefficients(FrozenResult):
     """Mass-transfer coefficients from a known h, with everything used to get them.
 
     Attributes

@@ -5,11 +5,11 @@ from __future__ import annotations
 import math
 from collections.abc import Callable, Mapping
 from dataclasses import dataclass, field
-from types import MappingProxyType
 from typing import Any, Literal
 
 import numpy as np
 
+from .._frozen import FrozenMapping, FrozenResult
 from .._typing import FloatOrArray
 from .._validation import MAGNITUDE_LIMIT, as_float, check_shapes, finish, guard, warn_caller
 from ..errors import EnvelopeError, EnvelopeWarning, InputValueError
@@ -26,8 +26,8 @@ _STRICTLY_POSITIVE = frozenset({"Pr", "mu_ratio", "Pr_ratio", "porosity", "L_ove
 _MASS_NAME = {"Pr": "Sc", "Nu": "Sh"}
 
 
-@dataclass(frozen=True)
-class CorrelationResult:
+@dataclass(frozen=True, eq=False)
+class CorrelationResult(FrozenResult):
     """A correlation's value with the metadata a design note needs.
 
     Attributes
@@ -125,9 +125,15 @@ class Correlation:
     domain: Mapping[str, tuple[float, float]] = field(default_factory=dict)
 
     def __post_init__(self) -> None:
-        object.__setattr__(self, "envelope", MappingProxyType(dict(self.envelope)))
-        object.__setattr__(self, "parameters", MappingProxyType(dict(self.parameters)))
-        object.__setattr__(self, "domain", MappingProxyType(dict(self.domain)))
+        object.__setattr__(self, "envelope", FrozenMapping(self.envelope))
+        object.__setattr__(self, "parameters", FrozenMapping(self.parameters))
+        object.__setattr__(self, "domain", FrozenMapping(self.domain))
+
+    def __reduce__(self) -> tuple[Any, ...]:
+        # A record is identified by its stable slug: it unpickles to the catalogue's own record.
+        from ._lookup import correlation
+
+        return (correlation, (self.slug,))
 
     # -- evaluation --------------------------------------------------------
 
@@ -211,7 +217,7 @@ class Correlation:
             value=value,
             quantity="Nu" if kind == "heat" else "Sh",
             slug=self.slug,
-            inputs=MappingProxyType(used),
+            inputs=FrozenMapping(used),
             analogy=analogy,
             warnings=tuple(messages),
             reference=self.reference,
