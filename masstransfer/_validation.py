@@ -56,8 +56,16 @@ def _describe(value: Any) -> str:
 
 def as_float(name: str, value: Any) -> FloatOrArray:
     """Return ``value`` as a float (for Python scalars) or a float64 array."""
-    if type(value) is float or type(value) is int:
-        return float(value)
+    if type(value) is float:
+        return value
+    if type(value) is int:
+        try:
+            return float(value)
+        except OverflowError:
+            raise InputValueError(
+                f"{name} is an integer of {value.bit_length()} bits, beyond double precision; "
+                f"pass a value within +-{MAGNITUDE_LIMIT:g} in SI units"
+            ) from None
     if isinstance(value, bool | str | bytes | complex) or value is None:
         raise InputTypeError(
             f"{name}={value!r} is a {type(value).__name__}, not a number; pass a float or an array of floats"
@@ -275,7 +283,9 @@ def warn_caller(message: str, category: type[Warning]) -> None:
         frame.f_lineno,
         module=frame.f_globals.get("__name__"),
         registry=registry,
-        module_globals=frame.f_globals,
+        # source lines come from the caller's module, except for code with no file behind it
+        # (python -c, a REPL, exec), whose loader cannot give any
+        module_globals=None if filename.startswith("<") else frame.f_globals,
     )
 
 

@@ -198,7 +198,7 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
     ("convert_flux", bodies.convert_flux, {"value": 1.0, "from_unit": "g(H2O)/(m2 day)"}),
     ("permeability", bodies.permeability, {"D": 1e-12, "S": 1e-4}),
     ("steady_flux", bodies.steady_flux, {"layers": [_PET], "p_high": 2e4}),
-    ("b_arrhenius", bodies.arrhenius, {"T": 310.0, "value_ref": 1.0, "T_ref": 298.0, "E": 4e4}),
+    ("arrhenius_ref", diffusivity.arrhenius_diffusivity, {"T": 310.0, "D0": 1.0, "Ea": -4e4, "T_ref": 298.0}),
     ("time_lag", bodies.time_lag, {"thickness": 5e-5, "D": 1e-12}),
     ("lag_to_D", bodies.diffusivity_from_time_lag, {"thickness": 5e-5, "lag": 400.0}),
     ("permeation_curve", bodies.permeation_curve, {"t": 1000.0, "thickness": 5e-5, "D": 1e-12}),
@@ -342,3 +342,43 @@ def test_adversarial_inputs(name, fn, valid, data):
         assert may_succeed, f"{name}({key}={value!r}) returned a result; expected {allowed}"
     else:
         assert isinstance(err, allowed), f"{name}({key}={value!r}) raised {type(err).__name__}: {err}"
+
+
+# --- physically signed results -------------------------------------------------------------
+# Functions whose result may take either sign by nature (fluxes driven by a difference, whose
+# direction follows the inputs); every other number-valued public function returns a positive
+# quantity (a diffusivity, a coefficient, a dimensionless group, a fraction of uptake, ...).
+_EITHER_SIGN = {"fick", "high_flux_rate", "equimolar", "stagnant", "profile"}
+
+
+def _valid_value(fn: Any, kwargs: dict[str, Any]) -> Any:
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore", mt.MassTransferWarning)
+        return fn(**kwargs)
+
+
+_POSITIVE = [
+    c
+    for c in CASES
+    if c[0] not in _EITHER_SIGN and isinstance(v := _valid_value(c[1], c[2]), float) and v > 0
+]
+
+
+@pytest.mark.parametrize(("name", "fn", "valid"), _POSITIVE, ids=[c[0] for c in _POSITIVE])
+@settings(max_examples=10, deadline=None, suppress_health_check=[HealthCheck.function_scoped_fixture])
+@given(data=st.data())
+def test_positive_quantities_stay_positive_and_finite(name, fn, valid, data):
+    # every positive number input scaled by 0.5-2: a positive, finite result or a library error
+    scaled = dict(valid)
+    for key, v in valid.items():
+        if type(v) is float and v > 0:
+            scaled[key] = v * data.draw(st.floats(0.5, 2.0), label=key)
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore", mt.MassTransferWarning)
+        warnings.simplefilter("error", RuntimeWarning)
+        try:
+            out = fn(**scaled)
+        except mt.MassTransferError:
+            return
+    assert np.isfinite(out)
+    assert out > 0, f"{name}({scaled}) = {out!r}: the quantity must be positive"

@@ -36,9 +36,9 @@ from numpy.polynomial import chebyshev as _cheb
 
 from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_positive, check_shapes, finish, guard
+from .._validation import check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import DEBYE, R_GAS
-from ..errors import MissingConstantError, OutOfRangeError
+from ..errors import EnvelopeWarning, MissingConstantError, OutOfRangeError
 from ._databases import quiet
 from ._species import Species, species
 
@@ -648,7 +648,28 @@ def henry_constant(solute: str | Species, solvent: str | Species, T: ArrayLike) 
     Tv = check_positive("T", T)
     A, B, C, D, E, F = _henry_coefficients(a, b)
     Ta = np.asarray(Tv, dtype=float)
+    lo = b.Tm if b.Tm is not None else 0.0
+    hi = b.Tc if b.Tc is not None else math.inf
+    if Ta.size and (Ta.min() < lo or Ta.max() > hi):
+        raise OutOfRangeError(
+            f"T from {Ta.min():.6g} to {Ta.max():.6g} K leaves the liquid range of the solvent "
+            f"{b.name!r} ({lo:.2f} K melting point to {hi:.2f} K critical point); no Henry's-law "
+            "constant exists there"
+        )
+    if Ta.size and (Ta.min() < _HENRY_T_RANGE[0] or Ta.max() > _HENRY_T_RANGE[1]):
+        warn_caller(
+            f"henry_constant: T from {Ta.min():.6g} to {Ta.max():.6g} K is outside "
+            f"{_HENRY_T_RANGE[0]:g}-{_HENRY_T_RANGE[1]:g} K, where the compiled temperature "
+            "dependences (fitted near 298.15 K) are extrapolated; prefer measured solubilities",
+            EnvelopeWarning,
+        )
     return finish(np.exp(A + (B + E / Ta) / Ta + C * np.log(Ta) + Ta * (D + F * Ta)))
+
+
+#: Temperatures over which the compiled Henry's-law temperature dependences are used without a
+#: warning: the compilations fit van 't Hoff forms to data mostly between the ice point and the
+#: normal boiling point of water (Sander 2015, sec. 2.4).
+_HENRY_T_RANGE = (273.15, 373.15)
 
 
 @functools.lru_cache(maxsize=256)

@@ -69,7 +69,8 @@ def wet_surface_temperature(
     OutOfRangeError
         If the surface temperature falls outside the liquid range of the
         property models (for example below the freezing point), or if the
-        gas is already saturated above T.
+        gas is supersaturated at T (its vapour would condense).  A gas
+        exactly at saturation gives T itself.
 
     Notes
     -----
@@ -134,7 +135,16 @@ def wet_surface_temperature(
     hi = np.minimum(Tb, hi_liq)
     lo = np.full_like(Tb, lo_liq)
     f_hi = residual(hi)
-    saturated = f_hi >= 0  # bulk at or above saturation at T: no evaporation
+    saturated = f_hi >= 0  # bulk at saturation at T: no evaporation, the surface is at T
+    y_sat = np.minimum(np.asarray(lq.vapor_pressure(np.clip(Tb, lo_liq, hi_liq))) / Pb, 1.0)
+    supersaturated = saturated & (Tb <= hi_liq) & (yb > y_sat * (1 + 1e-6))
+    if supersaturated.any():
+        i = int(np.argmax(supersaturated))
+        raise OutOfRangeError(
+            f"the gas is supersaturated: y_bulk={yb.flat[i]:.4g} exceeds the saturation mole "
+            f"fraction {y_sat.flat[i]:.4g} of {a.name!r} at T={Tb.flat[i]:.2f} K and P={Pb.flat[i]:.6g} Pa; "
+            "vapour would condense (fog or dew) rather than evaporate: check y_bulk, T and P"
+        )
     if (saturated & (hi < Tb)).any():
         raise OutOfRangeError("the wet surface would be hotter than the liquid's modelled range")
     f_lo = residual(lo)
