@@ -14,7 +14,7 @@ import os
 import sys
 import warnings
 from collections.abc import Sequence
-from typing import Any
+from typing import Any, NoReturn
 
 import numpy as np
 
@@ -23,8 +23,23 @@ from .errors import MassTransferError
 __all__ = ["main"]
 
 
+class _UsageError(Exception):
+    """A command-line usage mistake (unknown option, missing argument), raised by the parser."""
+
+    def __init__(self, parser: argparse.ArgumentParser, message: str) -> None:
+        super().__init__(message)
+        self.parser = parser
+
+
+class _Parser(argparse.ArgumentParser):
+    """An argument parser that raises usage errors instead of exiting, so --json can report them."""
+
+    def error(self, message: str) -> NoReturn:
+        raise _UsageError(self, message)
+
+
 def _parser() -> argparse.ArgumentParser:
-    p = argparse.ArgumentParser(
+    p = _Parser(
         prog="masstransfer",
         description="Diffusivities, mass-transfer coefficients and correlations for process engineering.",
     )
@@ -320,7 +335,17 @@ def main(argv: Sequence[str] | None = None) -> int:
     True
 
     """
-    args = _parser().parse_args(argv)
+    argv = list(sys.argv[1:] if argv is None else argv)
+    try:
+        args = _parser().parse_args(argv)
+    except _UsageError as exc:
+        if "--json" in argv:
+            payload = {"error": {"type": "UsageError", "message": str(exc)}}
+            _emit(json.dumps(payload, indent=2), [])
+        else:
+            exc.parser.print_usage(sys.stderr)
+            print(f"{exc.parser.prog}: error: {exc}", file=sys.stderr)
+        return 2
     as_json = bool(getattr(args, "json", False))
     handlers = {
         "diffusivity": _diffusivity,
