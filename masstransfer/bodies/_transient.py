@@ -23,6 +23,7 @@ from typing import Any, Final, overload
 import numpy as np
 from scipy import special
 
+from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import (
     check_finite,
@@ -804,8 +805,8 @@ def _half_T(shape: str) -> float:
     return float(brentq(lambda T: float(fractional_uptake(shape, T, 1.0, 1.0)) - 0.5, 1e-4, 1.0, xtol=1e-14))
 
 
-@dataclass(frozen=True)
-class DiffusivityFit:
+@dataclass(frozen=True, eq=False)
+class DiffusivityFit(FrozenResult):
     """Result of :func:`fit_diffusivity`.
 
     Attributes
