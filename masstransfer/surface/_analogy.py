@@ -16,7 +16,7 @@ from __future__ import annotations
 import math
 import warnings
 from dataclasses import dataclass
-from typing import Literal, overload
+from typing import Any, Literal, overload
 
 import numpy as np
 
@@ -42,6 +42,22 @@ __all__ = [
 ]
 
 _TWO_THIRDS = 2.0 / 3.0
+
+
+def _require_positive_denominator(
+    analogy: str, den: np.ndarray[Any, np.dtype[np.float64]], a: dict[str, FloatOrArray]
+) -> None:
+    """Refuse inputs for which an analogy's denominator is not positive (a negative Stanton number)."""
+    bad = den <= 0.0
+    if not bad.any():
+        return
+    f = float(np.broadcast_to(a["f_darcy"], den.shape)[bad].ravel()[0])
+    p = float(np.broadcast_to(a["Pr"], den.shape)[bad].ravel()[0])
+    raise InputValueError(
+        f"f_darcy={f!r} with Pr={p!r} makes the denominator of the {analogy} analogy zero or negative "
+        "(a negative Stanton number): the analogy holds for turbulent-flow friction factors (f_darcy "
+        "below about 0.1) and Pr (Sc) near 1; pass f_darcy and Pr in that range"
+    )
 
 
 def _checked(**kw: ArrayLike) -> dict[str, FloatOrArray]:
@@ -393,7 +409,9 @@ def stanton_prandtl_taylor(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     """
     a = _checked(f_darcy=f_darcy, Pr=Pr)
     g = np.asarray(a["f_darcy"]) / 8.0
-    return finish(g / (1.0 + 5.0 * np.sqrt(g) * (np.asarray(a["Pr"]) - 1.0)))
+    den = 1.0 + 5.0 * np.sqrt(g) * (np.asarray(a["Pr"]) - 1.0)
+    _require_positive_denominator("Prandtl-Taylor", den, a)
+    return finish(g / den)
 
 
 @guard
@@ -437,8 +455,11 @@ def stanton_von_karman(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     g = np.asarray(a["f_darcy"]) / 8.0
     P = np.asarray(a["Pr"])
     if (1.0 + 5.0 / 6.0 * (P - 1.0) <= 0).any():
-        raise InputValueError("Pr must exceed 0.2 for the von Karman analogy; pass Pr > 0.2")
-    return finish(g / (1.0 + 5.0 * np.sqrt(g) * (P - 1.0 + np.log(1.0 + 5.0 / 6.0 * (P - 1.0)))))
+        bad = float(P[P <= 0.2].ravel()[0])
+        raise InputValueError(f"Pr={bad!r} must exceed 0.2 for the von Karman analogy; pass Pr > 0.2")
+    den = 1.0 + 5.0 * np.sqrt(g) * (P - 1.0 + np.log(1.0 + 5.0 / 6.0 * (P - 1.0)))
+    _require_positive_denominator("von Karman", den, a)
+    return finish(g / den)
 
 
 @guard

@@ -29,6 +29,7 @@ import numpy as np
 from ..errors import MissingDependencyError
 
 try:
+    from hypothesis import assume
     from hypothesis import strategies as st
     from hypothesis.extra import numpy as hnp
 except ImportError as exc:  # pragma: no cover - exercised by a test that hides hypothesis
@@ -297,6 +298,8 @@ def correlation_inputs(
             if default is None:
                 lo, hi = bounds(key)
                 out[key] = draw(_floats(lo, min(hi, 1e6), log=lo > 0))
+        # conditions on products of inputs and branch envelopes (e.g. Re Pr >= 100)
+        assume(not rec.outside("mass" if mass else "heat", **out))
         return out
 
     return draw_inputs()

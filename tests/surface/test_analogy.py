@@ -123,3 +123,40 @@ def test_zero_h_gives_zero_k():
     assert math.isfinite(
         mt.surface.mass_transfer_coefficient_from_heat(1e-300, rho=1.0, cp=1e3, Pr=0.7, Sc=0.6)
     )
+
+
+# --- declared domains of the friction analogies (no negative Stanton number) -------------------
+
+
+@pytest.mark.parametrize("fn", [an.stanton_von_karman, an.stanton_prandtl_taylor])
+@given(f=st.floats(1e-4, 10.0), Pr=st.floats(1e-3, 1e4))
+def test_friction_analogies_are_positive_or_refuse(fn, f, Pr):
+    # over the whole positive quadrant: a positive, finite Stanton number, or an error naming the inputs
+    g = f / 8
+    den = 1 + 5 * g**0.5 * (Pr - 1 + (math.log(1 + 5 / 6 * (Pr - 1)) if fn is an.stanton_von_karman else 0.0))
+    if abs(den) < 1e-9:
+        return  # at the sign change itself rounding decides
+    if den < 0:  # the equation's own sign change (written out from the docstring's formula)
+        with pytest.raises(mt.errors.InputValueError, match=r"f_darcy=.* with Pr="):
+            fn(f, Pr)
+        return
+    St = fn(f, Pr)
+    assert math.isfinite(St)
+    assert St > 0.0
+
+
+@pytest.mark.parametrize("fn", [an.stanton_von_karman, an.stanton_prandtl_taylor])
+@given(f=st.floats(0.005, 0.1), Pr=st.floats(0.5, 1e3))
+def test_friction_analogies_hold_over_turbulent_friction_factors(fn, f, Pr):
+    # turbulent pipe flow (Moody chart: f_darcy from about 0.008 to 0.1, common practice), Pr >= 0.5
+    St = fn(f, Pr)
+    assert math.isfinite(St)
+    assert St > 0.0
+
+
+def test_friction_analogies_refuse_the_reported_sign_changes():
+    # von Karman at f_darcy = 1 and Prandtl-Taylor at a large f with small Pr went negative
+    with pytest.raises(mt.errors.InputValueError, match=r"f_darcy=1\.0 with Pr=0\.7"):
+        an.stanton_von_karman(1.0, 0.7)
+    with pytest.raises(mt.errors.InputValueError, match=r"f_darcy=0\.5 with Pr=0\.01"):
+        an.stanton_prandtl_taylor(np.array([0.02, 0.5]), 0.01)
