@@ -16,7 +16,7 @@ from __future__ import annotations
 import math
 import warnings
 from dataclasses import dataclass
-from typing import Literal, overload
+from typing import Any, Literal, overload
 
 import numpy as np
 
@@ -24,7 +24,7 @@ from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import R_GAS
-from ..errors import InputValueError
+from ..errors import EnvelopeWarning, InputValueError
 from ..substances._species import Species, species
 
 __all__ = [
@@ -43,6 +43,45 @@ __all__ = [
 ]
 
 _TWO_THIRDS = 2.0 / 3.0
+
+#: The ranges over which j_H = f/2 and j_D = f/2 were established, the usual statement of the
+#: Chilton-Colburn analogy's validity (Incropera & DeWitt 6th ed., Eqs. (6.70)-(6.71), from memory).
+_COLBURN_RANGES = (("Pr", 0.6, 60.0), ("Sc", 0.6, 3000.0))
+
+
+def _colburn_envelope(Pr: FloatOrArray, Sc: FloatOrArray) -> None:
+    """Warn where Pr or Sc leaves the range over which the analogy was established."""
+    for (name, lo, hi), v in zip(_COLBURN_RANGES, (Pr, Sc), strict=True):
+        if isinstance(v, float):
+            vmin = vmax = v
+        elif v.size:
+            vmin, vmax = float(v.min()), float(v.max())
+        else:
+            continue
+        if vmin < lo or vmax > hi:
+            bad = vmin if vmin < lo else vmax
+            warn_caller(
+                f"Chilton-Colburn analogy: {name}={bad!r} is outside {lo:g} to {hi:g}, the range over "
+                "which j_H = j_D was established (Incropera & DeWitt 6th ed., Eqs. 6.70-6.71); the "
+                "result is an extrapolation",
+                EnvelopeWarning,
+            )
+
+
+def _require_positive_denominator(
+    analogy: str, den: np.ndarray[Any, np.dtype[np.float64]], a: dict[str, FloatOrArray]
+) -> None:
+    """Refuse inputs for which an analogy's denominator is not positive (a negative Stanton number)."""
+    bad = den <= 0.0
+    if not bad.any():
+        return
+    f = float(np.broadcast_to(a["f_darcy"], den.shape)[bad].ravel()[0])
+    p = float(np.broadcast_to(a["Pr"], den.shape)[bad].ravel()[0])
+    raise InputValueError(
+        f"f_darcy={f!r} with Pr={p!r} makes the denominator of the {analogy} analogy zero or negative "
+        "(a negative Stanton number): the analogy holds for turbulent-flow friction factors (f_darcy "
+        "below about 0.1) and Pr (Sc) near 1; pass f_darcy and Pr in that range"
+    )
 
 
 def _checked(**kw: ArrayLike) -> dict[str, FloatOrArray]:
@@ -105,8 +144,11 @@ def mass_transfer_coefficient_from_heat(
     -----
     Holds for geometries and flows where heat and mass transfer follow the
     same correlation with the same boundary conditions, at low mass-transfer
-    rates, for 0.6 < Pr, Sc < 2500 and without form drag dominating (Chilton
-    & Colburn 1934; Incropera & DeWitt Section 6.7.2).  The result is an
+    rates, for 0.6 < Pr < 60 and 0.6 < Sc < 3000 (the ranges over which
+    :math:`j_H = f/2` and :math:`j_D = f/2` were established, Incropera &
+    DeWitt Eqs. (6.70)-(6.71)), and without form drag dominating (Chilton &
+    Colburn 1934).  Outside those ranges it warns with
+    :class:`~masstransfer.errors.EnvelopeWarning`.  The result is an
     estimate of the same quality as the h it starts from.
 
     References
@@ -128,6 +170,7 @@ def mass_transfer_coefficient_from_heat(
     a = _checked(rho=rho, cp=cp, Pr=Pr, Sc=Sc)
     n = check_positive("exponent", exponent)
     check_shapes(h=hv, **a)
+    _colburn_envelope(a["Pr"], a["Sc"])
     # the property factor first, so an array of h costs one multiplication
     return finish(hv * ((a["Pr"] / a["Sc"]) ** n / (a["rho"] * a["cp"])))
 
@@ -198,6 +241,7 @@ def heat_transfer_coefficient_from_mass(
     a = _checked(rho=rho, cp=cp, Pr=Pr, Sc=Sc)
     n = check_positive("exponent", exponent)
     check_shapes(k_c=kv, **a)
+    _colburn_envelope(a["Pr"], a["Sc"])
     return finish(kv * (a["rho"] * a["cp"] * (a["Sc"] / a["Pr"]) ** n))
 
 
@@ -394,7 +438,9 @@ def stanton_prandtl_taylor(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     """
     a = _checked(f_darcy=f_darcy, Pr=Pr)
     g = np.asarray(a["f_darcy"]) / 8.0
-    return finish(g / (1.0 + 5.0 * np.sqrt(g) * (np.asarray(a["Pr"]) - 1.0)))
+    den = 1.0 + 5.0 * np.sqrt(g) * (np.asarray(a["Pr"]) - 1.0)
+    _require_positive_denominator("Prandtl-Taylor", den, a)
+    return finish(g / den)
 
 
 @guard
@@ -438,8 +484,11 @@ def stanton_von_karman(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     g = np.asarray(a["f_darcy"]) / 8.0
     P = np.asarray(a["Pr"])
     if (1.0 + 5.0 / 6.0 * (P - 1.0) <= 0).any():
-        raise InputValueError("Pr must exceed 0.2 for the von Karman analogy; pass Pr > 0.2")
-    return finish(g / (1.0 + 5.0 * np.sqrt(g) * (P - 1.0 + np.log(1.0 + 5.0 / 6.0 * (P - 1.0)))))
+        bad = float(P[P <= 0.2].ravel()[0])
+        raise InputValueError(f"Pr={bad!r} must exceed 0.2 for the von Karman analogy; pass Pr > 0.2")
+    den = 1.0 + 5.0 * np.sqrt(g) * (P - 1.0 + np.log(1.0 + 5.0 / 6.0 * (P - 1.0)))
+    _require_positive_denominator("von Karman", den, a)
+    return finish(g / den)
 
 
 @guard
