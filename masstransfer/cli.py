@@ -18,6 +18,7 @@ from typing import Any, NoReturn
 
 import numpy as np
 
+from . import _cli_column
 from .errors import MassTransferError
 
 __all__ = ["main"]
@@ -93,6 +94,7 @@ def _parser() -> argparse.ArgumentParser:
     w.add_argument("--rh", type=float, required=True, help="relative humidity as a fraction (0-1)")
     w.add_argument("-P", "--pressure", type=float, default=101325.0, metavar="PA", help="pressure in Pa")
     w.add_argument("--json", action="store_true", help="print JSON instead of a table")
+    _cli_column.register(sub)
     return p
 
 
@@ -352,6 +354,7 @@ def main(argv: Sequence[str] | None = None) -> int:
         "coefficient": _coefficient,
         "correlations": _correlations,
         "wet-bulb": _wet_bulb,
+        "column": _cli_column.run,
     }
     # one process, one thread: recording every warning here is safe, and keeps `-W error`
     # (or any user filter) from turning a library caution into a traceback
