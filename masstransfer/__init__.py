@@ -8,12 +8,14 @@ else lives in one subpackage each, with one public path per function:
 ``diffusivity``  numbers-in gas, liquid, porous and solid methods (``fuller``, ``wilke_chang``, ...)
 ``surface``      dimensionless groups, the correlation catalogue, analogies, conventions, fluxes
 ``bodies``       transient uptake and release, barriers, permeability units
+``humidity``     psychrometrics for any vapour-gas pair, evaporation in one call, drying, towers
 ``testing``      hypothesis strategies and invariant checks for downstream tests
 ``constants``    the physical constants the library uses
 ``errors``       the whole error and warning family
 
 SI units throughout.  The property databases of ``chemicals`` and ``thermo`` are loaded on first
-use, not on import; ``bodies`` (scipy) and ``testing`` (hypothesis) are imported on first use.
+use, not on import; ``bodies`` (scipy), ``humidity`` (scipy, through ``bodies``) and ``testing``
+(hypothesis) are imported on first use.
 """
 
 from __future__ import annotations
@@ -33,13 +35,13 @@ from .surface._analogy import TransferCoefficients, mass_transfer_from_heat
 from .surface._wet_surface import wet_bulb_temperature, wet_surface_temperature
 
 if TYPE_CHECKING:
-    from . import bodies, testing
+    from . import bodies, humidity, testing
 
-_LAZY = frozenset({"bodies", "testing"})
+_LAZY = frozenset({"bodies", "humidity", "testing"})
 
 
 def __getattr__(name: str) -> object:
-    """Import ``bodies`` (scipy) and ``testing`` (hypothesis) on first use."""
+    """Import ``bodies`` (scipy), ``humidity`` and ``testing`` (hypothesis) on first use."""
     if name in _LAZY:
         return importlib.import_module(f".{name}", __name__)
     raise AttributeError(f"module {__name__!r} has no attribute {name!r}")
@@ -65,6 +67,7 @@ __all__ = [
     "errors",
     "gas_diffusivity",
     "gas_model",
+    "humidity",
     "liquid_diffusivity",
     "liquid_model",
     "mass_transfer_from_heat",

@@ -10,6 +10,7 @@ import sys
 import masstransfer as mt
 
 SUBPACKAGES = ("substances", "diffusivity", "surface", "bodies", "testing", "constants", "errors")
+SUBPACKAGES += ("humidity",)
 
 
 def _public_paths() -> dict[int, list[str]]:
