@@ -18,6 +18,7 @@ from typing import Any
 
 import numpy as np
 
+from . import _cli_humidity
 from .errors import MassTransferError
 
 __all__ = ["main"]
@@ -78,6 +79,7 @@ def _parser() -> argparse.ArgumentParser:
     w.add_argument("--rh", type=float, required=True, help="relative humidity as a fraction (0-1)")
     w.add_argument("-P", "--pressure", type=float, default=101325.0, metavar="PA", help="pressure in Pa")
     w.add_argument("--json", action="store_true", help="print JSON instead of a table")
+    _cli_humidity.register(sub)
     return p
 
 
@@ -327,6 +329,7 @@ def main(argv: Sequence[str] | None = None) -> int:
         "coefficient": _coefficient,
         "correlations": _correlations,
         "wet-bulb": _wet_bulb,
+        "evaporate": _cli_humidity.run,
     }
     # one process, one thread: recording every warning here is safe, and keeps `-W error`
     # (or any user filter) from turning a library caution into a traceback
