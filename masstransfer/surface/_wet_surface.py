@@ -16,6 +16,7 @@ temperature (T + T_s)/2; vapour pressure and latent heat at T_s.
 
 from __future__ import annotations
 
+import functools
 import math
 from collections.abc import Callable, Mapping
 from typing import Any, overload
@@ -32,6 +33,8 @@ from ._medium import GasSide, LiquidSide, Override, gas_side, liquid_side
 __all__ = ["solve_surface_temperature", "wet_bulb_temperature", "wet_surface_temperature"]
 
 _ITERATIONS = 48  # bisection halvings: a 300 K bracket resolved to about 1e-12 K
+_FILM_PASSES = 8  # film-property updates; two or three reach the tolerance
+_TOLERANCE = 1e-10  # K, on the surface temperature (arrays and scalars agree to it)
 
 
 #: A function of the film temperature's properties giving (h [W/(m^2 K)], F [mol/(m^2 s)]).
@@ -49,7 +52,7 @@ def solve_surface_temperature(
     transfer: Transfer | None = None,
     extra_heat: Callable[[FloatArray], FloatArray] | None = None,
 ) -> FloatArray:
-    """Solve the wet-surface energy balance for T_s, every element at once (bisection).
+    """Solve the wet-surface energy balance for T_s, every element at once.
 
     .. math:: h^\\bullet (T - T_s) + q_{extra}(T_s) = N_A M_A \\lambda(T_s)
 
@@ -69,7 +72,8 @@ def solve_surface_temperature(
     def clip(Ts: FloatArray) -> FloatArray:
         return np.clip(Ts, lo_liq, hi_liq) if lo_liq > 0 or math.isfinite(hi_liq) else Ts
 
-    def residual(Ts: FloatArray) -> FloatArray:
+    def film(Ts: FloatArray) -> tuple[Any, Any, FloatArray]:
+        """h, F and the vapour's molar heat capacity at the film temperature of ``Ts``."""
         Tf = 0.5 * (Tb + Ts)
         rho = gas.density(Tf, Pb)
         cp = gas.heat_capacity(Tf)
@@ -79,12 +83,16 @@ def solve_surface_temperature(
             Le = k / (rho * cp * D)
             # F/h = k_c c / h with k_c/h = 1/(rho cp Le^n) and c = P/(R Tf)
             h: Any = 1.0
-            F = Pb / (R_GAS * Tf) / (rho * cp * Le**n)
+            F: Any = Pb / (R_GAS * Tf) / (rho * cp * Le**n)
         else:
             h, F = transfer(Tf, Pb, rho, cp, gas.thermal_conductivity(Tf), D)
+        return h, F, liq.vapour_heat_capacity(Tf) * M
+
+    def residual(Ts: FloatArray, props: tuple[Any, Any, FloatArray]) -> FloatArray:
+        h, F, cpv = props
         ys = np.minimum(liq.vapour_pressure(clip(Ts)) / Pb, 0.999999)
         N = F * np.log((1.0 - yb) / (1.0 - ys))
-        phi = N * liq.vapour_heat_capacity(Tf) * M / h
+        phi = N * cpv / h
         small = np.abs(phi) < 1e-9
         ack = np.where(small, 1.0 - phi / 2, phi / np.expm1(np.where(small, 1.0, phi)))
         q = ack * h * (Tb - Ts) - N * M * liq.latent_heat(clip(Ts))
@@ -99,7 +107,8 @@ def solve_surface_temperature(
         hi = _boiling_point(
             liq, Pb, lo, np.full_like(Tb, hi_liq if math.isfinite(hi_liq) else 2.0 * Tb.max())
         )
-    f_hi = residual(hi)
+    props = film(Tb)  # first pass: film properties at the bulk temperature
+    f_hi = residual(hi, props)
     saturated = f_hi >= 0  # bulk at or above saturation at T: no evaporation
     if extra_heat is not None and saturated.any():
         raise OutOfRangeError(
@@ -108,19 +117,64 @@ def solve_surface_temperature(
         )
     if (saturated & (hi < Tb)).any():
         raise OutOfRangeError("the wet surface would be hotter than the liquid's modelled range")
-    f_lo = residual(lo)
+    f_lo = residual(lo, props)
     if ((f_lo < 0) & ~saturated).any():
         raise OutOfRangeError(
             f"the surface temperature lies below {float(np.min(lo)):.2f} K, the lower end of the liquid "
             f"models of {liq.species.name!r} (it would freeze); no liquid wet-surface temperature exists"
         )
+    hi = np.where(saturated, lo, hi)  # nothing to solve there
+    # The film properties change slowly with T_s: solve with them frozen, update, repeat; each
+    # pass searches a narrow bracket around the last answer (widened where it misses the root).
+    Ts = _illinois(functools.partial(residual, props=props), lo, hi, 1e-4)
+    width = np.full_like(Ts, 1.0)
+    for _ in range(_FILM_PASSES):
+        props = film(np.where(saturated, Tb, Ts))
+        a = np.maximum(Ts - width, lo)
+        b = np.minimum(Ts + width, hi)
+        fa = residual(a, props)
+        fb = residual(b, props)
+        miss = (fa < 0) | (fb > 0)
+        a, b = np.where(miss, lo, a), np.where(miss, hi, b)
+        Ts_new = _illinois(functools.partial(residual, props=props), a, b, _TOLERANCE)
+        change = np.abs(Ts_new - Ts)
+        Ts = Ts_new
+        if float(np.max(change, initial=0.0)) < _TOLERANCE:
+            break
+        width = np.maximum(10.0 * change, 1e-6)
+    return np.asarray(np.where(saturated, Tb, Ts))
+
+
+def _illinois(
+    f: Callable[[FloatArray], FloatArray], lo: FloatArray, hi: FloatArray, tolerance: float
+) -> FloatArray:
+    """Root of a decreasing f in [lo, hi] (f(lo) >= 0 >= f(hi)), elementwise: the Illinois method.
+
+    Regula falsi with the retained end's value halved when one end is kept twice: every step
+    stays inside the bracket (so it cannot diverge) and converges superlinearly.
+    """
+    a, b = np.array(lo, dtype=float), np.array(hi, dtype=float)
+    fa, fb = f(a), f(b)
+    side = np.zeros(a.shape, dtype=np.int8)
+    c = 0.5 * (a + b)
     for _ in range(_ITERATIONS):
-        mid = 0.5 * (lo + hi)
-        f_mid = residual(mid)
-        up = f_mid > 0
-        lo = np.where(up, mid, lo)
-        hi = np.where(up, hi, mid)
-    return np.asarray(np.where(saturated, Tb, 0.5 * (lo + hi)))
+        span = fa - fb
+        ok = (span > 0) & (b > a)
+        c_new = np.clip(np.where(ok, (a * fb - b * fa) / np.where(ok, -span, -1.0), 0.5 * (a + b)), a, b)
+        step = float(np.max(np.abs(c_new - c), initial=0.0))
+        c = c_new
+        if not ok.any() or step < 0.1 * tolerance or float(np.max(b - a, initial=0.0)) < tolerance:
+            break
+        fc = f(c)
+        pos = fc > 0  # c replaces the low end
+        fb = np.where(pos & (side == 1), 0.5 * fb, fb)
+        fa = np.where(~pos & (side == -1), 0.5 * fa, fa)
+        a, fa = np.where(pos, c, a), np.where(pos, fc, fa)
+        b, fb = np.where(pos, b, c), np.where(pos, fb, fc)
+        side = np.where(pos, 1, -1).astype(np.int8)
+        exact = fc == 0
+        a, b = np.where(exact, c, a), np.where(exact, c, b)
+    return np.asarray(c)
 
 
 def _boiling_point(liq: LiquidSide, P: FloatArray, lo: FloatArray, hi: FloatArray) -> FloatArray:
