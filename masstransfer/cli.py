@@ -18,7 +18,7 @@ from typing import Any, NoReturn
 
 import numpy as np
 
-from . import _cli_column
+from . import _cli_column, _cli_humidity
 from .errors import MassTransferError
 
 __all__ = ["main"]
@@ -95,6 +95,7 @@ def _parser() -> argparse.ArgumentParser:
     w.add_argument("-P", "--pressure", type=float, default=101325.0, metavar="PA", help="pressure in Pa")
     w.add_argument("--json", action="store_true", help="print JSON instead of a table")
     _cli_column.register(sub)
+    _cli_humidity.register(sub)
     return p
 
 
@@ -355,6 +356,7 @@ def main(argv: Sequence[str] | None = None) -> int:
         "correlations": _correlations,
         "wet-bulb": _wet_bulb,
         "column": _cli_column.run,
+        "evaporate": _cli_humidity.run,
     }
     # one process, one thread: recording every warning here is safe, and keeps `-W error`
     # (or any user filter) from turning a library caution into a traceback

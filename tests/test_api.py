@@ -15,6 +15,7 @@ SUBPACKAGES = (
     "surface",
     "bodies",
     "contactors",
+    "humidity",
     "testing",
     "constants",
     "errors",

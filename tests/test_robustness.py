@@ -20,7 +20,7 @@ from hypothesis import HealthCheck, given, settings
 from hypothesis import strategies as st
 
 import masstransfer as mt
-from masstransfer import bodies, contactors, diffusivity, substances, surface
+from masstransfer import bodies, contactors, diffusivity, humidity, substances, surface
 
 _PET = bodies.Layer(12e-6, permeability=1e-17)
 _REC = surface.correlation("sphere-ranz-marshall")
@@ -446,6 +446,87 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
         "column_rating",
         contactors.column_profile,
         {"y_in": 0.02, "x_in": 0.0, "G": 20.0, "L": 36.0, "Kya": 40.0, "equilibrium": 1.2, "height": 3.0},
+    ),
+    # humidity: psychrometrics, evaporation, drying, towers
+    (
+        "humid_gas_state",
+        humidity.humid_gas_state,
+        {"liquid": "water", "gas": "air", "T": 303.15, "relative_humidity": 0.5},
+    ),
+    (
+        "humid_gas_state_dew",
+        humidity.humid_gas_state,
+        {"liquid": "toluene", "gas": "nitrogen", "T": 330.0, "dew_point": 290.0},
+    ),
+    ("Y_from_y", humidity.humidity_ratio_from_y, {"y": 0.02, "M_vapour": 0.018, "M_gas": 0.029}),
+    ("y_from_Y", humidity.y_from_humidity_ratio, {"humidity_ratio": 0.01, "M_vapour": 0.018, "M_gas": 0.029}),
+    (
+        "evaporation_rate",
+        humidity.evaporation_rate,
+        {"liquid": "water", "gas": "air", "T": 333.15, "h": 28.0, "humidity_ratio": 0.005},
+    ),
+    (
+        "evaporation_radiant",
+        humidity.evaporation_rate,
+        {
+            "liquid": "ethanol",
+            "gas": "nitrogen",
+            "T": 320.0,
+            "h": 20.0,
+            "y": 0.01,
+            "radiant_temperature": 340.0,
+            "conduction_coefficient": 5.0,
+        },
+    ),
+    (
+        "evaporation_correlation",
+        humidity.evaporation_rate,
+        {
+            "liquid": "water",
+            "gas": "air",
+            "T": 340.0,
+            "relative_humidity": 0.1,
+            "correlation": "flat-plate-laminar-average",
+            "velocity": 3.0,
+            "L": 0.5,
+        },
+    ),
+    (
+        "drying_time",
+        humidity.drying_time,
+        {
+            "mass_flux": 1e-4,
+            "shape": "slab",
+            "size": 0.01,
+            "dry_density": 1400.0,
+            "D": 1e-9,
+            "X_initial": 0.4,
+            "X_critical": 0.2,
+            "X_final": 0.05,
+        },
+    ),
+    (
+        "merkel_ntu",
+        humidity.merkel_ntu,
+        {
+            "T_liquid_in": 313.15,
+            "T_liquid_out": 298.15,
+            "L_over_G": 0.8,
+            "T_gas": 298.15,
+            "relative_humidity": 0.4,
+        },
+    ),
+    (
+        "counterflow_tower",
+        humidity.counterflow_tower,
+        {
+            "T_liquid_in": 313.15,
+            "T_liquid_out": 298.15,
+            "L_over_G": 0.8,
+            "T_gas": 298.15,
+            "relative_humidity": 0.4,
+            "steps": 4,
+        },
     ),
 ]
 

@@ -15,6 +15,7 @@ from __future__ import annotations
 
 import math
 import warnings
+from collections.abc import Callable, Mapping
 from dataclasses import dataclass
 from typing import Any, Literal, overload
 
@@ -26,6 +27,7 @@ from .._validation import check_nonnegative, check_positive, check_shapes, finis
 from ..constants import R_GAS
 from ..errors import EnvelopeWarning, InputValueError
 from ..substances._species import Species, species
+from ._medium import Override, gas_side, is_composition, property_override
 
 __all__ = [
     "TransferCoefficients",
@@ -601,6 +603,9 @@ class TransferCoefficients(FrozenResult):
         The analogy and the diffusivity method used.
     warnings : tuple of str
         Every warning raised on the way.
+    user_supplied : tuple of str
+        Names of the properties the user supplied (``"rho"``, ``"D"``, ...); the
+        others came from the databases.
 
     """
 
@@ -624,19 +629,25 @@ class TransferCoefficients(FrozenResult):
     Le: FloatOrArray
     method: str
     warnings: tuple[str, ...]
+    user_supplied: tuple[str, ...] = ()
 
 
 @guard
 def mass_transfer_from_heat(
     h: ArrayLike,
     solute: str | Species,
-    carrier: str | Species,
+    carrier: str | Species | Mapping[str, float],
     T: ArrayLike,
     P: ArrayLike = 101325.0,
     *,
     phase: Literal["gas", "liquid"] = "gas",
     diffusivity_method: str | None = None,
     exponent: float = _TWO_THIRDS,
+    rho: Override = None,
+    cp: Override = None,
+    k: Override = None,
+    mu: Override = None,
+    D: Override = None,
 ) -> TransferCoefficients:
     """Mass-transfer coefficients for a species from a known h, resolving properties.
 
@@ -646,8 +657,11 @@ def mass_transfer_from_heat(
         Heat-transfer coefficient for the same geometry and flow [W/(m^2 K)].
     solute : str or Species
         Transferring species.
-    carrier : str or Species
-        Carrier fluid (gas, e.g. ``"air"``, or solvent, e.g. ``"water"``).
+    carrier : str or Species or mapping
+        Carrier fluid (gas, e.g. ``"air"``, or solvent, e.g. ``"water"``), or a gas
+        given as a composition by mole fraction, e.g. ``{"nitrogen": 0.79, "oxygen": 0.21}``
+        or humid air ``{"air": 0.97, "water": 0.03}`` (mixture properties by the mixing
+        rules of ``chemicals``, the diffusivity by Blanc's law).
     T : float or array_like
         Film temperature [K].
     P : float or array_like
@@ -659,6 +673,17 @@ def mass_transfer_from_heat(
         ``'wilke-chang'`` for liquids).
     exponent : float
         Analogy exponent n [-] (2/3 for Chilton-Colburn).
+    rho : float or callable, optional
+        The user's carrier density [kg/m^3]: a number (or array broadcasting with T), or a
+        function of T [K] accepting numpy arrays.  Replaces the database value.
+    cp : float or callable, optional
+        The user's carrier specific heat capacity [J/(kg K)], as for ``rho``.
+    k : float or callable, optional
+        The user's carrier thermal conductivity [W/(m K)], as for ``rho``.
+    mu : float or callable, optional
+        The user's carrier viscosity [Pa s], as for ``rho``.
+    D : float or callable, optional
+        The user's diffusivity of the solute in the carrier [m^2/s], as for ``rho``.
 
     Returns
     -------
@@ -668,7 +693,9 @@ def mass_transfer_from_heat(
 
     Notes
     -----
-    Properties are the carrier's (dilute solute).  The error is that of h
+    Properties are the carrier's (dilute solute).  Values the user supplies replace the
+    database's and are listed in ``user_supplied``; a carrier or solute the databases lack
+    works once every property it needs is given.  The error is that of h
     combined with that of the diffusivity (k_c scales as D^(2/3)).  Where the
     result bears on safety (toxic or flammable vapour release, oxygen
     ingress into food, pressure equipment), check it against measured data,
@@ -684,11 +711,13 @@ def mass_transfer_from_heat(
     >>> r = mass_transfer_from_heat(35.0, "water", "air", 320.0)
     >>> round(r.k_c, 4), round(r.Le, 3)
     (0.0345, 0.873)
+    >>> r = mass_transfer_from_heat(35.0, "ethanol", {"air": 0.97, "water": 0.03}, 320.0)
+    >>> r.carrier
+    'mixture(air 0.97, water 0.03)'
 
     """
-    from ..diffusivity._gas import gas_diffusivity
     from ..diffusivity._liquid import liquid_diffusivity
-    from ..substances._properties import gas_model, liquid_model
+    from ..substances._properties import liquid_model
 
     if phase not in ("gas", "liquid"):
         raise InputValueError(f"phase={phase!r} must be 'gas' or 'liquid'")
@@ -696,32 +725,70 @@ def mass_transfer_from_heat(
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
     check_shapes(h=hv, T=Tv, P=Pv)
-    a, b = species(solute), species(carrier)
+    a = species(solute)
+    if phase == "liquid" and is_composition(carrier):
+        raise InputValueError(
+            f"carrier={dict(carrier)!r}: a composition is accepted for a gas carrier only; for a "  # type: ignore[arg-type]
+            "liquid pass one solvent (and its mixture properties as rho=, cp=, k=, mu=, D=)"
+        )
+    rho_v: FloatOrArray
+    cp_v: FloatOrArray
+    k_v: FloatOrArray
+    mu_v: FloatOrArray
+    D_v: FloatOrArray
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
         if phase == "gas":
-            g = gas_model(b)
-            rho, cp, k, mu = (
-                g.density(Tv, Pv),
-                g.heat_capacity(Tv),
-                g.thermal_conductivity(Tv),
-                g.viscosity(Tv),
+            side = gas_side(
+                a,
+                carrier,
+                name="carrier",
+                diffusivity_method=diffusivity_method,
+                rho=rho,
+                cp=cp,
+                k=k,
+                mu=mu,
+                D=D,
             )
-            method = diffusivity_method or "fuller"
-            D = gas_diffusivity(a, b, Tv, Pv, method=method)
+            carrier_name, supplied = side.label, side.user_supplied
+            rho_v, cp_v, k_v, mu_v = (
+                side.density(Tv, Pv),
+                side.heat_capacity(Tv),
+                side.thermal_conductivity(Tv),
+                side.viscosity(Tv),
+            )
+            method = side.diffusivity_method
+            D_v = side.diffusivity(Tv, Pv)
+            M_carrier = side.molar_mass
         else:
-            lq = liquid_model(b)
-            rho, cp, k, mu = (
-                lq.density(Tv),
-                lq.heat_capacity(Tv),
-                lq.thermal_conductivity(Tv),
-                lq.viscosity(Tv),
-            )
+            b = species(carrier)  # type: ignore[arg-type]
+            carrier_name, M_carrier = b.name, b.molar_mass
+            over = {
+                "rho": property_override("rho", rho, "kg/m^3"),
+                "cp": property_override("cp", cp, "J/(kg K)"),
+                "k": property_override("k", k, "W/(m K)"),
+                "mu": property_override("mu", mu, "Pa s"),
+                "D": property_override("D", D, "m^2/s"),
+            }
+            supplied = tuple(key for key, fn in over.items() if fn is not None)
+
+            def value(key: str, model: Callable[[], Callable[[FloatOrArray], FloatOrArray]]) -> FloatOrArray:
+                fn = over[key]
+                return model()(Tv) if fn is None else fn(Tv)
+
+            rho_v = value("rho", lambda: liquid_model(b).density)
+            cp_v = value("cp", lambda: liquid_model(b).heat_capacity)
+            k_v = value("k", lambda: liquid_model(b).thermal_conductivity)
+            mu_v = value("mu", lambda: liquid_model(b).viscosity)
             method = diffusivity_method or "wilke-chang"
-            D = liquid_diffusivity(a, b, Tv, method=method)
+            if over["D"] is None:
+                D_v = liquid_diffusivity(a, b, Tv, method=method)
+            else:
+                D_v = over["D"](Tv)
+                method = "user-supplied"
     for w in caught:
         warn_caller(str(w.message), w.category)
-    r, c, kk, m, d = (np.asarray(x) for x in (rho, cp, k, mu, D))
+    r, c, kk, m, d = (np.asarray(x, dtype=float) for x in (rho_v, cp_v, k_v, mu_v, D_v))
     Pr = c * m / kk
     Sc = m / (r * d)
     Le = Sc / Pr
@@ -735,7 +802,7 @@ def mass_transfer_from_heat(
         k_x = None
     else:
         k_G = k_y = None
-        k_x = finish(k_c * r / b.molar_mass)
+        k_x = finish(k_c * r / M_carrier)
     n_text = "2/3" if math.isclose(exponent, _TWO_THIRDS) else f"{exponent:g}"
     return TransferCoefficients(
         h=finish(np.asarray(hv, dtype=float)),
@@ -744,7 +811,7 @@ def mass_transfer_from_heat(
         k_y=k_y,
         k_x=k_x,
         solute=a.name,
-        carrier=b.name,
+        carrier=carrier_name,
         phase=phase,
         T=Tv,
         P=Pv,
@@ -758,4 +825,5 @@ def mass_transfer_from_heat(
         Le=finish(Le),
         method=f"Chilton-Colburn analogy (exponent {n_text}); diffusivity by {method}",
         warnings=tuple(str(w.message) for w in caught),
+        user_supplied=supplied,
     )
