@@ -9,6 +9,7 @@ else lives in one subpackage each, with one public path per function:
 ``surface``      dimensionless groups, the correlation catalogue, analogies, conventions, fluxes
 ``bodies``       transient uptake and release, barriers, permeability units
 ``testing``      hypothesis strategies and invariant checks for downstream tests
+``units``        pint quantities: accepted by every function; result objects as quantities
 ``constants``    the physical constants the library uses
 ``errors``       the whole error and warning family
 
@@ -33,9 +34,9 @@ from .surface._analogy import TransferCoefficients, mass_transfer_from_heat
 from .surface._wet_surface import wet_bulb_temperature, wet_surface_temperature
 
 if TYPE_CHECKING:
-    from . import bodies, testing
+    from . import bodies, testing, units
 
-_LAZY = frozenset({"bodies", "testing"})
+_LAZY = frozenset({"bodies", "testing", "units"})
 
 
 def __getattr__(name: str) -> object:
@@ -72,6 +73,7 @@ __all__ = [
     "substances",
     "surface",
     "testing",
+    "units",
     "wet_bulb_temperature",
     "wet_surface_temperature",
 ]

@@ -21,6 +21,7 @@ from typing import Literal, overload
 import numpy as np
 
 from .._typing import ArrayLike, FloatArray, FloatOrArray
+from .._uncertainty import combine, relative_input, stated_uncertainty
 from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import R_GAS
 from ..errors import InputValueError
@@ -551,6 +552,11 @@ class TransferCoefficients:
         The analogy and the diffusivity method used.
     warnings : tuple of str
         Every warning raised on the way.
+    relative_uncertainty : float or numpy.ndarray or None
+        Relative standard uncertainty of k_c [-] (one standard deviation, as a
+        fraction; the same for k_G, k_y and k_x): the diffusivity method's
+        stated accuracy and the ``h_uncertainty`` given, combined by
+        linearisation; None where neither is known.
 
     """
 
@@ -574,6 +580,7 @@ class TransferCoefficients:
     Le: FloatOrArray
     method: str
     warnings: tuple[str, ...]
+    relative_uncertainty: FloatOrArray | None = None
 
 
 @guard
@@ -587,6 +594,7 @@ def mass_transfer_from_heat(
     phase: Literal["gas", "liquid"] = "gas",
     diffusivity_method: str | None = None,
     exponent: float = _TWO_THIRDS,
+    h_uncertainty: ArrayLike = 0.0,
 ) -> TransferCoefficients:
     """Mass-transfer coefficients for a species from a known h, resolving properties.
 
@@ -609,17 +617,26 @@ def mass_transfer_from_heat(
         ``'wilke-chang'`` for liquids).
     exponent : float
         Analogy exponent n [-] (2/3 for Chilton-Colburn).
+    h_uncertainty : float or array_like
+        Relative standard uncertainty of ``h`` [-] (0.10 for 10 %, one
+        standard deviation); 0 by default.
 
     Returns
     -------
     TransferCoefficients
-        k_c and its other conventions, with the properties, groups, method
-        and warnings.
+        k_c and its other conventions, with the properties, groups, method,
+        warnings and the relative standard uncertainty of k_c.
 
     Notes
     -----
     Properties are the carrier's (dilute solute).  The error is that of h
-    combined with that of the diffusivity (k_c scales as D^(2/3)).  Where the
+    combined with that of the diffusivity: with the properties fixed,
+    :math:`k_c = h\\,\\rho^{n-1} c_p^{n-1} k^{-n} D^{n}` (the viscosity cancels),
+    so by linearisation
+    :math:`u(k_c)^2 = u(h)^2 + (n\\,u(D))^2`, with u(D) the diffusivity
+    method's stated average absolute deviation times sqrt(pi/2) (normal
+    errors).  The property models' own errors (a few per cent at most) are
+    not included.  Where the
     result bears on safety (toxic or flammable vapour release, oxygen
     ingress into food, pressure equipment), check it against measured data,
     local codes and licensed engineering practice.
@@ -636,8 +653,9 @@ def mass_transfer_from_heat(
     (0.0345, 0.873)
 
     """
-    from ..diffusivity._gas import gas_diffusivity
-    from ..diffusivity._liquid import liquid_diffusivity
+    from ..diffusivity._common import normalise_method
+    from ..diffusivity._gas import GAS_METHODS, gas_diffusivity
+    from ..diffusivity._liquid import LIQUID_METHODS, liquid_diffusivity
     from ..substances._properties import gas_model, liquid_model
 
     if phase not in ("gas", "liquid"):
@@ -645,7 +663,8 @@ def mass_transfer_from_heat(
     hv = check_nonnegative("h", h, "pass a heat-transfer coefficient of zero or more [W/(m^2 K)]")
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
-    check_shapes(h=hv, T=Tv, P=Pv)
+    u_h = relative_input("h_uncertainty", h_uncertainty)
+    check_shapes(h=hv, T=Tv, P=Pv, h_uncertainty=u_h)
     a, b = species(solute), species(carrier)
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
@@ -686,6 +705,8 @@ def mass_transfer_from_heat(
     else:
         k_G = k_y = None
         k_x = finish(k_c * r / b.molar_mass)
+    methods = GAS_METHODS if phase == "gas" else LIQUID_METHODS
+    u_D = stated_uncertainty(methods[normalise_method(method, methods, "diffusivity_method")])
     n_text = "2/3" if math.isclose(exponent, _TWO_THIRDS) else f"{exponent:g}"
     return TransferCoefficients(
         h=finish(np.asarray(hv, dtype=float)),
@@ -708,4 +729,5 @@ def mass_transfer_from_heat(
         Le=finish(Le),
         method=f"Chilton-Colburn analogy (exponent {n_text}); diffusivity by {method}",
         warnings=tuple(str(w.message) for w in caught),
+        relative_uncertainty=combine((1.0, u_h if np.any(u_h) else None), (exponent, u_D)),
     )
