@@ -6,6 +6,7 @@ evaluated on sampled inputs within 10 % of the uncertainty.
 
 from __future__ import annotations
 
+import json
 import math
 
 import numpy as np
@@ -131,3 +132,22 @@ def test_linearised_uncertainty_agrees_with_monte_carlo(solute, carrier, T, phas
     report = mt.diffusivity_report(solute, carrier, T, phase=phase, method=method)
     mc = _monte_carlo_kc(r, u_h, report.relative_uncertainty)
     assert abs(mc - r.relative_uncertainty) <= 0.10 * r.relative_uncertainty, (mc, r.relative_uncertainty)
+
+
+# -- the command line prints ± one standard deviation -------------------------------------------
+
+
+def test_cli_prints_plus_minus(capsys):
+    from masstransfer.cli import main
+
+    assert main(["diffusivity", "toluene", "air", "-T", "350"]) == 0
+    D = mt.gas_diffusivity("toluene", "air", 350.0)
+    u = 0.05 * math.sqrt(math.pi / 2)
+    assert f"{D:.4e} ± {D * u:.2g}" in capsys.readouterr().out
+    assert (
+        main(["coefficient", "water", "air", "--h", "35", "-T", "320", "--uncertainty", "0.1", "--json"]) == 0
+    )
+    data = json.loads(capsys.readouterr().out)
+    assert data["relative_uncertainty"] == pytest.approx(math.hypot(0.1, 2.0 / 3.0 * u), rel=1e-12)
+    assert main(["coefficient", "water", "air", "--h", "35", "-T", "320", "--uncertainty", "0.1"]) == 0
+    assert " ± " in capsys.readouterr().out

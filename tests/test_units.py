@@ -9,6 +9,7 @@ from __future__ import annotations
 
 import dataclasses
 import inspect
+import json
 import os
 import subprocess
 import sys
@@ -261,6 +262,12 @@ _NO_PINT = textwrap.dedent(
         mt.units.quantities(mt.diffusivity_report("water", "air", 300.0))
     except mt.errors.MissingDependencyError as exc:
         print("missing:", exc)
+    from masstransfer.cli import main
+    print("cli plain:", main(["diffusivity", "water", "air", "-T", "300", "--json"]) == 0)
+    try:
+        main(["diffusivity", "water", "air", "-T", "60 degC"])
+    except SystemExit as exc:
+        print("cli unit:", exc.code)
     """
 )
 
@@ -273,3 +280,67 @@ def test_without_pint_nothing_is_imported_and_quantities_helper_says_what_to_ins
     lines = out.stdout.splitlines()
     assert lines[0] == "False False"
     assert "pip install 'masstransfer[units]'" in lines[1]
+    assert "cli plain: True" in out.stdout
+    assert "cli unit: 2" in out.stdout
+    assert "values with units need pint: pip install 'masstransfer[units]'" in out.stderr
+
+
+# -- the command line ---------------------------------------------------------------------------
+
+
+def test_cli_reads_values_with_units(capsys):
+    from masstransfer.cli import main
+
+    assert main(["diffusivity", "water", "air", "-T", "60 degC", "-P", "2 bar", "--json"]) == 0
+    data = json.loads(capsys.readouterr().out)
+    assert data["T_K"] == [pytest.approx(333.15)]
+    assert data["D_m2_per_s"][0] == pytest.approx(mt.gas_diffusivity("water", "air", 333.15, 2e5), rel=1e-12)
+
+
+def test_cli_plain_numbers_are_si_as_before(capsys):
+    from masstransfer.cli import main
+
+    assert main(["wet-bulb", "-T", "303.15", "--rh", "0.5", "--json"]) == 0
+    assert json.loads(capsys.readouterr().out)["wet_bulb_K"][0] == pytest.approx(
+        mt.wet_bulb_temperature(303.15, 0.5), rel=1e-12
+    )
+    assert main(["wet-bulb", "-T", "30 degC", "--rh", "50 %", "--json"]) == 0
+    assert json.loads(capsys.readouterr().out)["wet_bulb_K"][0] == pytest.approx(
+        mt.wet_bulb_temperature(303.15, 0.5), rel=1e-12
+    )
+
+
+def test_cli_wrong_dimension_is_a_usage_error(capsys):
+    from masstransfer.cli import main
+
+    with pytest.raises(SystemExit) as info:
+        main(["diffusivity", "water", "air", "-T", "60 bar"])
+    assert info.value.code == 2
+    err = capsys.readouterr().err
+    assert "-T/--temperature" in err
+    assert "bar" in err
+    assert "kelvin" in err
+
+
+def test_cli_output_units_in_table_and_json(capsys):
+    from masstransfer.cli import main
+
+    assert main(["coefficient", "water", "air", "--h", "35", "-T", "320", "--units", "k_c=mm/s,T=degC"]) == 0
+    table = capsys.readouterr().out
+    assert "k_c [mm/s]" in table
+    assert "T [degC]" in table
+    kc = mt.mass_transfer_from_heat(35.0, "water", "air", 320.0).k_c * 1000.0
+    assert f"{kc:.4g}" in table
+    assert (
+        main(["coefficient", "water", "air", "--h", "35", "-T", "320", "--json", "--units", "k_c=mm/s"]) == 0
+    )
+    data = json.loads(capsys.readouterr().out)
+    assert data["converted"]["k_c"]["values"][0] == pytest.approx(kc, rel=1e-12)
+    assert data["k_c_m_per_s"][0] == pytest.approx(kc / 1000.0, rel=1e-12)  # SI fields unchanged
+
+
+def test_cli_unknown_output_column_is_a_library_error(capsys):
+    from masstransfer.cli import main
+
+    assert main(["diffusivity", "water", "air", "-T", "300", "--units", "X=K", "--json"]) == 2
+    assert json.loads(capsys.readouterr().out)["error"]["type"] == "UnitError"
