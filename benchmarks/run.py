@@ -350,6 +350,66 @@ def bench_import() -> tuple[str, float, float, str]:
     return ("import masstransfer (databases not loaded)", t_ours, t_base, "import thermo")
 
 
+def bench_quantity_check() -> list[tuple[str, float, float, str]]:
+    """Plain-number calls: the guard's look-out for pint quantities against the same guard without it.
+
+    The two are timed in alternation (five rounds, best of each) so that machine noise falls on
+    both alike.  A last row prices a call that does pass quantities (pint installed).
+    """
+    from masstransfer import _validation, surface
+
+    calls = {
+        "one scalar reynolds call": lambda: surface.reynolds(1.0, 0.1, 1.5e-5),
+        "one scalar mass_transfer_coefficient_from_heat call (keywords)": lambda: (
+            surface.mass_transfer_coefficient_from_heat(40.0, rho=1.16, cp=1007.0, Pr=0.707, Sc=0.61)
+        ),
+        "one scalar mass_transfer_from_heat call (names in)": lambda: mt.mass_transfer_from_heat(
+            35.0, "water", "air", 320.0
+        ),
+    }
+    real = _validation.has_quantity
+    rows = []
+    for name, call in calls.items():
+        call()
+        number = 20000 if "names in" not in name else 500
+        t_ours, t_base = float("inf"), float("inf")
+        for _ in range(5):
+            t_ours = min(t_ours, best(call, number, repeat=3))
+            _validation.has_quantity = lambda args, kwargs: False  # the guard as before units
+            try:
+                t_base = min(t_base, best(call, number, repeat=3))
+            finally:
+                _validation.has_quantity = real
+        rows.append((f"{name}, plain numbers (units check on)", t_ours, t_base, "same guard, no check"))
+    if "pint" not in sys.modules:
+        try:
+            import pint
+        except ImportError:
+            return rows
+    import pint
+
+    Q = pint.get_application_registry().Quantity
+    T, h = Q(46.85, "degC"), Q(35.0, "W/(m^2 K)")
+
+    def plain() -> object:
+        return mt.gas_diffusivity("water", "air", 320.0)
+
+    def with_units() -> object:
+        return mt.gas_diffusivity("water", "air", T)
+
+    with_units()
+    mt.mass_transfer_from_heat(h, "water", "air", T)
+    rows.append(
+        (
+            "one scalar gas_diffusivity call with a pint temperature",
+            best(with_units, 2000),
+            best(plain, 20000),
+            "same call, plain float",
+        )
+    )
+    return rows
+
+
 def scaling_plot(path: Path) -> None:
     """Time per call against problem size, 10 to 10^7, for three array calls and a bare baseline."""
     import matplotlib
@@ -398,6 +458,7 @@ def main() -> None:
         *bench_contactors(),
         bench_evaporation(),
         bench_import(),
+        *bench_quantity_check(),
     ]
     stamp = datetime.date.today().isoformat()
     machine = f"{platform.machine()}, {platform.python_implementation()} {platform.python_version()}"

@@ -11,6 +11,7 @@ else lives in one subpackage each, with one public path per function:
 ``contactors``   packed and bubble columns, stirred tanks, absorption with reaction, transfer units
 ``humidity``     psychrometrics for any vapour-gas pair, evaporation in one call, drying, towers
 ``testing``      hypothesis strategies and invariant checks for downstream tests
+``units``        pint quantities: accepted by every function; result objects as quantities
 ``constants``    the physical constants the library uses
 ``errors``       the whole error and warning family
 
@@ -36,9 +37,9 @@ from .surface._analogy import TransferCoefficients, mass_transfer_from_heat
 from .surface._wet_surface import wet_bulb_temperature, wet_surface_temperature
 
 if TYPE_CHECKING:
-    from . import bodies, contactors, humidity, testing
+    from . import bodies, contactors, humidity, testing, units
 
-_LAZY = frozenset({"bodies", "contactors", "humidity", "testing"})
+_LAZY = frozenset({"bodies", "contactors", "humidity", "testing", "units"})
 
 
 def __getattr__(name: str) -> object:
@@ -77,6 +78,7 @@ __all__ = [
     "substances",
     "surface",
     "testing",
+    "units",
     "wet_bulb_temperature",
     "wet_surface_temperature",
 ]

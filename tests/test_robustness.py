@@ -222,6 +222,7 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
     ("henry", substances.henry_constant, {"solute": "oxygen", "solvent": "water", "T": 298.0}),
     ("parachor", substances.parachor, {"liquid": "benzene"}),
     ("air_viscosity", mt.gas_model("air").viscosity, {"T": 300.0}),
+    ("quantities", mt.units.quantities, {"result": mt.diffusivity_report("water", "air", 300.0)}),
     ("water_density", mt.liquid_model("water").density, {"T": 300.0}),
     ("water_surface_tension", mt.liquid_model("water").surface_tension, {"T": 300.0}),
     # contactors

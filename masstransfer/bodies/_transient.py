@@ -408,7 +408,7 @@ def concentration_profile(
     Returns
     -------
     float or numpy.ndarray
-        0 at the initial state, 1 at equilibrium with the surroundings; for
+        Scaled concentration [-]: 0 at the initial state, 1 at equilibrium with the surroundings; for
         release, 1 minus this is the remaining fraction of the initial
         excess.
 

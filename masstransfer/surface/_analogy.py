@@ -23,6 +23,7 @@ import numpy as np
 
 from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
+from .._uncertainty import combine, relative_input, stated_uncertainty
 from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import R_GAS
 from ..errors import EnvelopeWarning, InputValueError
@@ -606,6 +607,11 @@ class TransferCoefficients(FrozenResult):
     user_supplied : tuple of str
         Names of the properties the user supplied (``"rho"``, ``"D"``, ...); the
         others came from the databases.
+    relative_uncertainty : float or numpy.ndarray or None
+        Relative standard uncertainty of k_c [-] (one standard deviation, as a
+        fraction; the same for k_G, k_y and k_x): the diffusivity method's
+        stated accuracy and the ``h_uncertainty`` given, combined by
+        linearisation; None where neither is known.
 
     """
 
@@ -630,6 +636,7 @@ class TransferCoefficients(FrozenResult):
     method: str
     warnings: tuple[str, ...]
     user_supplied: tuple[str, ...] = ()
+    relative_uncertainty: FloatOrArray | None = None
 
 
 @guard
@@ -648,6 +655,7 @@ def mass_transfer_from_heat(
     k: Override = None,
     mu: Override = None,
     D: Override = None,
+    h_uncertainty: ArrayLike = 0.0,
 ) -> TransferCoefficients:
     """Mass-transfer coefficients for a species from a known h, resolving properties.
 
@@ -684,19 +692,28 @@ def mass_transfer_from_heat(
         The user's carrier viscosity [Pa s], as for ``rho``.
     D : float or callable, optional
         The user's diffusivity of the solute in the carrier [m^2/s], as for ``rho``.
+    h_uncertainty : float or array_like
+        Relative standard uncertainty of ``h`` [-] (0.10 for 10 %, one
+        standard deviation); 0 by default.
 
     Returns
     -------
     TransferCoefficients
-        k_c and its other conventions, with the properties, groups, method
-        and warnings.
+        k_c and its other conventions, with the properties, groups, method,
+        warnings and the relative standard uncertainty of k_c.
 
     Notes
     -----
     Properties are the carrier's (dilute solute).  Values the user supplies replace the
     database's and are listed in ``user_supplied``; a carrier or solute the databases lack
     works once every property it needs is given.  The error is that of h
-    combined with that of the diffusivity (k_c scales as D^(2/3)).  Where the
+    combined with that of the diffusivity: with the properties fixed,
+    :math:`k_c = h\\,\\rho^{n-1} c_p^{n-1} k^{-n} D^{n}` (the viscosity cancels),
+    so by linearisation
+    :math:`u(k_c)^2 = u(h)^2 + (n\\,u(D))^2`, with u(D) the diffusivity
+    method's stated average absolute deviation times sqrt(pi/2) (normal
+    errors).  The property models' own errors (a few per cent at most) are
+    not included.  Where the
     result bears on safety (toxic or flammable vapour release, oxygen
     ingress into food, pressure equipment), check it against measured data,
     local codes and licensed engineering practice.
@@ -716,7 +733,9 @@ def mass_transfer_from_heat(
     'mixture(air 0.97, water 0.03)'
 
     """
-    from ..diffusivity._liquid import liquid_diffusivity
+    from ..diffusivity._common import normalise_method
+    from ..diffusivity._gas import GAS_METHODS
+    from ..diffusivity._liquid import LIQUID_METHODS, liquid_diffusivity
     from ..substances._properties import liquid_model
 
     if phase not in ("gas", "liquid"):
@@ -724,7 +743,8 @@ def mass_transfer_from_heat(
     hv = check_nonnegative("h", h, "pass a heat-transfer coefficient of zero or more [W/(m^2 K)]")
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
-    check_shapes(h=hv, T=Tv, P=Pv)
+    u_h = relative_input("h_uncertainty", h_uncertainty)
+    check_shapes(h=hv, T=Tv, P=Pv, h_uncertainty=u_h)
     a = species(solute)
     if phase == "liquid" and is_composition(carrier):
         raise InputValueError(
@@ -803,6 +823,8 @@ def mass_transfer_from_heat(
     else:
         k_G = k_y = None
         k_x = finish(k_c * r / M_carrier)
+    methods = GAS_METHODS if phase == "gas" else LIQUID_METHODS
+    u_D = stated_uncertainty(methods[normalise_method(method, methods, "diffusivity_method")])
     n_text = "2/3" if math.isclose(exponent, _TWO_THIRDS) else f"{exponent:g}"
     return TransferCoefficients(
         h=finish(np.asarray(hv, dtype=float)),
@@ -826,4 +848,5 @@ def mass_transfer_from_heat(
         method=f"Chilton-Colburn analogy (exponent {n_text}); diffusivity by {method}",
         warnings=tuple(str(w.message) for w in caught),
         user_supplied=supplied,
+        relative_uncertainty=combine((1.0, u_h if np.any(u_h) else None), (exponent, u_D)),
     )
