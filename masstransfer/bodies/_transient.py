@@ -76,8 +76,12 @@ def _shape(shape: str) -> str:
 
 
 def _ierfc(x: Any) -> Any:
-    """Integral of the complementary error function, exp(-x^2)/sqrt(pi) - x erfc(x)."""
-    return np.exp(-x * x) / math.sqrt(math.pi) - x * special.erfc(x)
+    """Integral of the complementary error function, exp(-x^2)/sqrt(pi) - x erfc(x).
+
+    Zero (below 1e-300) beyond x = 26, where x^2 would overflow for extreme arguments.
+    """
+    xc = np.minimum(x, 26.0)
+    return np.where(x > 26.0, 0.0, np.exp(-xc * xc) / math.sqrt(math.pi) - xc * special.erfc(xc))
 
 
 def _n_terms(T_min: float, decay: float) -> int:
