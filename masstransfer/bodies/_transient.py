@@ -17,6 +17,7 @@ from __future__ import annotations
 
 import functools
 import math
+from collections.abc import Callable
 from dataclasses import dataclass
 from typing import Any, Final, overload
 
@@ -89,7 +90,7 @@ def _n_terms(T_min: float, decay: float) -> int:
     if T_min <= 0:
         return _MAX_TERMS
     n = math.sqrt(math.log(1.0 / SERIES_TOLERANCE) / (decay * T_min)) + 2
-    return int(min(_MAX_TERMS, math.ceil(n)))
+    return _MAX_TERMS if not n < _MAX_TERMS else math.ceil(n)  # also when n overflowed to inf
 
 
 def _chunked_sum(n_terms: int, term: Any, size: int, chunk: int = 64) -> FloatArray:
@@ -216,6 +217,27 @@ def _uptake_constant_surface(shape: str, T: FloatArray) -> FloatArray:
 
 
 def _uptake_surface_resistance(shape: str, T: FloatArray, biot: float) -> FloatArray:
+    out = np.empty_like(T)
+    tiny = T < _TINY_TIME
+    if tiny.any():  # a plane surface with resistance, x = Bi sqrt(T); series where x is small
+        x = biot * np.sqrt(T[tiny])
+        nu = {"slab": 1.0, "cylinder": 2.0, "sphere": 3.0}[shape]
+        planar = np.where(
+            x < 1e-3,
+            x * x - 4 * x**3 / (3 * math.sqrt(math.pi)) + x**4 / 2,
+            special.erfcx(np.maximum(x, 1e-3)) - 1 + 2 * x / math.sqrt(math.pi),
+        )
+        out[tiny] = nu * planar / biot
+    short = (T < _PROFILE_SHORT_TIME) & ~tiny
+    if short.any():  # exact transform inverted numerically: no cancellation at tiny times
+        out[short] = _talbot(lambda s, rows: _laplace_uptake(shape, s, biot), T[short])
+    if not (short | tiny).all():
+        short = short | tiny
+        out[~short] = _uptake_surface_resistance_series(shape, T[~short], biot)
+    return out
+
+
+def _uptake_surface_resistance_series(shape: str, T: FloatArray, biot: float) -> FloatArray:
     out = np.empty_like(T)
     L = biot
     short = np.zeros(T.shape, dtype=bool)
@@ -456,7 +478,15 @@ def concentration_profile(
         out[series] = _profile(s, Xf[series], Tf[series], bi)
     # Short times: the exact Laplace-domain solution inverted numerically, only where the
     # concentration is not negligible (within 16 penetration depths sqrt(Dt) of the surface).
-    short = (Tf > 0) & ~series & (1.0 - Xf < 16.0 * np.sqrt(Tf))
+    near = (Tf > 0) & ~series & (1.0 - Xf < 16.0 * np.sqrt(Tf))
+    tiny = near & (Tf < _TINY_TIME)
+    if tiny.any():  # the plane semi-infinite solution (Carslaw & Jaeger 1959, sec. 2.7)
+        xi = (1.0 - Xf[tiny]) / (2.0 * np.sqrt(Tf[tiny]))
+        plane = special.erfc(xi)
+        if bi is not None:
+            plane = plane - np.exp(-xi * xi) * special.erfcx(xi + bi * np.sqrt(Tf[tiny]))
+        out[tiny] = plane
+    short = near & ~tiny
     if short.any():
         out[short] = _talbot_profile(s, Xf[short], Tf[short], bi)
     return finish(np.clip(out, 0.0, 1.0).reshape(X.shape))
@@ -465,41 +495,60 @@ def concentration_profile(
 #: Below this Dt/a^2 the profile is obtained by inverting its Laplace transform (the series
 #: would need more than a few hundred terms and resolve the thin penetration layer poorly).
 _PROFILE_SHORT_TIME: Final = 1e-3
+#: Below this Dt/a^2 the penetration depth is under 1e-7 of the size: the plane semi-infinite
+#: forms hold to a relative 1e-7 (curvature) and far inside the absolute series tolerance; the
+#: Talbot nodes would also need Bessel functions of complex arguments near 1e10 in modulus.
+_TINY_TIME: Final = 1e-14
 #: Terms of the fixed Talbot contour; 24 gives about 1e-13 against the converged series.
 _TALBOT_TERMS: Final = 24
+
+
+def _surface_ratio_and_gradient(shape: str, X: Any, q: Any) -> tuple[Any, Any]:
+    """c(X)/c(1) and g(q) = (dc/dX)/c at X = 1 of the constant-surface transform, q = sqrt(s).
+
+    cosh(Xq)/cosh q and q tanh q (slab), I0(Xq)/I0(q) and q I1(q)/I0(q) (cylinder),
+    sinh(Xq)/(X sinh q) and q coth q - 1 (sphere); written with decaying exponentials and the
+    exponentially scaled Bessel functions so that nothing overflows at large |s|.
+    """
+    e2 = np.exp(-2 * q)
+    if shape == "slab":
+        ratio = np.exp((X - 1) * q) * (1 + np.exp(-2 * X * q)) / (1 + e2)
+        return ratio, q * (1 - e2) / (1 + e2)
+    if shape == "sphere":
+        Xs = np.maximum(X, 1e-9)
+        core = np.exp((Xs - 1) * q) * (1 - np.exp(-2 * Xs * q)) / (Xs * (1 - e2))
+        centre = 2 * q * np.exp(-q) / (1 - e2)
+        return np.where(X < 1e-9, centre, core), q * (1 + e2) / (1 - e2) - 1
+    i0 = special.ive(0, q)
+    return special.ive(0, X * q) / i0 * np.exp((X - 1) * q.real), q * special.ive(1, q) / i0
 
 
 def _laplace_profile(shape: str, X: Any, s: Any, biot: float | None) -> Any:
     """Laplace transform in T = Dt/a^2 of c/c_s at X = r/a, at complex s (Crank, ch. 2-6).
 
-    Constant surface: cosh(Xq)/(s cosh q) (slab), I0(Xq)/(s I0(q)) (cylinder),
-    sinh(Xq)/(s X sinh q) (sphere), with q = sqrt(s).  With a surface resistance the
-    transform is multiplied by Bi / (g(q) + Bi), g(q) the surface gradient over the value:
-    q tanh q, q I1(q)/I0(q), q coth q - 1.  Written with decaying exponentials (and the
-    exponentially scaled Bessel functions) so that nothing overflows at large |s|.
+    Constant surface: the ratio of :func:`_surface_ratio_and_gradient` over s.  With a surface
+    resistance the transform is multiplied by Bi / (g(q) + Bi).
     """
-    q = np.sqrt(s)
-    e2 = np.exp(-2 * q)
-    if shape == "slab":
-        ratio = np.exp((X - 1) * q) * (1 + np.exp(-2 * X * q)) / (1 + e2)
-        grad = q * (1 - e2) / (1 + e2)
-    elif shape == "sphere":
-        Xs = np.maximum(X, 1e-9)
-        core = np.exp((Xs - 1) * q) * (1 - np.exp(-2 * Xs * q)) / (Xs * (1 - e2))
-        centre = 2 * q * np.exp(-q) / (1 - e2)
-        ratio = np.where(X < 1e-9, centre, core)
-        grad = q * (1 + e2) / (1 - e2) - 1
-    else:
-        i0 = special.ive(0, q)
-        ratio = special.ive(0, X * q) / i0 * np.exp((X - 1) * q.real)
-        grad = q * special.ive(1, q) / i0
+    ratio, grad = _surface_ratio_and_gradient(shape, X, np.sqrt(s))
     if biot is None:
         return ratio / s
     return biot * ratio / (s * (grad + biot))
 
 
-def _talbot_profile(shape: str, X: FloatArray, T: FloatArray, biot: float | None) -> FloatArray:
-    """Invert :func:`_laplace_profile` on the fixed Talbot contour (Abate & Valko 2004)."""
+def _laplace_uptake(shape: str, s: Any, biot: float | None) -> Any:
+    """Laplace transform in T of M_t/M_inf: nu g(q) c_surface(s)/s, nu = 1, 2, 3 by shape."""
+    _, grad = _surface_ratio_and_gradient(shape, 1.0, np.sqrt(s))
+    nu = {"slab": 1.0, "cylinder": 2.0, "sphere": 3.0}[shape]
+    if biot is None:
+        return nu * grad / s**2
+    return nu * grad * biot / (s**2 * (grad + biot))
+
+
+def _talbot(F: Callable[[Any, slice], Any], T: FloatArray) -> FloatArray:
+    """Invert a Laplace transform at every T on the fixed Talbot contour (Abate & Valko 2004).
+
+    ``F(s, rows)`` evaluates the transform for the rows ``rows`` of T at s of shape (rows, nodes).
+    """
     M = _TALBOT_TERMS
     k = np.arange(1, M)
     theta = k * np.pi / M
@@ -509,13 +558,17 @@ def _talbot_profile(shape: str, X: FloatArray, T: FloatArray, biot: float | None
     gamma = np.concatenate(
         ([0.5 * np.exp(r) + 0j], (1 + 1j * theta * (1 + cot**2) - 1j * cot) * np.exp(delta[1:]))
     )
-    out = np.empty_like(X)
-    for start in range(0, X.size, 4096):  # blocks keep the complex temporaries small
+    out = np.empty_like(T)
+    for start in range(0, T.size, 4096):  # blocks keep the complex temporaries small
         sl = slice(start, start + 4096)
-        Tb = T[sl, None]
-        F = _laplace_profile(shape, X[sl, None], delta[None, :] / Tb, biot)
-        out[sl] = (r / M) * np.sum((gamma[None, :] * F).real, axis=1) / T[sl]
+        Fs = F(delta[None, :] / T[sl, None], sl)
+        out[sl] = (r / M) * np.sum((gamma[None, :] * Fs).real, axis=1) / T[sl]
     return out
+
+
+def _talbot_profile(shape: str, X: FloatArray, T: FloatArray, biot: float | None) -> FloatArray:
+    """Return the concentration profile at short times by :func:`_talbot`."""
+    return _talbot(lambda s, rows: _laplace_profile(shape, X[rows, None], s, biot), T)
 
 
 def _profile(shape: str, X: FloatArray, T: FloatArray, biot: float | None) -> FloatArray:

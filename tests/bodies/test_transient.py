@@ -223,3 +223,27 @@ def test_profile_continuous_across_the_short_time_switch(shape):
 def test_profile_rejects_a_bad_biot_number(biot):
     with pytest.raises(mt.errors.InputValueError, match="biot"):
         tr.concentration_profile("sphere", 0.5e-3, 10.0, 1e-9, 1e-3, biot=biot)
+
+
+@pytest.mark.parametrize("shape", tr.SHAPES)
+@pytest.mark.parametrize("T", [1e-300, 1e-20, 1e-14, 1e-12, 1e-10])
+def test_uptake_with_resistance_at_tiny_times_is_surface_controlled(shape, T):
+    # early times: M/M_inf = nu Bi T (1 - 4 Bi sqrt(T) / (3 sqrt(pi)) + ...), nu = A a / V
+    # (Crank 1975, 2nd ed., sec. 4.3.5, expanding Eq. (4.44) for a plane sheet; curvature
+    # enters at relative order sqrt(T))
+    nu = {"slab": 1.0, "cylinder": 2.0, "sphere": 3.0}[shape]
+    Bi = 2.0
+    expected = nu * Bi * T * (1 - 4 * Bi * math.sqrt(T) / (3 * math.sqrt(math.pi)))
+    assert tr.fractional_uptake(shape, T, 1.0, 1.0, biot=Bi) == pytest.approx(expected, rel=1e-5)
+
+
+@pytest.mark.parametrize("shape", tr.SHAPES)
+@pytest.mark.parametrize("biot", [None, 0.5, 10.0])
+def test_uptake_inversion_agrees_with_series(shape, biot):
+    T = np.array([1e-3, 1e-2, 0.1, 1.0])
+    if biot is None:
+        series = _transient._uptake_constant_surface(shape, T)
+    else:
+        series = _transient._uptake_surface_resistance_series(shape, T, biot)
+    inverted = _transient._talbot(lambda s, rows: _transient._laplace_uptake(shape, s, biot), T)
+    np.testing.assert_allclose(inverted, series, atol=1e-12)
