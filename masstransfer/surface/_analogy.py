@@ -14,7 +14,6 @@ groups used, and the warnings raised.
 from __future__ import annotations
 
 import math
-import warnings
 from collections.abc import Callable, Mapping
 from dataclasses import dataclass
 from typing import Any, Literal, overload
@@ -24,7 +23,15 @@ import numpy as np
 from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._uncertainty import combine, relative_input, stated_uncertainty
-from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, warn_caller
+from .._validation import (
+    check_nonnegative,
+    check_positive,
+    check_shapes,
+    collect_warnings,
+    finish,
+    guard,
+    warn_caller,
+)
 from ..constants import R_GAS
 from ..errors import EnvelopeWarning, InputValueError
 from ..substances._species import Species, species
@@ -756,8 +763,7 @@ def mass_transfer_from_heat(
     k_v: FloatOrArray
     mu_v: FloatOrArray
     D_v: FloatOrArray
-    with warnings.catch_warnings(record=True) as caught:
-        warnings.simplefilter("always")
+    with collect_warnings() as caught:
         if phase == "gas":
             side = gas_side(
                 a,
@@ -806,8 +812,8 @@ def mass_transfer_from_heat(
             else:
                 D_v = over["D"](Tv)
                 method = "user-supplied"
-    for w in caught:
-        warn_caller(str(w.message), w.category)
+    for message, category in caught:
+        warn_caller(message, category)
     r, c, kk, m, d = (np.asarray(x, dtype=float) for x in (rho_v, cp_v, k_v, mu_v, D_v))
     Pr = c * m / kk
     Sc = m / (r * d)
@@ -823,8 +829,15 @@ def mass_transfer_from_heat(
     else:
         k_G = k_y = None
         k_x = finish(k_c * r / M_carrier)
+    # the diffusivity's stated accuracy: the named method's (also for a Blanc mixture of its
+    # binaries); unknown (None) for a diffusivity the user supplied
     methods = GAS_METHODS if phase == "gas" else LIQUID_METHODS
-    u_D = stated_uncertainty(methods[normalise_method(method, methods, "diffusivity_method")])
+    base = diffusivity_method or ("fuller" if phase == "gas" else "wilke-chang")
+    u_D = (
+        None
+        if "D" in supplied
+        else stated_uncertainty(methods[normalise_method(base, methods, "diffusivity_method")])
+    )
     n_text = "2/3" if math.isclose(exponent, _TWO_THIRDS) else f"{exponent:g}"
     return TransferCoefficients(
         h=finish(np.asarray(hv, dtype=float)),
@@ -846,7 +859,7 @@ def mass_transfer_from_heat(
         Sc=finish(Sc),
         Le=finish(Le),
         method=f"Chilton-Colburn analogy (exponent {n_text}); diffusivity by {method}",
-        warnings=tuple(str(w.message) for w in caught),
+        warnings=tuple(dict.fromkeys(message for message, _ in caught)),
         user_supplied=supplied,
         relative_uncertainty=combine((1.0, u_h if np.any(u_h) else None), (exponent, u_D)),
     )
