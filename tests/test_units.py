@@ -72,6 +72,8 @@ def _quantified(fn, valid):
         numeric = isinstance(value, int | float | list) and not isinstance(value, bool)
         if unit is not None and unit.kind == "unit" and numeric:
             out[name] = _as_quantity(value, unit.text)
+            if unit.difference and str(out[name].units) == "degree_Celsius":
+                out[name] = Q(value, "K").to("delta_degC")
             n += 1
         else:
             out[name] = value
@@ -346,3 +348,11 @@ def test_cli_unknown_output_column_is_a_library_error(capsys):
 
     assert main(["diffusivity", "water", "air", "-T", "300", "--units", "X=K", "--json"]) == 2
     assert json.loads(capsys.readouterr().out)["error"]["type"] == "UnitError"
+
+
+def test_a_temperature_difference_in_an_offset_unit_is_refused():
+    g = {"L": 0.1, "beta": 1.0 / 300.0, "nu": 1.6e-5}
+    plain = surface.grashof_thermal(dT=10.0, **g)
+    assert surface.grashof_thermal(dT=Q(10.0, "delta_degC"), **g).magnitude == pytest.approx(plain, rel=1e-12)
+    with pytest.raises(UnitError, match="dT is a difference"):
+        surface.grashof_thermal(dT=Q(10.0, "degC"), **g)
