@@ -44,15 +44,18 @@ def _fraction(name: str, value: ArrayLike) -> FloatOrArray:
 def _colburn(ratio: FloatArray, r: FloatArray) -> FloatArray:
     """ln(1 + r (ratio - 1)) / r, continuous through r = 0."""
     excess = ratio - 1.0
-    z = r * excess
-    if np.any(z <= -1.0):
+    z = np.asarray(r * excess, dtype=float)
+    if z.size and z.min() <= -1.0:
         raise InputValueError(
             "the specified separation is beyond the pinch: the absorption (or stripping) factor is too "
             "small for it; raise the liquid (or gas) rate, or ask for less"
         )
+    if z.size == 0 or np.abs(z).min() >= 1e-6:  # the common case: no factor within 1e-6 of 1
+        out = np.log1p(z)
+        out /= z
+        out *= excess
+        return np.asarray(out, dtype=float)
     near = np.abs(z) < 1e-6
-    if not near.any():  # the common case: no absorption factor within 1e-6 of 1
-        return np.asarray(excess * np.log1p(z) / z, dtype=float)
     safe = np.where(near, 1.0, z)
     exact = np.log1p(safe) / safe
     series = 1.0 - z / 2.0 + z * z / 3.0
