@@ -9,7 +9,7 @@ from __future__ import annotations
 import math
 from collections.abc import Callable
 from dataclasses import dataclass
-from typing import Any
+from typing import Any, overload
 
 import numpy as np
 
@@ -62,6 +62,16 @@ def _colburn(ratio: FloatArray, r: FloatArray) -> FloatArray:
     return np.asarray(excess * np.where(near, series, exact), dtype=float)
 
 
+@overload
+def transfer_units(y_in: float, y_out: float, x_in: float, m: float, A: float) -> float: ...
+@overload
+def transfer_units(
+    y_in: ArrayLike, y_out: ArrayLike, x_in: ArrayLike, m: ArrayLike, A: FloatArray
+) -> FloatArray: ...
+@overload
+def transfer_units(
+    y_in: ArrayLike, y_out: ArrayLike, x_in: ArrayLike, m: ArrayLike, A: ArrayLike
+) -> FloatOrArray: ...
 @guard
 def transfer_units(
     y_in: ArrayLike, y_out: ArrayLike, x_in: ArrayLike, m: ArrayLike, A: ArrayLike
