@@ -222,6 +222,24 @@ PACKING_DATA: Final = MappingProxyType(
                 "Billet & Schultes (1999) Table 1 (from memory); sigma_c: Onda et al. (1968) (from memory)"
             ),
         },
+        "berl-saddle-ceramic-25": {
+            "kind": "random",
+            "nominal_size": 0.025,
+            "material": "ceramic",
+            "a": 260.0,
+            "void_fraction": 0.680,
+            "sigma_c": 0.061,
+            "C_L": 1.246,
+            "C_V": 0.387,
+            "C_h": None,
+            "C_S": None,
+            "source": (
+                "a and void fraction: Billet's table as reprinted in Kolev, Packed Bed Columns for "
+                "Absorption, Desorption, Rectification and Direct Heat Transfer (Elsevier 2006), "
+                "Ch. 4, Table 1; C_L, C_V: Billet & Schultes (1999) Table 1 (from memory); sigma_c: "
+                "Onda et al. (1968) (from memory)"
+            ),
+        },
         "raschig-ring-ceramic-13": {
             "kind": "random",
             "nominal_size": 0.0127,

@@ -439,6 +439,18 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
         {"y_in": 0.02, "y_out": 0.001, "x_in": 0.0, "L_over_G": 1.8, "equilibrium": 1.2},
     ),
     (
+        "film_ntu",
+        contactors.film_transfer_units,
+        {
+            "y_in": 0.02,
+            "y_out": 0.001,
+            "x_in": 0.0,
+            "L_over_G": 1.8,
+            "equilibrium": 1.2,
+            "kxa_over_kya": 40.0,
+        },
+    ),
+    (
         "column_profile",
         contactors.column_profile,
         {"y_in": 0.02, "x_in": 0.0, "G": 20.0, "L": 36.0, "Kya": 40.0, "equilibrium": 1.2, "y_out": 0.001},
