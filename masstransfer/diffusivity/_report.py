@@ -5,10 +5,11 @@ from __future__ import annotations
 import warnings
 from collections.abc import Mapping
 from dataclasses import dataclass
-from types import MappingProxyType
 from typing import Literal
 
+from .._frozen import FrozenMapping, FrozenResult
 from .._typing import ArrayLike, FloatOrArray
+from .._uncertainty import stated_uncertainty
 from .._validation import check_positive, guard
 from ..errors import InputValueError
 from ..substances._species import Species, species
@@ -26,8 +27,8 @@ _GAS_CONSTANTS = {
 }
 
 
-@dataclass(frozen=True)
-class DiffusivityReport:
+@dataclass(frozen=True, eq=False)
+class DiffusivityReport(FrozenResult):
     """A diffusivity and what it rests on.
 
     Attributes
@@ -48,6 +49,11 @@ class DiffusivityReport:
         Special-case rules applied (liquids).
     warnings : tuple of str
         Envelope warnings raised by the computation.
+    relative_uncertainty : float or None
+        Relative standard uncertainty of ``value`` [-] (one standard deviation,
+        as a fraction), from the method's stated accuracy: an average absolute
+        deviation times sqrt(pi/2), about 1.25 (normal errors); None where the
+        method states no number.
 
     """
 
@@ -62,6 +68,7 @@ class DiffusivityReport:
     constants: Mapping[str, Mapping[str, tuple[float | None, str]]]
     notes: tuple[str, ...]
     warnings: tuple[str, ...]
+    relative_uncertainty: float | None = None
 
     def summary(self) -> str:
         """Render a short plain-text statement for a calculation note.
@@ -89,6 +96,11 @@ class DiffusivityReport:
         lines = [
             f"D({self.solute} in {self.medium}, {self.phase}) = {shown}",
             f"method: {self.accuracy}",
+            *(
+                []
+                if self.relative_uncertainty is None
+                else [f"relative standard uncertainty: ±{100 * self.relative_uncertainty:.1f} % (1 sigma)"]
+            ),
             "constants used (SI units) and their sources:",
         ]
         for who, consts in self.constants.items():
@@ -151,7 +163,11 @@ def diffusivity_report(
     Notes
     -----
     Same numbers as :func:`gas_diffusivity` and :func:`liquid_diffusivity`;
-    the report is what a calculation note needs to defend them.
+    the report is what a calculation note needs to defend them.  Its
+    ``relative_uncertainty`` is the method's stated average absolute
+    deviation taken as a standard uncertainty (times sqrt(pi/2), normal
+    errors; Geary 1935); a stated bound would be divided by sqrt(3) (uniform;
+    JCGM 100:2008, 4.3.7).
 
     References
     ----------
@@ -203,7 +219,8 @@ def diffusivity_report(
         T=Tv,
         P=P_used,
         accuracy=accuracy,
-        constants=MappingProxyType({k: MappingProxyType(v) for k, v in consts.items()}),
+        constants=FrozenMapping(consts),
         notes=tuple(notes),
         warnings=tuple(str(w.message) for w in caught),
+        relative_uncertainty=stated_uncertainty(accuracy),
     )

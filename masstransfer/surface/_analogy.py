@@ -17,14 +17,16 @@ import math
 import warnings
 from collections.abc import Callable, Mapping
 from dataclasses import dataclass
-from typing import Literal, overload
+from typing import Any, Literal, overload
 
 import numpy as np
 
+from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
+from .._uncertainty import combine, relative_input, stated_uncertainty
 from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import R_GAS
-from ..errors import InputValueError
+from ..errors import EnvelopeWarning, InputValueError
 from ..substances._species import Species, species
 from ._medium import Override, gas_side, is_composition, property_override
 
@@ -44,6 +46,45 @@ __all__ = [
 ]
 
 _TWO_THIRDS = 2.0 / 3.0
+
+#: The ranges over which j_H = f/2 and j_D = f/2 were established, the usual statement of the
+#: Chilton-Colburn analogy's validity (Incropera & DeWitt 6th ed., Eqs. (6.70)-(6.71), from memory).
+_COLBURN_RANGES = (("Pr", 0.6, 60.0), ("Sc", 0.6, 3000.0))
+
+
+def _colburn_envelope(Pr: FloatOrArray, Sc: FloatOrArray) -> None:
+    """Warn where Pr or Sc leaves the range over which the analogy was established."""
+    for (name, lo, hi), v in zip(_COLBURN_RANGES, (Pr, Sc), strict=True):
+        if isinstance(v, float):
+            vmin = vmax = v
+        elif v.size:
+            vmin, vmax = float(v.min()), float(v.max())
+        else:
+            continue
+        if vmin < lo or vmax > hi:
+            bad = vmin if vmin < lo else vmax
+            warn_caller(
+                f"Chilton-Colburn analogy: {name}={bad!r} is outside {lo:g} to {hi:g}, the range over "
+                "which j_H = j_D was established (Incropera & DeWitt 6th ed., Eqs. 6.70-6.71); the "
+                "result is an extrapolation",
+                EnvelopeWarning,
+            )
+
+
+def _require_positive_denominator(
+    analogy: str, den: np.ndarray[Any, np.dtype[np.float64]], a: dict[str, FloatOrArray]
+) -> None:
+    """Refuse inputs for which an analogy's denominator is not positive (a negative Stanton number)."""
+    bad = den <= 0.0
+    if not bad.any():
+        return
+    f = float(np.broadcast_to(a["f_darcy"], den.shape)[bad].ravel()[0])
+    p = float(np.broadcast_to(a["Pr"], den.shape)[bad].ravel()[0])
+    raise InputValueError(
+        f"f_darcy={f!r} with Pr={p!r} makes the denominator of the {analogy} analogy zero or negative "
+        "(a negative Stanton number): the analogy holds for turbulent-flow friction factors (f_darcy "
+        "below about 0.1) and Pr (Sc) near 1; pass f_darcy and Pr in that range"
+    )
 
 
 def _checked(**kw: ArrayLike) -> dict[str, FloatOrArray]:
@@ -106,8 +147,11 @@ def mass_transfer_coefficient_from_heat(
     -----
     Holds for geometries and flows where heat and mass transfer follow the
     same correlation with the same boundary conditions, at low mass-transfer
-    rates, for 0.6 < Pr, Sc < 2500 and without form drag dominating (Chilton
-    & Colburn 1934; Incropera & DeWitt Section 6.7.2).  The result is an
+    rates, for 0.6 < Pr < 60 and 0.6 < Sc < 3000 (the ranges over which
+    :math:`j_H = f/2` and :math:`j_D = f/2` were established, Incropera &
+    DeWitt Eqs. (6.70)-(6.71)), and without form drag dominating (Chilton &
+    Colburn 1934).  Outside those ranges it warns with
+    :class:`~masstransfer.errors.EnvelopeWarning`.  The result is an
     estimate of the same quality as the h it starts from.
 
     References
@@ -129,6 +173,7 @@ def mass_transfer_coefficient_from_heat(
     a = _checked(rho=rho, cp=cp, Pr=Pr, Sc=Sc)
     n = check_positive("exponent", exponent)
     check_shapes(h=hv, **a)
+    _colburn_envelope(a["Pr"], a["Sc"])
     # the property factor first, so an array of h costs one multiplication
     return finish(hv * ((a["Pr"] / a["Sc"]) ** n / (a["rho"] * a["cp"])))
 
@@ -199,6 +244,7 @@ def heat_transfer_coefficient_from_mass(
     a = _checked(rho=rho, cp=cp, Pr=Pr, Sc=Sc)
     n = check_positive("exponent", exponent)
     check_shapes(k_c=kv, **a)
+    _colburn_envelope(a["Pr"], a["Sc"])
     return finish(kv * (a["rho"] * a["cp"] * (a["Sc"] / a["Pr"]) ** n))
 
 
@@ -395,7 +441,9 @@ def stanton_prandtl_taylor(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     """
     a = _checked(f_darcy=f_darcy, Pr=Pr)
     g = np.asarray(a["f_darcy"]) / 8.0
-    return finish(g / (1.0 + 5.0 * np.sqrt(g) * (np.asarray(a["Pr"]) - 1.0)))
+    den = 1.0 + 5.0 * np.sqrt(g) * (np.asarray(a["Pr"]) - 1.0)
+    _require_positive_denominator("Prandtl-Taylor", den, a)
+    return finish(g / den)
 
 
 @guard
@@ -439,8 +487,11 @@ def stanton_von_karman(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     g = np.asarray(a["f_darcy"]) / 8.0
     P = np.asarray(a["Pr"])
     if (1.0 + 5.0 / 6.0 * (P - 1.0) <= 0).any():
-        raise InputValueError("Pr must exceed 0.2 for the von Karman analogy; pass Pr > 0.2")
-    return finish(g / (1.0 + 5.0 * np.sqrt(g) * (P - 1.0 + np.log(1.0 + 5.0 / 6.0 * (P - 1.0)))))
+        bad = float(P[P <= 0.2].ravel()[0])
+        raise InputValueError(f"Pr={bad!r} must exceed 0.2 for the von Karman analogy; pass Pr > 0.2")
+    den = 1.0 + 5.0 * np.sqrt(g) * (P - 1.0 + np.log(1.0 + 5.0 / 6.0 * (P - 1.0)))
+    _require_positive_denominator("von Karman", den, a)
+    return finish(g / den)
 
 
 @guard
@@ -523,8 +574,8 @@ def psychrometric_ratio(h: ArrayLike, k_Y: ArrayLike, c_s: ArrayLike) -> FloatOr
 # --------------------------------------------------------------------------
 
 
-@dataclass(frozen=True)
-class TransferCoefficients:
+@dataclass(frozen=True, eq=False)
+class TransferCoefficients(FrozenResult):
     """Mass-transfer coefficients from a known h, with everything used to get them.
 
     Attributes
@@ -556,6 +607,11 @@ class TransferCoefficients:
     user_supplied : tuple of str
         Names of the properties the user supplied (``"rho"``, ``"D"``, ...); the
         others came from the databases.
+    relative_uncertainty : float or numpy.ndarray or None
+        Relative standard uncertainty of k_c [-] (one standard deviation, as a
+        fraction; the same for k_G, k_y and k_x): the diffusivity method's
+        stated accuracy and the ``h_uncertainty`` given, combined by
+        linearisation; None where neither is known.
 
     """
 
@@ -580,6 +636,7 @@ class TransferCoefficients:
     method: str
     warnings: tuple[str, ...]
     user_supplied: tuple[str, ...] = ()
+    relative_uncertainty: FloatOrArray | None = None
 
 
 @guard
@@ -598,6 +655,7 @@ def mass_transfer_from_heat(
     k: Override = None,
     mu: Override = None,
     D: Override = None,
+    h_uncertainty: ArrayLike = 0.0,
 ) -> TransferCoefficients:
     """Mass-transfer coefficients for a species from a known h, resolving properties.
 
@@ -634,19 +692,28 @@ def mass_transfer_from_heat(
         The user's carrier viscosity [Pa s], as for ``rho``.
     D : float or callable, optional
         The user's diffusivity of the solute in the carrier [m^2/s], as for ``rho``.
+    h_uncertainty : float or array_like
+        Relative standard uncertainty of ``h`` [-] (0.10 for 10 %, one
+        standard deviation); 0 by default.
 
     Returns
     -------
     TransferCoefficients
-        k_c and its other conventions, with the properties, groups, method
-        and warnings.
+        k_c and its other conventions, with the properties, groups, method,
+        warnings and the relative standard uncertainty of k_c.
 
     Notes
     -----
     Properties are the carrier's (dilute solute).  Values the user supplies replace the
     database's and are listed in ``user_supplied``; a carrier or solute the databases lack
     works once every property it needs is given.  The error is that of h
-    combined with that of the diffusivity (k_c scales as D^(2/3)).  Where the
+    combined with that of the diffusivity: with the properties fixed,
+    :math:`k_c = h\\,\\rho^{n-1} c_p^{n-1} k^{-n} D^{n}` (the viscosity cancels),
+    so by linearisation
+    :math:`u(k_c)^2 = u(h)^2 + (n\\,u(D))^2`, with u(D) the diffusivity
+    method's stated average absolute deviation times sqrt(pi/2) (normal
+    errors).  The property models' own errors (a few per cent at most) are
+    not included.  Where the
     result bears on safety (toxic or flammable vapour release, oxygen
     ingress into food, pressure equipment), check it against measured data,
     local codes and licensed engineering practice.
@@ -666,7 +733,9 @@ def mass_transfer_from_heat(
     'mixture(air 0.97, water 0.03)'
 
     """
-    from ..diffusivity._liquid import liquid_diffusivity
+    from ..diffusivity._common import normalise_method
+    from ..diffusivity._gas import GAS_METHODS
+    from ..diffusivity._liquid import LIQUID_METHODS, liquid_diffusivity
     from ..substances._properties import liquid_model
 
     if phase not in ("gas", "liquid"):
@@ -674,7 +743,8 @@ def mass_transfer_from_heat(
     hv = check_nonnegative("h", h, "pass a heat-transfer coefficient of zero or more [W/(m^2 K)]")
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
-    check_shapes(h=hv, T=Tv, P=Pv)
+    u_h = relative_input("h_uncertainty", h_uncertainty)
+    check_shapes(h=hv, T=Tv, P=Pv, h_uncertainty=u_h)
     a = species(solute)
     if phase == "liquid" and is_composition(carrier):
         raise InputValueError(
@@ -753,6 +823,8 @@ def mass_transfer_from_heat(
     else:
         k_G = k_y = None
         k_x = finish(k_c * r / M_carrier)
+    methods = GAS_METHODS if phase == "gas" else LIQUID_METHODS
+    u_D = stated_uncertainty(methods[normalise_method(method, methods, "diffusivity_method")])
     n_text = "2/3" if math.isclose(exponent, _TWO_THIRDS) else f"{exponent:g}"
     return TransferCoefficients(
         h=finish(np.asarray(hv, dtype=float)),
@@ -776,4 +848,5 @@ def mass_transfer_from_heat(
         method=f"Chilton-Colburn analogy (exponent {n_text}); diffusivity by {method}",
         warnings=tuple(str(w.message) for w in caught),
         user_supplied=supplied,
+        relative_uncertainty=combine((1.0, u_h if np.any(u_h) else None), (exponent, u_D)),
     )

@@ -109,7 +109,17 @@ def solve_surface_temperature(
         )
     props = film(Tb)  # first pass: film properties at the bulk temperature
     f_hi = residual(hi, props)
-    saturated = f_hi >= 0  # bulk at or above saturation at T: no evaporation
+    saturated = f_hi >= 0  # bulk at saturation at T: no evaporation, the surface is at T
+    y_sat = np.minimum(liq.vapour_pressure(clip(Tb)) / Pb, 1.0)
+    supersaturated = saturated & (Tb <= hi_liq) & (yb > y_sat * (1 + 1e-6))
+    if supersaturated.any():
+        i = int(np.argmax(supersaturated))
+        raise OutOfRangeError(
+            f"the gas is supersaturated: y_bulk={yb.flat[i]:.4g} exceeds the saturation mole "
+            f"fraction {y_sat.flat[i]:.4g} of {liq.species.name!r} at T={Tb.flat[i]:.2f} K and "
+            f"P={Pb.flat[i]:.6g} Pa; vapour would condense (fog or dew) rather than evaporate: "
+            "check the humidity, T and P"
+        )
     if extra_heat is not None and saturated.any():
         raise OutOfRangeError(
             "the heat reaching the surface would bring the liquid to its boiling point; this is "
@@ -253,7 +263,8 @@ def wet_surface_temperature(
     OutOfRangeError
         If the surface temperature falls outside the liquid range of the
         property models (for example below the freezing point), or if the
-        gas is already saturated above T.
+        gas is supersaturated at T (its vapour would condense).  A gas
+        exactly at saturation gives T itself.
 
     Notes
     -----
