@@ -519,6 +519,22 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
         },
     ),
     (
+        "drying_time_biot",
+        humidity.drying_time,
+        {
+            "mass_flux": 1e-4,
+            "shape": "sphere",
+            "size": 0.005,
+            "dry_density": 900.0,
+            "D": 1e-9,
+            "X_initial": 0.5,
+            "X_critical": 0.3,
+            "X_final": 0.1,
+            "X_equilibrium": 0.02,
+            "biot": 2.0,
+        },
+    ),
+    (
         "merkel_ntu",
         humidity.merkel_ntu,
         {
