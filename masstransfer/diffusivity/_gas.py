@@ -1103,7 +1103,8 @@ def _ready(method: object, solute: object, medium: object) -> _Ready:
 
 def _slow_checks(r: _Ready, Tv: FloatOrArray, Pv: FloatOrArray) -> None:
     """Phase check, range and class warnings (the fast path calls this only when needed)."""
-    check_vapour(r.limits, Tv, Pv, r.solute)
+    if (Tv < r.Tc) if isinstance(Tv, float) else bool(np.any(Tv < r.Tc)):
+        check_vapour(r.limits, Tv, Pv, r.solute)
     _warn_pressure(Pv, f"gas_diffusivity(method={r.record.name!r})")
     lo = Tv < r.T_lo if isinstance(Tv, float) else bool(np.any(Tv < r.T_lo))
     hi = Tv > r.T_hi if isinstance(Tv, float) else bool(np.any(Tv > r.T_hi))
@@ -1210,10 +1211,12 @@ def gas_diffusivity(
         r = _ready(method, solute, medium)
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
-    if r.fast and isinstance(Tv, float) and isinstance(Pv, float):  # scalar fast path
+    if isinstance(Tv, float) and isinstance(Pv, float):  # scalar fast path: checks only when needed
         if Tv < r.Tc or Pv > LOW_PRESSURE_LIMIT or not r.T_lo <= Tv <= r.T_hi or r.cautions:
             _slow_checks(r, Tv, Pv)
-        return float(r.fast * Tv**1.75 / Pv)
+        if r.fast:
+            return float(r.fast * Tv**1.75 / Pv)
+        return r.record.evaluate(r.prepared, Tv, Pv)  # type: ignore[no-any-return]
     check_shapes(T=Tv, P=Pv)
     _slow_checks(r, Tv, Pv)
     return r.record.evaluate(r.prepared, Tv, Pv)  # type: ignore[no-any-return]

@@ -172,6 +172,7 @@ def diffusivity_report(
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
     notes: list[str] = []
+    viscosity: dict[str, tuple[float | None, str]] = {}
     if phase is None:
         phase = infer_phase(b, Tv, Pv)  # type: ignore[assignment]
         notes.append(
@@ -188,15 +189,21 @@ def diffusivity_report(
             rl = ready_liquid(a, b, method)
             value = liquid_diffusivity(a, b, Tv, method, P=Pv)
             rec, prep, rule_notes, P_used = rl.record, rl.prepared, rl.notes, None
-            if len(prep.args) == 5 and prep.args[4]:
-                from ..substances._properties import liquid_model
+            from ..substances._properties import liquid_model
 
-                mu = np.atleast_1d(np.asarray(liquid_model(b).viscosity(Tv), dtype=float))
+            mu = np.atleast_1d(np.asarray(liquid_model(b).viscosity(Tv), dtype=float))
+            viscosity = {"viscosity at the first T": (float(mu[0]), "masstransfer.liquid_model (thermo)")}
+            if len(prep.args) == 5 and prep.args[4]:
                 f = 8.0 * mu * 1000.0
                 shown = f"{f[0]:.3g}" if f.size == 1 else f"{f.min():.3g} to {f.max():.3g}"
                 rule_notes = (*rule_notes, f"alcohol-solvent factor 8 eta_B = {shown} at the given T")
     consts = {
-        role: MappingProxyType({k: (c.value, c.source) for k, c in cs.items()})
+        role: MappingProxyType(
+            {
+                **{k: (c.value, c.source) for k, c in cs.items()},
+                **(viscosity if role == "medium" and phase == "liquid" else {}),
+            }
+        )
         for role, cs in prep.constants.items()
     }
     return DiffusivityReport(
