@@ -125,5 +125,6 @@ def run(args: argparse.Namespace) -> str:
         lines += ["", report.summary()]
     else:
         lines += [f"note: {n}" for n in report.notes]
+        lines += [f"caution: {w}" for w in report.warnings]
         lines.append("Estimates; check safety-relevant designs against measured data.")
     return "\n".join(lines)

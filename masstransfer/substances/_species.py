@@ -198,7 +198,7 @@ class Species:
             raise MissingConstantError(
                 f"species {self.name!r} has no {name}, which the {method} method needs; "
                 f"use another method, or supply it: "
-                f"dataclasses.replace(masstransfer.species({self.name!r}), {name}=...)"
+                f"masstransfer.species({self.name!r}).replace({name}=...)"
             )
         return float(value)
 

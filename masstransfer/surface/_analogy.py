@@ -605,8 +605,9 @@ def mass_transfer_from_heat(
     phase : {'gas', 'liquid'}
         Phase of the carrier.
     diffusivity_method : str, optional
-        Method for the diffusivity (default: ``'fuller'`` for gases,
-        ``'wilke-chang'`` for liquids).
+        Method for the diffusivity (default: the pair's published recommendation, see
+        :func:`masstransfer.diffusivity.available_methods`); the result's ``method`` names it
+        with its stated accuracy.
     exponent : float
         Analogy exponent n [-] (2/3 for Chilton-Colburn).
 
@@ -636,8 +637,8 @@ def mass_transfer_from_heat(
     (0.0345, 0.873)
 
     """
-    from ..diffusivity._gas import gas_diffusivity
-    from ..diffusivity._liquid import liquid_diffusivity
+    from ..diffusivity._gas import gas_diffusivity, ready_gas
+    from ..diffusivity._liquid import liquid_diffusivity, ready_liquid
     from ..substances._properties import gas_model, liquid_model
 
     if phase not in ("gas", "liquid"):
@@ -657,8 +658,9 @@ def mass_transfer_from_heat(
                 g.thermal_conductivity(Tv),
                 g.viscosity(Tv),
             )
-            method = diffusivity_method or "fuller"
-            D = gas_diffusivity(a, b, Tv, Pv, method=method)
+            record = ready_gas(a, b, diffusivity_method).record  # the pair's default when None
+            method = f"{record.name} (stated accuracy about {record.accuracy_pct:g} %)"
+            D = gas_diffusivity(a, b, Tv, Pv, method=record.name)
         else:
             lq = liquid_model(b)
             rho, cp, k, mu = (
@@ -667,8 +669,9 @@ def mass_transfer_from_heat(
                 lq.thermal_conductivity(Tv),
                 lq.viscosity(Tv),
             )
-            method = diffusivity_method or "wilke-chang"
-            D = liquid_diffusivity(a, b, Tv, method=method)
+            record = ready_liquid(a, b, diffusivity_method).record  # the solvent's default when None
+            method = f"{record.name} (stated accuracy about {record.accuracy_pct:g} %)"
+            D = liquid_diffusivity(a, b, Tv, method=record.name, P=Pv)
     for w in caught:
         warn_caller(str(w.message), w.category)
     r, c, kk, m, d = (np.asarray(x) for x in (rho, cp, k, mu, D))

@@ -9,12 +9,16 @@ import textwrap
 
 import numpy as np
 import pytest
+from hypothesis import given
+from hypothesis import strategies as st
 
 import masstransfer as mt
 from masstransfer.diffusivity import GAS_METHODS, LIQUID_METHODS, DiffusivityMethod, SpeciesClass, classify
 from masstransfer.errors import EnvelopeWarning, InputValueError, OutOfRangeError
 
 ATM = 101325.0
+#: envelope warnings (T* outside the Neufeld fit, viscous solvents) are not the subject here
+_quiet = pytest.mark.filterwarnings("ignore::masstransfer.errors.EnvelopeWarning")
 
 # --- the records -------------------------------------------------------------------
 
@@ -295,3 +299,46 @@ def test_origin_is_part_of_equality():
     assert user.sigma == s.sigma
     assert user.origins["sigma"] is mt.substances.Origin.USER
     assert user != s  # a user-given constant is not the tabulated one, though equal in value
+
+
+# --- positivity and finiteness over each numbers-in function's declared domain ----------
+
+_T = st.floats(150.0, 3000.0)
+_P = st.floats(1e2, 1e6)
+_M = st.floats(2e-3, 0.5)  # kg/mol: H2 to heavy vapours; M_AB then stays above Wilke-Lee's 0.105 g/mol
+
+
+@_quiet
+@given(T=_T, P=_P, Ma=_M, Mb=_M, va=st.floats(2.0, 500.0), vb=st.floats(2.0, 500.0))
+def test_fuller_positive_and_finite(T, P, Ma, Mb, va, vb):
+    D = mt.diffusivity.fuller(T, P, Ma, Mb, va, vb)
+    assert np.isfinite(D)
+    assert D > 0
+
+
+@_quiet
+@given(T=_T, P=_P, Ma=_M, Mb=_M, s=st.floats(2e-10, 9e-10), e=st.floats(5.0, 1500.0))
+def test_kinetic_methods_positive_and_finite(T, P, Ma, Mb, s, e):
+    for fn in (mt.diffusivity.chapman_enskog, mt.diffusivity.wilke_lee):
+        D = fn(T, P, Ma, Mb, s, e)
+        assert np.isfinite(D)
+        assert D > 0
+
+
+@_quiet
+@given(
+    T=st.floats(250.0, 450.0),
+    mu=st.floats(2e-4, 5e-2),
+    V=st.floats(5e-6, 640e-6),
+    P_a=st.floats(1e-6, 1e-4),
+    P_b=st.floats(1e-6, 1e-4),
+)
+def test_liquid_methods_positive_and_finite(T, mu, V, P_a, P_b):
+    values = [
+        mt.diffusivity.wilke_chang(T, mu, 0.05, V, 1.0),
+        mt.diffusivity.hayduk_minhas_aqueous(T, mu, V),
+        mt.diffusivity.hayduk_minhas_paraffin(T, mu, V),
+        mt.diffusivity.hayduk_minhas(T, mu, V, P_a, P_b),
+        mt.diffusivity.tyn_calus(T, mu, V, V, P_a, P_b),
+    ]
+    assert all(np.isfinite(v) and v > 0 for v in values)
