@@ -32,6 +32,11 @@ CRC = "CRC Handbook, 'Diffusion in gases' (Marrero & Mason 1972), 101.325 kPa"
 #: document 572279144).
 PERRY = "Perry's 7th ed. Table 2-371 (1 atm)"
 INCROPERA = "Incropera & DeWitt, 6th ed., Table A.8, 1 atm (from memory)"
+#: Bird, Stewart & Lightfoot, Transport Phenomena, 2nd ed., Table 17.1-1, 1 atm (values from
+#: Hirschfelder, Curtiss & Bird 1964; water and ammonia pairs from Reid, Prausnitz & Poling 4th
+#: ed.; hydrocarbon pairs from Gotoh et al. 1974).  Read from a reproduction of the page
+#: (digilib.universitaspertamina.ac.id, Transport Phenomena, page 537).
+BSL = "Bird, Stewart & Lightfoot 2nd ed. Table 17.1-1 (1 atm)"
 #: Poling, Prausnitz & O'Connell 5th ed. Table 11-2 lists D*P in bar cm^2/s: rows at P = 1 bar.
 POLING = "Poling et al. 5th ed. Table 11-2, D*P at 1 bar (from memory)"
 
@@ -71,6 +76,15 @@ GAS_PAIRS: list[tuple[str, str, float, float, float, str, str]] = [
         "permanent gases",
         "Cussler, Diffusion, 3rd ed., Example 5.1-2 (from memory)",
     ),
+    ("carbon dioxide", "nitrous oxide", 273.2, ATM, 0.096e-4, "permanent gases", BSL),
+    ("carbon dioxide", "carbon monoxide", 273.2, ATM, 0.139e-4, "permanent gases", BSL),
+    ("carbon dioxide", "nitrogen", 273.2, ATM, 0.144e-4, "permanent gases", BSL),
+    ("carbon dioxide", "nitrogen", 288.2, ATM, 0.158e-4, "permanent gases", BSL),
+    ("carbon dioxide", "nitrogen", 298.2, ATM, 0.165e-4, "permanent gases", BSL),
+    ("nitrogen", "oxygen", 273.2, ATM, 0.181e-4, "permanent gases", BSL),
+    ("hydrogen", "sulfur hexafluoride", 298.2, ATM, 0.420e-4, "permanent gases", BSL),
+    ("hydrogen", "methane", 298.2, ATM, 0.726e-4, "permanent gases", BSL),
+    ("hydrogen", "nitrogen", 273.2, ATM, 0.674e-4, "permanent gases", BSL),
     ("carbon dioxide", "air", 317.2, BAR, 0.177e-4, "permanent gases", POLING),
     ("helium", "air", 317.2, BAR, 0.765e-4, "permanent gases", POLING),
     # --- water and polar inorganic vapours ---
@@ -79,7 +93,10 @@ GAS_PAIRS: list[tuple[str, str, float, float, float, str, str]] = [
     ("water", "air", 298.0, ATM, 0.26e-4, "polar vapours", INCROPERA),
     ("ammonia", "air", 298.0, ATM, 0.28e-4, "polar vapours", INCROPERA),
     ("water", "air", 313.0, BAR, 0.292e-4, "polar vapours", POLING),
-    ("water", "nitrogen", 308.0, BAR, 0.259e-4, "polar vapours", POLING),
+    ("water", "nitrogen", 308.0, ATM, 0.259e-4, "polar vapours", BSL),
+    ("water", "oxygen", 352.0, ATM, 0.357e-4, "polar vapours", BSL),
+    ("ammonia", "nitrogen", 298.0, ATM, 0.233e-4, "polar vapours", BSL),
+    ("ammonia", "hydrogen", 263.0, ATM, 0.58e-4, "polar vapours", BSL),
     # --- organic vapours in air and hydrogen ---
     ("acetic acid", "air", 273.15, ATM, 0.1064e-4, "organic vapours", PERRY),
     ("acetone", "air", 273.15, ATM, 0.109e-4, "organic vapours", PERRY),
@@ -106,6 +123,22 @@ GAS_PAIRS: list[tuple[str, str, float, float, float, str, str]] = [
     ("ethanol", "air", 313.0, BAR, 0.145e-4, "organic vapours", POLING),
     ("n-hexane", "air", 328.0, BAR, 0.093e-4, "organic vapours", POLING),
     ("toluene", "air", 298.9, BAR, 0.086e-4, "organic vapours", POLING),
+    # --- hydrocarbon pairs ---
+    ("nitrogen", "ethane", 298.2, ATM, 0.148e-4, "hydrocarbon pairs", BSL),
+    ("nitrogen", "n-butane", 298.2, ATM, 0.0960e-4, "hydrocarbon pairs", BSL),
+    ("propane", "n-butane", 378.2, ATM, 0.0768e-4, "hydrocarbon pairs", BSL),
+    ("propane", "n-butane", 437.7, ATM, 0.107e-4, "hydrocarbon pairs", BSL),
+    ("propane", "isobutane", 298.0, ATM, 0.0439e-4, "hydrocarbon pairs", BSL),
+    ("propane", "isobutane", 378.2, ATM, 0.0823e-4, "hydrocarbon pairs", BSL),
+    ("propane", "isobutane", 437.8, ATM, 0.112e-4, "hydrocarbon pairs", BSL),
+    ("propane", "neopentane", 298.1, ATM, 0.0431e-4, "hydrocarbon pairs", BSL),
+    ("propane", "neopentane", 378.2, ATM, 0.0703e-4, "hydrocarbon pairs", BSL),
+    ("propane", "neopentane", 437.7, ATM, 0.0945e-4, "hydrocarbon pairs", BSL),
+    ("n-butane", "neopentane", 298.0, ATM, 0.0413e-4, "hydrocarbon pairs", BSL),
+    ("n-butane", "neopentane", 378.2, ATM, 0.0644e-4, "hydrocarbon pairs", BSL),
+    ("n-butane", "neopentane", 437.8, ATM, 0.0839e-4, "hydrocarbon pairs", BSL),
+    ("isobutane", "neopentane", 298.1, ATM, 0.0362e-4, "hydrocarbon pairs", BSL),
+    ("isobutane", "neopentane", 378.2, ATM, 0.0580e-4, "hydrocarbon pairs", BSL),
 ]
 
 #: Cussler, Diffusion: Mass Transfer in Fluid Systems, 3rd ed., Table 5.2-1 (dilute in water).
