@@ -11,8 +11,9 @@ Rows left out on purpose:
 
 * naphthalene-air (Incropera & DeWitt Table A.8, 300 K): published values differ by about 35 %
   between sources, which cannot test a 5 % method;
-* acetone in chloroform (Geankoplis Table 6.3-1): the liquid property model of chloroform does
-  not load yet, so the row cannot be computed;
+* acetone, benzene, ethanol, diethyl ether, ethyl acetate and MEK in chloroform, and six
+  solutes in ethyl acetate (Benitez Table A.2): the liquid property models of chloroform and
+  ethyl acetate do not load yet, so these rows cannot be computed;
 * methanol-air at 298 K (quoted beside a Fuller example in Coulson & Richardson Vol. 6): the
   number equals a Fuller estimate, not a measurement.
 """
@@ -37,6 +38,11 @@ INCROPERA = "Incropera & DeWitt, 6th ed., Table A.8, 1 atm (from memory)"
 #: ed.; hydrocarbon pairs from Gotoh et al. 1974).  Read from a reproduction of the page
 #: (digilib.universitaspertamina.ac.id, Transport Phenomena, page 537).
 BSL = "Bird, Stewart & Lightfoot 2nd ed. Table 17.1-1 (1 atm)"
+#: Welty, Wicks & Wilson, Fundamentals of Momentum, Heat and Mass Transfer, 3rd ed. (1984), as
+#: reprinted in Benitez, Principles and Modern Applications of Mass Transfer Operations, Appendix
+#: Table A.1, which lists D*P in m^2 Pa/s (divided here by 101325 Pa for D at 1 atm).  Read from a
+#: reproduction of the appendix (scribd.com document 379518623).
+WELTY = "Welty, Wicks & Wilson 3rd ed., via Benitez Table A.1 (D*P)"
 #: Poling, Prausnitz & O'Connell 5th ed. Table 11-2 lists D*P in bar cm^2/s: rows at P = 1 bar.
 POLING = "Poling et al. 5th ed. Table 11-2, D*P at 1 bar (from memory)"
 
@@ -123,6 +129,31 @@ GAS_PAIRS: list[tuple[str, str, float, float, float, str, str]] = [
     ("ethanol", "air", 313.0, BAR, 0.145e-4, "organic vapours", POLING),
     ("n-hexane", "air", 328.0, BAR, 0.093e-4, "organic vapours", POLING),
     ("toluene", "air", 298.9, BAR, 0.086e-4, "organic vapours", POLING),
+    ("benzene", "air", 298.0, ATM, 0.974 / ATM, "organic vapours", WELTY),
+    ("toluene", "air", 298.0, ATM, 0.855 / ATM, "organic vapours", WELTY),
+    ("ethanol", "air", 298.0, ATM, 1.337 / ATM, "organic vapours", WELTY),
+    ("methanol", "air", 298.0, ATM, 1.641 / ATM, "organic vapours", WELTY),
+    ("n-octane", "air", 298.0, ATM, 0.610 / ATM, "organic vapours", WELTY),
+    ("nitrobenzene", "air", 298.0, ATM, 0.879 / ATM, "organic vapours", WELTY),
+    ("n-propyl acetate", "air", 315.0, ATM, 0.932 / ATM, "organic vapours", WELTY),
+    ("diethyl ether", "air", 293.0, ATM, 0.908 / ATM, "organic vapours", WELTY),
+    ("ethanol", "carbon dioxide", 273.0, ATM, 0.702 / ATM, "organic vapours", WELTY),
+    ("benzene", "carbon dioxide", 318.0, ATM, 0.724 / ATM, "organic vapours", WELTY),
+    ("ethyl acetate", "carbon dioxide", 319.0, ATM, 0.675 / ATM, "organic vapours", WELTY),
+    ("benzene", "hydrogen", 273.0, ATM, 3.211 / ATM, "organic vapours", WELTY),
+    ("benzene", "oxygen", 296.0, ATM, 0.951 / ATM, "organic vapours", WELTY),
+    ("water", "air", 298.0, ATM, 2.634 / ATM, "polar vapours", WELTY),
+    ("water", "carbon dioxide", 298.0, ATM, 1.661 / ATM, "polar vapours", WELTY),
+    ("water", "oxygen", 308.1, ATM, 2.857 / ATM, "polar vapours", WELTY),
+    ("ammonia", "nitrogen", 293.0, ATM, 2.441 / ATM, "polar vapours", WELTY),
+    ("ammonia", "oxygen", 293.0, ATM, 2.563 / ATM, "polar vapours", WELTY),
+    ("sulfur dioxide", "air", 273.0, ATM, 1.236 / ATM, "polar vapours", WELTY),
+    ("carbon dioxide", "nitrogen", 298.0, ATM, 1.672 / ATM, "permanent gases", WELTY),
+    ("oxygen", "hydrogen", 273.0, ATM, 7.061 / ATM, "permanent gases", WELTY),
+    ("ethane", "hydrogen", 273.0, ATM, 4.447 / ATM, "permanent gases", WELTY),
+    ("methane", "hydrogen", 273.0, ATM, 6.331 / ATM, "permanent gases", WELTY),
+    ("propane", "carbon dioxide", 298.0, ATM, 0.874 / ATM, "permanent gases", WELTY),
+    ("ethylene", "nitrogen", 298.0, ATM, 1.651 / ATM, "permanent gases", WELTY),
     # --- hydrocarbon pairs ---
     ("nitrogen", "ethane", 298.2, ATM, 0.148e-4, "hydrocarbon pairs", BSL),
     ("nitrogen", "n-butane", 298.2, ATM, 0.0960e-4, "hydrocarbon pairs", BSL),
@@ -143,6 +174,9 @@ GAS_PAIRS: list[tuple[str, str, float, float, float, str, str]] = [
 
 #: Cussler, Diffusion: Mass Transfer in Fluid Systems, 3rd ed., Table 5.2-1 (dilute in water).
 CUSSLER = "Cussler 3rd ed. Table 5.2-1 (from memory)"
+#: Benitez, Principles and Modern Applications of Mass Transfer Operations, Appendix Table A.2
+#: (infinite dilution), read from a reproduction of the appendix (scribd.com document 379518623).
+BENITEZ = "Benitez, Appendix Table A.2"
 #: Geankoplis, Transport Processes and Separation Process Principles, 4th ed., Table 6.3-1.
 GEANKOPLIS = "Geankoplis 4th ed. Table 6.3-1, dilute (from memory)"
 
@@ -176,8 +210,12 @@ LIQUID_SYSTEMS: list[tuple[str, str, float, float, str, str]] = [
     ("ammonia", "water", 298.15, 1.64e-9, "gases in water", CUSSLER),
     ("hydrogen", "water", 298.15, 4.50e-9, "gases in water", CUSSLER),
     # --- solutes in organic solvents ---
-    ("acetic acid", "benzene", 298.15, 2.09e-9, "solutes in organic solvents", GEANKOPLIS),
-    ("benzoic acid", "benzene", 298.15, 1.38e-9, "solutes in organic solvents", GEANKOPLIS),
+    ("chlorine", "water", 298.0, 1.25e-9, "gases in water", BENITEZ),
+    # acetic acid and benzoic acid in benzene: the same values in Geankoplis (from memory)
+    ("acetic acid", "benzene", 298.0, 2.09e-9, "solutes in organic solvents", BENITEZ),
+    ("benzoic acid", "benzene", 298.0, 1.38e-9, "solutes in organic solvents", BENITEZ),
+    ("aniline", "benzene", 298.0, 1.96e-9, "solutes in organic solvents", BENITEZ),
+    ("bromobenzene", "benzene", 281.0, 1.45e-9, "solutes in organic solvents", BENITEZ),
     ("ethanol", "benzene", 288.15, 2.25e-9, "solutes in organic solvents", GEANKOPLIS),
     ("acetic acid", "acetone", 298.15, 3.31e-9, "solutes in organic solvents", GEANKOPLIS),
     ("water", "ethanol", 298.15, 1.132e-9, "solutes in organic solvents", GEANKOPLIS),
