@@ -79,9 +79,9 @@ _IDS = [f"{a}-{b}-{T:g}K-{P / 1e5:.2f}bar" for a, b, T, P, *_ in GAS_PAIRS]
 #: Largest deviation any single row may show, per method: about three times the method's
 #: published average error, leaving room for the scatter of measured data (the averages are held
 #: tighter below).  Chapman-Enskog's polar rows lie outside its class and warn; they are held to
-#: a slightly wider limit (nitrobenzene-air is 28 % low).  Fuller's limit is wider for one set: the light hydrocarbon pairs of Bird,
-#: Stewart & Lightfoot Table 17.1-1 (Gotoh et al. 1974) rise more steeply with T than T^1.75, and
-#: Fuller is 35 % high for propane-isobutane at 298 K.
+#: a slightly wider limit (nitrobenzene-air is 28 % low).  Fuller's limit is wider for one set:
+#: the light hydrocarbon pairs of Bird, Stewart & Lightfoot Table 17.1-1 (Gotoh et al. 1974) rise
+#: more steeply with T than T^1.75, and Fuller is 35 % high for propane-isobutane at 298 K.
 _ROW_LIMIT = {"fuller": 0.36, "chapman-enskog": 0.30, "wilke-lee": 0.26, "brokaw": 0.25}
 #: Average absolute deviation over the rows a method applies to.
 _AAD_LIMIT = {"fuller": 0.07, "chapman-enskog": 0.08, "wilke-lee": 0.08, "brokaw": 0.07}
