@@ -684,8 +684,9 @@ def mass_transfer_from_heat(
     phase : {'gas', 'liquid'}
         Phase of the carrier.
     diffusivity_method : str, optional
-        Method for the diffusivity (default: ``'fuller'`` for gases,
-        ``'wilke-chang'`` for liquids).
+        Method for the diffusivity (default: the pair's published recommendation, see
+        :func:`masstransfer.diffusivity.available_methods`); the result's ``method`` names it
+        with its stated accuracy.
     exponent : float
         Analogy exponent n [-] (2/3 for Chilton-Colburn).
     rho : float or callable, optional
@@ -740,9 +741,7 @@ def mass_transfer_from_heat(
     'mixture(air 0.97, water 0.03)'
 
     """
-    from ..diffusivity._common import normalise_method
-    from ..diffusivity._gas import GAS_METHODS
-    from ..diffusivity._liquid import LIQUID_METHODS, liquid_diffusivity
+    from ..diffusivity._liquid import liquid_diffusivity, ready_liquid
     from ..substances._properties import liquid_model
 
     if phase not in ("gas", "liquid"):
@@ -763,6 +762,7 @@ def mass_transfer_from_heat(
     k_v: FloatOrArray
     mu_v: FloatOrArray
     D_v: FloatOrArray
+    u_D: float | None
     with collect_warnings() as caught:
         if phase == "gas":
             side = gas_side(
@@ -783,7 +783,7 @@ def mass_transfer_from_heat(
                 side.thermal_conductivity(Tv),
                 side.viscosity(Tv),
             )
-            method = side.diffusivity_method
+            method, u_D = side.diffusivity_method, side.diffusivity_uncertainty
             D_v = side.diffusivity(Tv, Pv)
             M_carrier = side.molar_mass
         else:
@@ -806,12 +806,14 @@ def mass_transfer_from_heat(
             cp_v = value("cp", lambda: liquid_model(b).heat_capacity)
             k_v = value("k", lambda: liquid_model(b).thermal_conductivity)
             mu_v = value("mu", lambda: liquid_model(b).viscosity)
-            method = diffusivity_method or "wilke-chang"
             if over["D"] is None:
-                D_v = liquid_diffusivity(a, b, Tv, method=method)
+                record = ready_liquid(a, b, diffusivity_method).record  # the solvent's default when None
+                method = f"{record.name} (stated accuracy about {record.accuracy_pct:g} %)"
+                D_v = liquid_diffusivity(a, b, Tv, method=record.name, P=Pv)
+                u_D = stated_uncertainty(record)
             else:
                 D_v = over["D"](Tv)
-                method = "user-supplied"
+                method, u_D = "user-supplied", None
     for message, category in caught:
         warn_caller(message, category)
     r, c, kk, m, d = (np.asarray(x, dtype=float) for x in (rho_v, cp_v, k_v, mu_v, D_v))
@@ -829,15 +831,6 @@ def mass_transfer_from_heat(
     else:
         k_G = k_y = None
         k_x = finish(k_c * r / M_carrier)
-    # the diffusivity's stated accuracy: the named method's (also for a Blanc mixture of its
-    # binaries); unknown (None) for a diffusivity the user supplied
-    methods = GAS_METHODS if phase == "gas" else LIQUID_METHODS
-    base = diffusivity_method or ("fuller" if phase == "gas" else "wilke-chang")
-    u_D = (
-        None
-        if "D" in supplied
-        else stated_uncertainty(methods[normalise_method(base, methods, "diffusivity_method")])
-    )
     n_text = "2/3" if math.isclose(exponent, _TWO_THIRDS) else f"{exponent:g}"
     return TransferCoefficients(
         h=finish(np.asarray(hv, dtype=float)),
