@@ -656,6 +656,7 @@ def mass_transfer_from_heat(
     mu: Override = None,
     D: Override = None,
     h_uncertainty: ArrayLike = 0.0,
+    D_uncertainty: ArrayLike | None = None,
 ) -> TransferCoefficients:
     """Mass-transfer coefficients for a species from a known h, resolving properties.
 
@@ -695,6 +696,9 @@ def mass_transfer_from_heat(
     h_uncertainty : float or array_like
         Relative standard uncertainty of ``h`` [-] (0.10 for 10 %, one
         standard deviation); 0 by default.
+    D_uncertainty : float or array_like, optional
+        Relative standard uncertainty of the diffusivity [-]; by default the
+        diffusivity method's stated accuracy, and none for a ``D`` you supply.
 
     Returns
     -------
@@ -744,7 +748,10 @@ def mass_transfer_from_heat(
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
     u_h = relative_input("h_uncertainty", h_uncertainty)
-    check_shapes(h=hv, T=Tv, P=Pv, h_uncertainty=u_h)
+    u_D_given = None if D_uncertainty is None else relative_input("D_uncertainty", D_uncertainty)
+    check_shapes(
+        h=hv, T=Tv, P=Pv, h_uncertainty=u_h, **({} if u_D_given is None else {"D_uncertainty": u_D_given})
+    )
     a = species(solute)
     if phase == "liquid" and is_composition(carrier):
         raise InputValueError(
@@ -823,8 +830,13 @@ def mass_transfer_from_heat(
     else:
         k_G = k_y = None
         k_x = finish(k_c * r / M_carrier)
-    methods = GAS_METHODS if phase == "gas" else LIQUID_METHODS
-    u_D = stated_uncertainty(methods[normalise_method(method, methods, "diffusivity_method")])
+    # the user's D_uncertainty; else none for the user's own D; else the binary method's stated
+    # accuracy (also for Blanc's law over a mixture, whose error is that of the binaries)
+    u_D: FloatOrArray | None = u_D_given
+    if u_D is None and "D" not in supplied:
+        methods = GAS_METHODS if phase == "gas" else LIQUID_METHODS
+        base = diffusivity_method or ("fuller" if phase == "gas" else "wilke-chang")
+        u_D = stated_uncertainty(methods[normalise_method(base, methods, "diffusivity_method")])
     n_text = "2/3" if math.isclose(exponent, _TWO_THIRDS) else f"{exponent:g}"
     return TransferCoefficients(
         h=finish(np.asarray(hv, dtype=float)),
