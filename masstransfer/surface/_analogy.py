@@ -663,6 +663,7 @@ def mass_transfer_from_heat(
     mu: Override = None,
     D: Override = None,
     h_uncertainty: ArrayLike = 0.0,
+    D_uncertainty: ArrayLike | None = None,
 ) -> TransferCoefficients:
     """Mass-transfer coefficients for a species from a known h, resolving properties.
 
@@ -703,6 +704,9 @@ def mass_transfer_from_heat(
     h_uncertainty : float or array_like
         Relative standard uncertainty of ``h`` [-] (0.10 for 10 %, one
         standard deviation); 0 by default.
+    D_uncertainty : float or array_like, optional
+        Relative standard uncertainty of the diffusivity [-]; by default the
+        diffusivity method's stated accuracy, and none for a ``D`` you supply.
 
     Returns
     -------
@@ -750,7 +754,10 @@ def mass_transfer_from_heat(
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
     u_h = relative_input("h_uncertainty", h_uncertainty)
-    check_shapes(h=hv, T=Tv, P=Pv, h_uncertainty=u_h)
+    u_D_given = None if D_uncertainty is None else relative_input("D_uncertainty", D_uncertainty)
+    check_shapes(
+        h=hv, T=Tv, P=Pv, h_uncertainty=u_h, **({} if u_D_given is None else {"D_uncertainty": u_D_given})
+    )
     a = species(solute)
     if phase == "liquid" and is_composition(carrier):
         raise InputValueError(
@@ -762,7 +769,7 @@ def mass_transfer_from_heat(
     k_v: FloatOrArray
     mu_v: FloatOrArray
     D_v: FloatOrArray
-    u_D: float | None
+    u_D: FloatOrArray | None
     with collect_warnings() as caught:
         if phase == "gas":
             side = gas_side(
@@ -831,6 +838,8 @@ def mass_transfer_from_heat(
     else:
         k_G = k_y = None
         k_x = finish(k_c * r / M_carrier)
+    if u_D_given is not None:  # the user's D_uncertainty replaces the method's stated accuracy
+        u_D = u_D_given
     n_text = "2/3" if math.isclose(exponent, _TWO_THIRDS) else f"{exponent:g}"
     return TransferCoefficients(
         h=finish(np.asarray(hv, dtype=float)),
