@@ -9,6 +9,7 @@ else lives in one subpackage each, with one public path per function:
 ``surface``      dimensionless groups, the correlation catalogue, analogies, conventions, fluxes
 ``bodies``       transient uptake and release, barriers, permeability units
 ``testing``      hypothesis strategies and invariant checks for downstream tests
+``sweep``        design-space grids evaluated block by block on dask (optional ``dask`` extra)
 ``constants``    the physical constants the library uses
 ``errors``       the whole error and warning family
 
@@ -33,13 +34,13 @@ from .surface._analogy import TransferCoefficients, mass_transfer_from_heat
 from .surface._wet_surface import wet_bulb_temperature, wet_surface_temperature
 
 if TYPE_CHECKING:
-    from . import bodies, testing
+    from . import bodies, sweep, testing
 
-_LAZY = frozenset({"bodies", "testing"})
+_LAZY = frozenset({"bodies", "sweep", "testing"})
 
 
 def __getattr__(name: str) -> object:
-    """Import ``bodies`` (scipy) and ``testing`` (hypothesis) on first use."""
+    """Import ``bodies`` (scipy), ``sweep`` (dask) and ``testing`` (hypothesis) on first use."""
     if name in _LAZY:
         return importlib.import_module(f".{name}", __name__)
     raise AttributeError(f"module {__name__!r} has no attribute {name!r}")
@@ -71,6 +72,7 @@ __all__ = [
     "species",
     "substances",
     "surface",
+    "sweep",
     "testing",
     "wet_bulb_temperature",
     "wet_surface_temperature",

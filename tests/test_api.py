@@ -9,7 +9,7 @@ import sys
 
 import masstransfer as mt
 
-SUBPACKAGES = ("substances", "diffusivity", "surface", "bodies", "testing", "constants", "errors")
+SUBPACKAGES = ("substances", "diffusivity", "surface", "bodies", "testing", "sweep", "constants", "errors")
 
 
 def _public_paths() -> dict[int, list[str]]:

@@ -23,7 +23,16 @@ import numpy as np
 
 from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, scalar, warn_caller
+from .._validation import (
+    check_nonnegative,
+    check_positive,
+    check_shapes,
+    dask_blocks,
+    finish,
+    guard,
+    scalar,
+    warn_caller,
+)
 from ..constants import DEBYE
 from ..errors import EnvelopeWarning, InputValueError, MissingConstantError
 from ..substances._species import Species, species
@@ -601,7 +610,7 @@ def brokaw(
     return _kinetic(Tv, Pv, 0.00266, _m_ab(float(Ma), float(Mb)), s_ab, e_ab, d2)
 
 
-@guard
+@guard(elementwise=False)  # sums over the components (last axis)
 def blanc(D_binary: ArrayLike, mole_fractions: ArrayLike) -> FloatOrArray:
     """Diffusivity of a dilute solute in a gas mixture by Blanc's law.
 
@@ -857,6 +866,8 @@ def gas_diffusivity(
     prepared = _prepare(m, solute, carrier)
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
+    if not isinstance(Tv, float | np.ndarray) or not isinstance(Pv, float | np.ndarray):
+        return dask_blocks(gas_diffusivity, solute, carrier, T, P, method)  # lazy, block by block
     if m == "fuller" and isinstance(Tv, float) and isinstance(Pv, float):  # scalar fast path
         if Pv > LOW_PRESSURE_LIMIT:
             _warn_pressure(Pv, "gas_diffusivity(method='fuller')")

@@ -13,6 +13,7 @@ groups used, and the warnings raised.
 
 from __future__ import annotations
 
+import functools
 import math
 import warnings
 from dataclasses import dataclass
@@ -20,6 +21,7 @@ from typing import Literal, overload
 
 import numpy as np
 
+from .._blocks import blocked_shape, blockwise
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import R_GAS
@@ -647,6 +649,17 @@ def mass_transfer_from_heat(
     Pv = check_positive("P", P)
     check_shapes(h=hv, T=Tv, P=Pv)
     a, b = species(solute), species(carrier)
+    shape = blocked_shape(hv, Tv, Pv)
+    if shape is not None:  # long arrays: the same chain over cache-sized blocks (flat cost per state)
+        chain = functools.partial(
+            mass_transfer_from_heat,
+            solute=a,
+            carrier=b,
+            phase=phase,
+            diffusivity_method=diffusivity_method,
+            exponent=exponent,
+        )
+        return blockwise(chain, {"h": hv, "T": Tv, "P": Pv}, shape)
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
         if phase == "gas":
