@@ -30,6 +30,7 @@ from .._validation import (
     check_nonnegative,
     check_positive,
     check_shapes,
+    dask_blocks,
     finish,
     guard,
     has_quantity,
@@ -647,7 +648,7 @@ def brokaw(
     return _kinetic(Tv, Pv, 0.00266, _m_ab(float(Ma), float(Mb)), s_ab, e_ab, d2)
 
 
-@guard
+@guard(elementwise=False)  # sums over the components (last axis)
 def blanc(D_binary: ArrayLike, mole_fractions: ArrayLike) -> FloatOrArray:
     """Diffusivity of a dilute solute in a gas mixture by Blanc's law.
 
@@ -1240,6 +1241,8 @@ def gas_diffusivity(
         r = _ready(method, solute, medium)
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
+    if not isinstance(Tv, float | np.ndarray) or not isinstance(Pv, float | np.ndarray):
+        return dask_blocks(gas_diffusivity, solute, medium, T, P, method)  # lazy, block by block
     if isinstance(Tv, float) and isinstance(Pv, float):  # scalar fast path: checks only when needed
         if Tv < r.Tc or Pv > LOW_PRESSURE_LIMIT or not r.T_lo <= Tv <= r.T_hi or r.cautions:
             _slow_checks(r, Tv, Pv)

@@ -13,6 +13,7 @@ groups used, and the warnings raised.
 
 from __future__ import annotations
 
+import functools
 import math
 from collections.abc import Callable, Mapping
 from dataclasses import dataclass
@@ -20,6 +21,7 @@ from typing import Any, Literal, overload
 
 import numpy as np
 
+from .._blocks import blocked_shape, blockwise
 from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._uncertainty import combine, relative_input, stated_uncertainty
@@ -764,6 +766,26 @@ def mass_transfer_from_heat(
             f"carrier={dict(carrier)!r}: a composition is accepted for a gas carrier only; for a "  # type: ignore[arg-type]
             "liquid pass one solvent (and its mixture properties as rho=, cp=, k=, mu=, D=)"
         )
+    shape = blocked_shape(hv, Tv, Pv)
+    overrides: dict[str, Any] = {"rho": rho, "cp": cp, "k": k, "mu": mu, "D": D}
+    if (
+        shape is not None
+        and np.ndim(u_h) == 0
+        and (u_D_given is None or not isinstance(u_D_given, np.ndarray) or u_D_given.ndim == 0)
+        and all(v is None or callable(v) or np.ndim(v) == 0 for v in overrides.values())
+    ):  # long arrays: the same chain over cache-sized blocks (flat cost per state)
+        chain = functools.partial(
+            mass_transfer_from_heat,
+            solute=a,
+            carrier=carrier,
+            phase=phase,
+            diffusivity_method=diffusivity_method,
+            exponent=exponent,
+            h_uncertainty=u_h,
+            D_uncertainty=D_uncertainty,
+            **overrides,
+        )
+        return blockwise(chain, {"h": hv, "T": Tv, "P": Pv}, shape)
     rho_v: FloatOrArray
     cp_v: FloatOrArray
     k_v: FloatOrArray
