@@ -824,7 +824,11 @@ def mass_transfer_from_heat(
         k_G = k_y = None
         k_x = finish(k_c * r / M_carrier)
     methods = GAS_METHODS if phase == "gas" else LIQUID_METHODS
-    u_D = stated_uncertainty(methods[normalise_method(method, methods, "diffusivity_method")])
+    if "D" in supplied:
+        u_D = None  # the user's own diffusivity: its uncertainty is the user's to state
+    else:
+        key = diffusivity_method or ("fuller" if phase == "gas" else "wilke-chang")
+        u_D = stated_uncertainty(methods[normalise_method(key, methods, "diffusivity_method")])
     n_text = "2/3" if math.isclose(exponent, _TWO_THIRDS) else f"{exponent:g}"
     return TransferCoefficients(
         h=finish(np.asarray(hv, dtype=float)),
