@@ -9,6 +9,6 @@ functions, on first use.  The entry points :func:`masstransfer.species`,
 from __future__ import annotations
 
 from ._properties import INTERPOLATION_RTOL, PropertyCurve, henry_constant, parachor
-from ._species import le_bas_volume
+from ._species import Origin, le_bas_volume
 
-__all__ = ["INTERPOLATION_RTOL", "PropertyCurve", "henry_constant", "le_bas_volume", "parachor"]
+__all__ = ["INTERPOLATION_RTOL", "Origin", "PropertyCurve", "henry_constant", "le_bas_volume", "parachor"]

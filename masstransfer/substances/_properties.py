@@ -246,7 +246,6 @@ class LiquidModel:
     cp_molar: PropertyCurve
     psat: PropertyCurve | None = None
     hvap: PropertyCurve | None = None
-    sigma: PropertyCurve | None = None
 
     @property
     def T_min(self) -> float:
@@ -292,8 +291,8 @@ class LiquidModel:
 
     @guard
     def surface_tension(self, T: ArrayLike) -> FloatOrArray:
-        """Surface tension against its vapour or air [N/m] at ``T`` [K]."""
-        return self._need(self.sigma, "surface tension")(T)
+        """Surface tension against its vapour or air [N/m] at ``T`` [K] (built on first use)."""
+        return self._need(_surface_tension(self.species), "surface tension")(T)
 
     def _need(self, curve: PropertyCurve | None, what: str) -> PropertyCurve:
         if curve is None:
@@ -483,13 +482,10 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
         CASRN=kw["CASRN"], MW=kw["MW"], Tm=sp.Tm, Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, omega=sp.omega
     )
     cp = HeatCapacityLiquid(CASRN=kw["CASRN"], MW=kw["MW"], Tc=sp.Tc, omega=sp.omega)
-    from thermo import EnthalpyVaporization, SurfaceTension, VaporPressure
+    from thermo import EnthalpyVaporization, VaporPressure
 
     vp = VaporPressure(CASRN=kw["CASRN"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, omega=sp.omega)
     hv = EnthalpyVaporization(CASRN=kw["CASRN"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, omega=sp.omega)
-    st = SurfaceTension(
-        CASRN=kw["CASRN"], MW=kw["MW"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc, omega=sp.omega
-    )
     name = f"liquid {sp.name}"
     T_hv_high = T_high if not math.isfinite(T_high) else T_high * 0.995  # Hvap -> 0 at Tc
     return LiquidModel(
@@ -500,15 +496,28 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
         cp_molar=_thermo_curve(cp, f"heat capacity of {name}", "J/(mol K)", 1.0, T_low, T_high),
         psat=_optional_curve(vp, f"vapour pressure of {name}", "Pa", T_low, T_high),
         hvap=_optional_curve(hv, f"enthalpy of vaporisation of {name}", "J/mol", T_low, T_hv_high),
-        sigma=_surface_tension_curve(st, name, T_low, T_high),
     )
 
 
-def _surface_tension_curve(prop: Any, name: str, T_low: float, T_high: float) -> PropertyCurve | None:
-    """Surface tension up to 0.9 Tc (it vanishes at Tc, where its logarithm cannot be interpolated)."""
+@functools.lru_cache(maxsize=64)
+def _surface_tension(sp: Species) -> PropertyCurve | None:
+    """Surface tension up to 0.9 Tc (it vanishes at Tc, where its logarithm cannot be interpolated).
+
+    Built on first use only: the liquid models most callers need do not load its tables.
+    """
+    if not sp.CAS:
+        return None
+    from thermo import SurfaceTension
+
+    kw = _thermo_kwargs(sp)
+    T_low = sp.Tm if sp.Tm is not None else 0.0
+    T_high = sp.Tc if sp.Tc is not None else math.inf
     top = T_high if not math.isfinite(T_high) else T_low + 0.9 * (T_high - T_low)
-    with np.errstate(over="ignore", under="ignore", invalid="ignore", divide="ignore"):
-        return _optional_curve(prop, f"surface tension of {name}", "N/m", T_low, top)
+    with quiet(), np.errstate(over="ignore", under="ignore", invalid="ignore", divide="ignore"):
+        st = SurfaceTension(
+            CASRN=kw["CASRN"], MW=kw["MW"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc, omega=sp.omega
+        )
+        return _optional_curve(st, f"surface tension of liquid {sp.name}", "N/m", T_low, top)
 
 
 def _optional_curve(prop: Any, quantity: str, unit: str, T_low: float, T_high: float) -> PropertyCurve | None:

@@ -15,6 +15,7 @@ they are imported on first use, so ``import masstransfer`` stays light.
 from __future__ import annotations
 
 import dataclasses
+import enum
 import functools
 import math
 import re
@@ -29,7 +30,7 @@ from ..errors import InputTypeError, InputValueError, MissingConstantError, Unkn
 from ._databases import quiet
 from ._structure import Molecule, parse_smiles
 
-__all__ = ["Species", "le_bas_volume", "species"]
+__all__ = ["Origin", "Species", "le_bas_volume", "species"]
 
 
 _CAS_PATTERN = re.compile(r"\d{2,7}-\d{2}-\d")
@@ -52,6 +53,19 @@ _FLOAT_FIELDS = (
     "fuller_volume",
     "parachor",
 )
+_CONSTANT_FIELDS = (*_FLOAT_FIELDS, "omega", "dipole")
+
+
+class Origin(enum.Enum):
+    """Where a constant of a :class:`Species` came from.
+
+    Methods decide by this typed field, never by the free text of ``Species.sources``.
+    """
+
+    DATABASE = "database"  #: a data-table or fitted-model value from chemicals/thermo
+    TABULATED = "tabulated"  #: a published table of this very constant (e.g. Svehla's LJ values)
+    ESTIMATED = "estimated"  #: computed from other constants by a correlation or group method
+    USER = "user"  #: given by the caller
 
 
 @dataclass(frozen=True)
@@ -100,7 +114,11 @@ class Species:
         Parachor [N^0.25 m^2.75/mol]; multiply by 5.623413e6 for the
         tabulated cm-g-s form.  Computed from ``thermo`` when omitted.
     sources : mapping of str to str, optional
-        Where each constant came from (filled in by :func:`species`).
+        Where each constant came from, in words (filled in by :func:`species`).
+    origins : mapping of str to Origin, optional
+        Where each constant came from, typed; a constant given without one is
+        :attr:`Origin.USER`.  Part of equality, so cached results never mix
+        a tabulated constant with an equal user-supplied one.
 
     Examples
     --------
@@ -129,6 +147,7 @@ class Species:
     fuller_volume: float | None = None
     parachor: float | None = None
     sources: Mapping[str, str] = field(default_factory=dict, compare=False, hash=False)
+    origins: Mapping[str, Origin] = field(default_factory=dict, hash=False)
 
     def __post_init__(self) -> None:
         if not isinstance(self.name, str):
@@ -191,6 +210,9 @@ class Species:
             object.__setattr__(self, "atoms", dict(counts))
         object.__setattr__(self, "atoms", dict(self.atoms))
         object.__setattr__(self, "sources", dict(self.sources))
+        given = dict(self.origins)
+        origins = {n: given.get(n, Origin.USER) for n in _CONSTANT_FIELDS if getattr(self, n) is not None}
+        object.__setattr__(self, "origins", origins)
 
     @property
     def molecule(self) -> Molecule | None:
@@ -206,16 +228,18 @@ class Species:
             raise MissingConstantError(
                 f"species {self.name!r} has no {name}, which the {method} method needs; "
                 f"use another method, or supply it: "
-                f"dataclasses.replace(masstransfer.species({self.name!r}), {name}=...)"
+                f"masstransfer.species({self.name!r}).replace({name}=...)"
             )
         return float(value)
 
     def replace(self, **changes: Any) -> Species:
         """Return a copy with some constants changed (marked as user-supplied)."""
         sources = dict(self.sources)
+        origins = dict(self.origins)
         for key in changes:
             sources[key] = "user"
-        return dataclasses.replace(self, sources=sources, **changes)
+            origins[key] = Origin.USER
+        return dataclasses.replace(self, sources=sources, origins=origins, **changes)
 
 
 @functools.lru_cache(maxsize=256)
@@ -442,6 +466,7 @@ def _air() -> Species:
             **dict.fromkeys(("molar_mass", "Tb", "Tc", "Pc", "omega", "sigma", "epsilon_k", "Vb"), src),
             "fuller_volume": "Fuller et al. (1969) special-molecule volume",
         },
+        origins=dict.fromkeys(_CONSTANT_FIELDS, Origin.TABULATED),
     )
 
 
@@ -490,12 +515,10 @@ def _from_chemicals(meta: Any) -> Species:
     except Exception:
         dipole = None
     if dipole is not None:
-        src["dipole"] = "chemicals"
-        if dipole == 0.0:
-            dipole = None  # stored as None; polar methods treat None as 0
-            src["dipole"] = "chemicals (zero)"
+        src["dipole"] = "chemicals"  # zero is kept as zero: None means unknown
 
-    eps, sig_a = _lennard_jones(cas, Tc, Pc, omega, src)
+    org: dict[str, Origin] = {}
+    eps, sig_a = _lennard_jones(cas, Tc, Pc, omega, src, org)
     sigma = None if sig_a is None else sig_a * 1e-10
 
     formula = meta.formula
@@ -514,12 +537,14 @@ def _from_chemicals(meta: Any) -> Species:
         try:
             Vb = le_bas_volume(atoms, smiles)
             src["Vb"] = "Le Bas additive volumes"
+            org["Vb"] = Origin.ESTIMATED
         except MissingConstantError:
             Vb = None
 
     fuller_v = data.FULLER_SPECIAL_VOLUMES.get(cas)
     if fuller_v is not None:
         src["fuller_volume"] = "Fuller et al. (1969) special-molecule volume"
+        org["fuller_volume"] = Origin.TABULATED
 
     return Species(
         name=str(meta.common_name or cas),
@@ -540,6 +565,7 @@ def _from_chemicals(meta: Any) -> Species:
         Vb=Vb,
         fuller_volume=fuller_v,
         sources=src,
+        origins={**dict.fromkeys(src, Origin.DATABASE), **org},
     )
 
 
@@ -549,7 +575,12 @@ _LJ_SIG_CSP = "Tee, Gotoh, and Stewart CSP with Tc, Pc, omega (1966)"
 
 
 def _lennard_jones(
-    cas: str, Tc: float | None, Pc: float | None, omega: float | None, src: dict[str, str]
+    cas: str,
+    Tc: float | None,
+    Pc: float | None,
+    omega: float | None,
+    src: dict[str, str],
+    org: dict[str, Origin] | None = None,
 ) -> tuple[float | None, float | None]:
     """Lennard-Jones (epsilon/k [K], sigma [angstrom]) for Chapman-Enskog use.
 
@@ -569,6 +600,8 @@ def _lennard_jones(
         eps = sig = None
     if eps is not None and sig is not None:
         src["epsilon_k"] = src["sigma"] = "chemicals: " + _LJ_TABLE + " (Svehla 1962)"
+        if org is not None:
+            org["epsilon_k"] = org["sigma"] = Origin.TABULATED
         return eps, sig
     if Tc is None or Pc is None or omega is None:
         return None, None
@@ -580,6 +613,8 @@ def _lennard_jones(
     if eps is None or sig is None:
         return None, None
     src["epsilon_k"] = src["sigma"] = "chemicals: estimated, " + _LJ_SIG_CSP
+    if org is not None:
+        org["epsilon_k"] = org["sigma"] = Origin.ESTIMATED
     return eps, sig
 
 
