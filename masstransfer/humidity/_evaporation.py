@@ -136,9 +136,12 @@ class EvaporationResult:
 
 
 def _identity(sp: Species) -> str:
-    cas = sp.CAS or "no CAS"
-    formula = sp.formula or "no formula"
-    return f"{sp.name} (CAS {cas}, {formula}, M = {sp.molar_mass * 1000.0:.3f} g/mol)"
+    parts = [f"CAS {sp.CAS}"] if sp.CAS else []
+    if sp.formula:
+        parts.append(sp.formula)
+    if not parts:
+        parts.append("a mixture or hand-built species, no CAS number")
+    return f"{sp.name} ({', '.join(parts)}, M = {sp.molar_mass * 1000.0:.3f} g/mol)"
 
 
 def _gas_identity(pair: Pair, gas: Any) -> str:
