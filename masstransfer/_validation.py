@@ -275,7 +275,9 @@ def warn_caller(message: str, category: type[Warning]) -> None:
         frame.f_lineno,
         module=frame.f_globals.get("__name__"),
         registry=registry,
-        module_globals=frame.f_globals,
+        # only a module loaded from a file can lend its source line; under `python -c` the
+        # __main__ module's loader is the built-in importer, which cannot, and raises
+        module_globals=frame.f_globals if "__file__" in frame.f_globals else None,
     )
 
 
