@@ -68,11 +68,11 @@ def register(sub: Any) -> None:
         help="also print the constants with their sources and every rule applied",
     )
     d.add_argument("--json", action="store_true", help="print JSON instead of a table")
-    d.set_defaults(handler=run)
 
 
 def run(args: argparse.Namespace) -> str:
     """Compute and format the diffusivity for the parsed arguments."""
+    from . import _cli_units
     from .diffusivity._report import diffusivity_report
     from .errors import OutOfRangeError
 
@@ -102,6 +102,7 @@ def run(args: argparse.Namespace) -> str:
                 "P_Pa": args.pressure if report.phase == "gas" else None,
                 "T_K": T.tolist(),
                 "D_m2_per_s": D.tolist(),
+                "relative_uncertainty": report.relative_uncertainty,
                 "notes": list(report.notes),
                 "warnings": list(report.warnings),
             },
@@ -112,15 +113,22 @@ def run(args: argparse.Namespace) -> str:
     lines = [
         f"Diffusivity of {report.solute} in {report.medium} ({where})",
         f"phase: {report.phase} ({how})",
-        f"method: {report.method}; stated accuracy {report.accuracy_pct:g} % ({report.accuracy})",
+        f"method: {report.method}; stated accuracy "
+        + ("not stated" if report.accuracy_pct is None else f"{report.accuracy_pct:g} %")
+        + f" ({report.accuracy})",
     ]
-    widths = (8, 12, 12)
-    header = ["T [K]", "D [m^2/s]", "D [cm^2/s]"]
+    u = report.relative_uncertainty
+    header, rows = _cli_units.convert_table(
+        ["T [K]", "D [m^2/s]", "D [cm^2/s]"],
+        [
+            [f"{t:.2f}", _cli_units.plus_minus(d, u), _cli_units.plus_minus(d * 1e4, u)]
+            for t, d in zip(T, D, strict=True)
+        ],
+    )
+    widths = [max(len(h), *(len(r[i]) for r in rows)) for i, h in enumerate(header)]
     row = "  ".join(h.rjust(w) for h, w in zip(header, widths, strict=True))
     lines += [row, "-" * len(row)]
-    for t, d in zip(T, D, strict=True):
-        cells = [f"{t:.2f}", f"{d:.4e}", f"{d * 1e4:.4e}"]
-        lines.append("  ".join(c.rjust(w) for c, w in zip(cells, widths, strict=True)))
+    lines += ["  ".join(c.rjust(w) for c, w in zip(r, widths, strict=True)) for r in rows]
     if args.explain:
         lines += ["", report.summary()]
     else:

@@ -19,6 +19,7 @@ __all__ = [
     "MissingConstantError",
     "MissingDependencyError",
     "OutOfRangeError",
+    "UnitError",
     "UnknownMethodError",
     "UnknownSpeciesError",
 ]
@@ -74,3 +75,11 @@ class MassTransferWarning(UserWarning):
 
 class EnvelopeWarning(MassTransferWarning):
     """An input lies outside the range over which a method was validated."""
+
+
+class UnitError(InputTypeError):
+    """A physical quantity (pint) has a unit that cannot be converted to the one the argument takes.
+
+    Also raised for a quantity passed where the argument takes no unit.  Both a
+    :class:`MassTransferError` and a ``TypeError`` (as pint's own dimensionality error is).
+    """

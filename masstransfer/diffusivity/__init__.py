@@ -45,12 +45,13 @@ from ._records import (
     SpeciesClass,
     classify,
 )
-from ._solid import arrhenius_diffusivity, arrhenius_parameters
+from ._solid import ArrheniusFit, arrhenius_diffusivity, arrhenius_parameters
 
 __all__ = [
     "GAS_DEFAULT",
     "GAS_METHODS",
     "LIQUID_METHODS",
+    "ArrheniusFit",
     "ClassRule",
     "ConstantUsed",
     "DiffusivityMethod",

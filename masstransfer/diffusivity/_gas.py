@@ -25,7 +25,17 @@ import numpy as np
 
 from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, scalar, warn_caller
+from .._validation import (
+    call_with_quantities,
+    check_nonnegative,
+    check_positive,
+    check_shapes,
+    finish,
+    guard,
+    has_quantity,
+    scalar,
+    warn_caller,
+)
 from ..constants import DEBYE
 from ..errors import EnvelopeWarning, InputValueError, MissingConstantError
 from ..substances._species import Origin, Species, species
@@ -1205,6 +1215,8 @@ def gas_diffusivity(
     0.361
 
     """
+    if (type(T) is not float or type(P) is not float) and has_quantity((T, P), {}):  # pint: units
+        return call_with_quantities(gas_diffusivity, (solute, medium, T, P, method), {})
     try:
         r = _READY[(method, solute, medium)]
     except (KeyError, TypeError):
@@ -1341,6 +1353,12 @@ def gas_diffusivity_in_mixture(
         )
     names = list(carrier)
     y = [float(carrier[n]) for n in names]  # type: ignore[index]
-    Ds = [np.asarray(gas_diffusivity(solute, n, T, P, method)) for n in names]
+    total = sum(y)
+    # each binary at the component's partial pressure, scaled back to P (D*P is constant at low
+    # pressure), so the phase check asks whether each component is a vapour at its own share
+    Ds = [
+        np.asarray(gas_diffusivity(solute, n, T, np.asarray(P) * (yi / total), method)) * (yi / total)
+        for n, yi in zip(names, y, strict=True)
+    ]
     stacked = np.stack(np.broadcast_arrays(*Ds), axis=-1)
     return blanc(stacked, y)

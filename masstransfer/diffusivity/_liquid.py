@@ -22,6 +22,7 @@ from typing import Final, overload
 import numpy as np
 
 from .. import _tables as data
+from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import AVOGADRO, BOLTZMANN
@@ -472,8 +473,8 @@ def stokes_einstein(
 # --------------------------------------------------------------------------
 
 
-@dataclass(frozen=True)
-class LiquidDiffusivityInputs:
+@dataclass(frozen=True, eq=False)
+class LiquidDiffusivityInputs(FrozenResult):
     """The constants :func:`liquid_diffusivity` used, after special cases.
 
     Attributes
@@ -740,9 +741,9 @@ LIQUID_METHODS: Final[Mapping[str, DiffusivityMethod]] = MappingProxyType(
                 title="Stokes-Einstein",
                 function=stokes_einstein,
                 constants=("Vb",),
-                accuracy_pct=20.0,
-                accuracy="for spheres much larger than the solvent molecules (particles, "
-                "macromolecules); under-predicts small molecules, often by a factor of two "
+                accuracy_pct=None,
+                accuracy="no number stated: exact for spheres much larger than the solvent molecules "
+                "(particles, macromolecules); under-predicts small molecules, often by a factor of two "
                 "(Poling et al. 2001, Section 11-9, from memory)",
                 reference="Einstein (1905), Ann. Phys. 17, 549; https://doi.org/10.1002/andp.19053220806",
                 scope="large spherical solutes and particles (radius above about 1 nm)",

@@ -4,12 +4,13 @@ from __future__ import annotations
 
 from collections.abc import Mapping
 from dataclasses import dataclass
-from types import MappingProxyType
 from typing import Literal
 
 import numpy as np
 
+from .._frozen import FrozenMapping, FrozenResult
 from .._typing import ArrayLike, FloatOrArray
+from .._uncertainty import stated_uncertainty
 from .._validation import check_positive, collect_warnings, guard
 from ..errors import InputValueError
 from ..substances._species import Species, species
@@ -20,8 +21,12 @@ from ._phase import medium_state, phase_limits
 __all__ = ["DiffusivityReport", "diffusivity_report", "infer_phase"]
 
 
-@dataclass(frozen=True)
-class DiffusivityReport:
+def _pct(value: float | None) -> str:
+    return "not stated" if value is None else f"{value:g} %"
+
+
+@dataclass(frozen=True, eq=False)
+class DiffusivityReport(FrozenResult):
     """A diffusivity and what it rests on.
 
     Attributes
@@ -36,8 +41,9 @@ class DiffusivityReport:
         Pressure [Pa] (gas phase).
     accuracy : str
         The typical error the method's sources report, with the source.
-    accuracy_pct : float
-        That average absolute deviation as a number [%], for a calculation note.
+    accuracy_pct : float or None
+        That average absolute deviation as a number [%], for a calculation note (None where
+        the method's sources state no number).
     reference : str
         The method's primary reference.
     constants : mapping
@@ -47,6 +53,11 @@ class DiffusivityReport:
         were chosen.
     warnings : tuple of str
         Envelope warnings raised by the computation.
+    relative_uncertainty : float or None
+        Relative standard uncertainty of ``value`` [-] (one standard deviation,
+        as a fraction), from the method's stated accuracy: an average absolute
+        deviation times sqrt(pi/2), about 1.25 (normal errors); None where the
+        method states no number.
 
     """
 
@@ -58,11 +69,12 @@ class DiffusivityReport:
     T: FloatOrArray
     P: FloatOrArray | None
     accuracy: str
-    accuracy_pct: float
+    accuracy_pct: float | None
     reference: str
     constants: Mapping[str, Mapping[str, tuple[float | None, str]]]
     notes: tuple[str, ...]
     warnings: tuple[str, ...]
+    relative_uncertainty: float | None = None
 
     def summary(self) -> str:
         """Render a short plain-text statement for a calculation note.
@@ -87,8 +99,13 @@ class DiffusivityReport:
         shown = f"{v[0]:.4g} m^2/s" if v.size == 1 else f"{v.min():.4g} to {v.max():.4g} m^2/s"
         lines = [
             f"D({self.solute} in {self.medium}, {self.phase}) = {shown}",
-            f"method: {self.method} (stated accuracy {self.accuracy_pct:g} %: {self.accuracy})",
+            f"method: {self.method} (stated accuracy {_pct(self.accuracy_pct)}: {self.accuracy})",
             f"reference: {self.reference}",
+            *(
+                []
+                if self.relative_uncertainty is None
+                else [f"relative standard uncertainty: ±{100 * self.relative_uncertainty:.1f} % (1 sigma)"]
+            ),
             "constants used (SI units) and their sources:",
         ]
         for who, consts in self.constants.items():
@@ -154,7 +171,10 @@ def diffusivity_report(
     Notes
     -----
     Same numbers as :func:`gas_diffusivity` and :func:`liquid_diffusivity`, read from the same
-    method records; the report is what a calculation note needs to defend them.
+    method records; the report is what a calculation note needs to defend them.  Its
+    ``relative_uncertainty`` is the method's stated average absolute deviation (its record's
+    ``accuracy_pct``) taken as a standard uncertainty (times sqrt(pi/2), normal errors; Geary
+    1935).
 
     References
     ----------
@@ -198,12 +218,10 @@ def diffusivity_report(
                 shown = f"{f[0]:.3g}" if f.size == 1 else f"{f.min():.3g} to {f.max():.3g}"
                 rule_notes = (*rule_notes, f"alcohol-solvent factor 8 eta_B = {shown} at the given T")
     consts = {
-        role: MappingProxyType(
-            {
-                **{k: (c.value, c.source) for k, c in cs.items()},
-                **(viscosity if role == "medium" and phase == "liquid" else {}),
-            }
-        )
+        role: {
+            **{k: (c.value, c.source) for k, c in cs.items()},
+            **(viscosity if role == "medium" and phase == "liquid" else {}),
+        }
         for role, cs in prep.constants.items()
     }
     return DiffusivityReport(
@@ -217,7 +235,8 @@ def diffusivity_report(
         accuracy=rec.accuracy,
         accuracy_pct=rec.accuracy_pct,
         reference=rec.reference,
-        constants=MappingProxyType(consts),
+        constants=FrozenMapping(consts),
         notes=(*notes, *rule_notes),
         warnings=tuple(dict.fromkeys(msg for msg, _ in caught)),
+        relative_uncertainty=stated_uncertainty(rec),
     )

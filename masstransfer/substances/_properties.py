@@ -36,9 +36,9 @@ from numpy.polynomial import chebyshev as _cheb
 
 from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_positive, check_shapes, finish, guard
+from .._validation import check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import DEBYE, R_GAS
-from ..errors import MissingConstantError, OutOfRangeError
+from ..errors import EnvelopeWarning, MissingConstantError, OutOfRangeError
 from ._databases import quiet
 from ._species import Species, species
 
@@ -289,6 +289,11 @@ class LiquidModel:
             np.asarray(self._need(self.hvap, "enthalpy of vaporisation")(T)) / self.species.molar_mass
         )
 
+    @guard
+    def surface_tension(self, T: ArrayLike) -> FloatOrArray:
+        """Surface tension against its vapour or air [N/m] at ``T`` [K] (built on first use)."""
+        return self._need(_surface_tension(self.species), "surface tension")(T)
+
     def _need(self, curve: PropertyCurve | None, what: str) -> PropertyCurve:
         if curve is None:
             raise MissingConstantError(
@@ -494,6 +499,27 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
     )
 
 
+@functools.lru_cache(maxsize=64)
+def _surface_tension(sp: Species) -> PropertyCurve | None:
+    """Surface tension up to 0.9 Tc (it vanishes at Tc, where its logarithm cannot be interpolated).
+
+    Built on first use only: the liquid models most callers need do not load its tables.
+    """
+    if not sp.CAS:
+        return None
+    from thermo import SurfaceTension
+
+    kw = _thermo_kwargs(sp)
+    T_low = sp.Tm if sp.Tm is not None else 0.0
+    T_high = sp.Tc if sp.Tc is not None else math.inf
+    top = T_high if not math.isfinite(T_high) else T_low + 0.9 * (T_high - T_low)
+    with quiet(), np.errstate(over="ignore", under="ignore", invalid="ignore", divide="ignore"):
+        st = SurfaceTension(
+            CASRN=kw["CASRN"], MW=kw["MW"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc, omega=sp.omega
+        )
+        return _optional_curve(st, f"surface tension of liquid {sp.name}", "N/m", T_low, top)
+
+
 def _optional_curve(prop: Any, quantity: str, unit: str, T_low: float, T_high: float) -> PropertyCurve | None:
     if prop.method is None:
         return None
@@ -648,7 +674,28 @@ def henry_constant(solute: str | Species, solvent: str | Species, T: ArrayLike) 
     Tv = check_positive("T", T)
     A, B, C, D, E, F = _henry_coefficients(a, b)
     Ta = np.asarray(Tv, dtype=float)
+    lo = b.Tm if b.Tm is not None else 0.0
+    hi = b.Tc if b.Tc is not None else math.inf
+    if Ta.size and (Ta.min() < lo or Ta.max() > hi):
+        raise OutOfRangeError(
+            f"T from {Ta.min():.6g} to {Ta.max():.6g} K leaves the liquid range of the solvent "
+            f"{b.name!r} ({lo:.2f} K melting point to {hi:.2f} K critical point); no Henry's-law "
+            "constant exists there"
+        )
+    if Ta.size and (Ta.min() < _HENRY_T_RANGE[0] or Ta.max() > _HENRY_T_RANGE[1]):
+        warn_caller(
+            f"henry_constant: T from {Ta.min():.6g} to {Ta.max():.6g} K is outside "
+            f"{_HENRY_T_RANGE[0]:g}-{_HENRY_T_RANGE[1]:g} K, where the compiled temperature "
+            "dependences (fitted near 298.15 K) are extrapolated; prefer measured solubilities",
+            EnvelopeWarning,
+        )
     return finish(np.exp(A + (B + E / Ta) / Ta + C * np.log(Ta) + Ta * (D + F * Ta)))
+
+
+#: Temperatures over which the compiled Henry's-law temperature dependences are used without a
+#: warning: the compilations fit van 't Hoff forms to data mostly between the ice point and the
+#: normal boiling point of water (Sander 2015, sec. 2.4).
+_HENRY_T_RANGE = (273.15, 373.15)
 
 
 @functools.lru_cache(maxsize=256)
