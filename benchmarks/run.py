@@ -2,13 +2,16 @@
 
 Run ``python benchmarks/run.py``; it prints a Markdown table, writes it to
 ``benchmarks/results.md`` and draws ``benchmarks/scaling.png`` (time against
-problem size from 10 to 10^7).  Times are the best of several repeats (shared,
+problem size from 10 to 10^7, and the cost per state of the names-in chain and two
+numbers-in calls from 10^4 states up to ``MASSTRANSFER_BENCH_MAX_STATES``, default
+10^7; 10^8 needs about 12 GB of memory).  Times are the best of several repeats (shared,
 noisy machines); the ratios, not the absolute times, are the result.
 """
 
 from __future__ import annotations
 
 import datetime
+import os
 import platform
 import subprocess
 import sys
@@ -410,8 +413,53 @@ def bench_quantity_check() -> list[tuple[str, float, float, str]]:
     return rows
 
 
-def scaling_plot(path: Path) -> None:
-    """Time per call against problem size, 10 to 10^7, for three array calls and a bare baseline."""
+def _names_in(n: int) -> tuple[np.ndarray, np.ndarray]:
+    return np.full(n, 30.0), np.linspace(300.0, 400.0, n)
+
+
+def per_state_costs(max_states: float) -> dict[str, tuple[list[int], list[float]]]:
+    """Cost per state [s] from 10^4 states up, for the names-in chain and two numbers-in calls."""
+    from masstransfer import diffusivity, surface
+
+    sizes = [int(n) for n in np.logspace(4, np.log10(max_states), 2 * round(np.log10(max_states) - 4) + 1)]
+    series = {
+        "names in: mass_transfer_from_heat (water in air)": lambda h, T: mt.mass_transfer_from_heat(
+            h, "water", "air", T
+        ),
+        "numbers in: mass_transfer_coefficient_from_heat": lambda h, T: (
+            surface.mass_transfer_coefficient_from_heat(h, rho=1.1, cp=1007.0, Pr=0.71, Sc=T * 2e-3)
+        ),
+        "numbers in: fuller": lambda h, T: diffusivity.fuller(T, 101325.0, 0.018, 0.029, 13.1, 19.7),
+    }
+    out: dict[str, tuple[list[int], list[float]]] = {}
+    for label, fn in series.items():
+        costs = []
+        for n in sizes:
+            h, T = _names_in(n)
+            reps = max(1, int(3e6 // n))
+            costs.append(best(lambda fn=fn, h=h, T=T: fn(h, T), reps, repeat=5 if n <= 1e7 else 2) / n)
+            del h, T
+        out[label] = (sizes, costs)
+    return out
+
+
+def peak_memory_ratio(n: int) -> float:
+    """Peak memory of one names-in call over the bytes of its inputs and outputs (numpy's own count)."""
+    import tracemalloc
+
+    h, T = _names_in(n)
+    mt.mass_transfer_from_heat(h[:10], "water", "air", T[:10])
+    tracemalloc.start()
+    r = mt.mass_transfer_from_heat(h, "water", "air", T)
+    _, peak = tracemalloc.get_traced_memory()
+    tracemalloc.stop()
+    fields = [v for v in vars(r).values() if isinstance(v, np.ndarray)]
+    produced = sum(v.nbytes for v in fields if v is not h and v is not T)
+    return peak / (h.nbytes + T.nbytes + produced)
+
+
+def scaling_plot(path: Path, costs: dict[str, tuple[list[int], list[float]]] | None = None) -> None:
+    """Time per call against size (10 to 10^7), and cost per state from 10^4 up (names in, numbers in)."""
     import matplotlib
 
     matplotlib.use("Agg")
@@ -427,7 +475,7 @@ def scaling_plot(path: Path) -> None:
         "fractional_uptake (slab)": lambda x: bodies.fractional_uptake("slab", x, 1e-11, 1e-3),
         "bare numpy x**1.75": lambda x: (250.0 + x) ** 1.75,
     }
-    fig, ax = plt.subplots(figsize=(6.5, 4.2))
+    fig, (ax, ax2) = plt.subplots(1, 2, figsize=(12.5, 4.4))
     for label, fn in series.items():
         times = []
         for n in sizes:
@@ -441,6 +489,13 @@ def scaling_plot(path: Path) -> None:
     ax.set_ylabel("time per call [s]")
     ax.set_title(f"masstransfer scaling, {datetime.date.today().isoformat()}, {platform.machine()}")
     ax.legend(fontsize=8)
+    for label, (n_states, per_state) in (costs or {}).items():
+        ax2.semilogx(n_states, np.asarray(per_state) * 1e9, marker="o", ms=3, label=label)
+    ax2.set_ylim(bottom=0.0)
+    ax2.set_xlabel("states per call (array length)")
+    ax2.set_ylabel("cost per state [ns]")
+    ax2.set_title("cost per state: flat means linear in the array length")
+    ax2.legend(fontsize=8)
     fig.tight_layout()
     fig.savefig(path, dpi=110)
 
@@ -472,10 +527,29 @@ def main() -> None:
         lines.append(
             f"| {name} | {ours * 1e6:.3g} µs | {base_name} | {base * 1e6:.3g} µs | {ours / base:.3g} |"
         )
+    max_states = float(os.environ.get("MASSTRANSFER_BENCH_MAX_STATES", "1e7"))
+    costs = per_state_costs(max_states)
+    lines += [
+        "",
+        "Cost per state from 10^4 states up (best of repeats; the right panel of `scaling.png`):",
+        "",
+        "| call | "
+        + " | ".join(f"{n:.0e} states" for n in next(iter(costs.values()))[0])
+        + " | largest / smallest |",
+        "|---|" + "---|" * (len(next(iter(costs.values()))[0]) + 1),
+    ]
+    for label, (_, per_state) in costs.items():
+        cells = " | ".join(f"{c * 1e9:.0f} ns" for c in per_state)
+        lines.append(f"| {label} | {cells} | {max(per_state) / min(per_state):.2f} |")
+    ratio = peak_memory_ratio(10**7)
+    lines += [
+        "",
+        f"Peak memory of one names-in call on 10^7 states: {ratio:.2f} times its inputs and outputs.",
+    ]
     text = "\n".join(lines)
     print(text)
     Path(__file__).with_name("results.md").write_text(text + "\n", encoding="utf-8")
-    scaling_plot(Path(__file__).with_name("scaling.png"))
+    scaling_plot(Path(__file__).with_name("scaling.png"), costs)
     print("wrote benchmarks/results.md and benchmarks/scaling.png")
 
 

@@ -12,6 +12,7 @@ else lives in one subpackage each, with one public path per function:
 ``humidity``     psychrometrics for any vapour-gas pair, evaporation in one call, drying, towers
 ``testing``      hypothesis strategies and invariant checks for downstream tests
 ``units``        pint quantities: accepted by every function; result objects as quantities
+``sweep``        design-space grids evaluated block by block on dask (optional ``dask`` extra)
 ``constants``    the physical constants the library uses
 ``errors``       the whole error and warning family
 
@@ -37,13 +38,13 @@ from .surface._analogy import TransferCoefficients, mass_transfer_from_heat
 from .surface._wet_surface import wet_bulb_temperature, wet_surface_temperature
 
 if TYPE_CHECKING:
-    from . import bodies, contactors, humidity, testing, units
+    from . import bodies, contactors, humidity, sweep, testing, units
 
-_LAZY = frozenset({"bodies", "contactors", "humidity", "testing", "units"})
+_LAZY = frozenset({"bodies", "contactors", "humidity", "sweep", "testing", "units"})
 
 
 def __getattr__(name: str) -> object:
-    """Import ``bodies``, ``contactors``, ``humidity`` (scipy) and ``testing`` (hypothesis) on first use."""
+    """Import the subpackages that load scipy, dask or hypothesis on first use."""
     if name in _LAZY:
         return importlib.import_module(f".{name}", __name__)
     raise AttributeError(f"module {__name__!r} has no attribute {name!r}")
@@ -77,6 +78,7 @@ __all__ = [
     "species",
     "substances",
     "surface",
+    "sweep",
     "testing",
     "units",
     "wet_bulb_temperature",

@@ -68,11 +68,12 @@ def register(sub: Any) -> None:
         help="also print the constants with their sources and every rule applied",
     )
     d.add_argument("--json", action="store_true", help="print JSON instead of a table")
+    d.set_defaults(handler=run)
 
 
 def run(args: argparse.Namespace) -> str:
     """Compute and format the diffusivity for the parsed arguments."""
-    from . import _cli_units
+    from ._cli_units import convert_table, plus_minus
     from .diffusivity._report import diffusivity_report
     from .errors import OutOfRangeError
 
@@ -113,22 +114,21 @@ def run(args: argparse.Namespace) -> str:
     lines = [
         f"Diffusivity of {report.solute} in {report.medium} ({where})",
         f"phase: {report.phase} ({how})",
-        f"method: {report.method}; stated accuracy "
-        + ("not stated" if report.accuracy_pct is None else f"{report.accuracy_pct:g} %")
-        + f" ({report.accuracy})",
+        f"method: {report.method}; stated accuracy {report.accuracy_pct:g} % ({report.accuracy})",
     ]
-    u = report.relative_uncertainty
-    header, rows = _cli_units.convert_table(
-        ["T [K]", "D [m^2/s]", "D [cm^2/s]"],
-        [
-            [f"{t:.2f}", _cli_units.plus_minus(d, u), _cli_units.plus_minus(d * 1e4, u)]
-            for t, d in zip(T, D, strict=True)
-        ],
-    )
+    u = report.relative_uncertainty  # one standard deviation from the stated accuracy
+    rows = [
+        [f"{t:.2f}", plus_minus(float(d), u), plus_minus(float(d) * 1e4, u)]
+        for t, d in zip(T, D, strict=True)
+    ]
+    header, rows = convert_table(["T [K]", "D [m^2/s]", "D [cm^2/s]"], rows)  # --units, if given
     widths = [max(len(h), *(len(r[i]) for r in rows)) for i, h in enumerate(header)]
     row = "  ".join(h.rjust(w) for h, w in zip(header, widths, strict=True))
     lines += [row, "-" * len(row)]
-    lines += ["  ".join(c.rjust(w) for c, w in zip(r, widths, strict=True)) for r in rows]
+    for cells in rows:
+        lines.append("  ".join(c.rjust(w) for c, w in zip(cells, widths, strict=True)))
+    if u is not None:
+        lines.append("± one standard deviation, from the method's stated accuracy")
     if args.explain:
         lines += ["", report.summary()]
     else:

@@ -300,7 +300,8 @@ def field_units(cls: type) -> dict[str, str]:
     """Units of a result class's fields, read from its numpydoc Attributes section.
 
     An entry naming several fields (``T, P : ...  State [K], [Pa].``) gives them the bracketed
-    units in order, or the single unit to all; fields without a bracketed unit are left out.
+    units in order, or the single unit to all; with fewer units than fields the last unit
+    covers the rest ("the groups [-]"); fields without a bracketed unit are left out.
     """
     doc = inspect.getdoc(cls) or ""
     out: dict[str, str] = {}
@@ -313,4 +314,7 @@ def field_units(cls: type) -> dict[str, str]:
             out[names[0]] = found[0]
         elif len(found) == 1:
             out.update(dict.fromkeys(names, found[0]))
+        elif 1 < len(found) < len(names):  # "D, Pr, Sc : diffusivity [m^2/s] and the groups [-]"
+            out.update(zip(names, found[:-1], strict=False))
+            out.update(dict.fromkeys(names[len(found) - 1 :], found[-1]))
     return out

@@ -3,6 +3,10 @@
 Plain Python numbers take a fast path with no numpy call, so a scalar call
 costs microseconds; everything else is converted once with
 ``np.asarray(x, dtype=float)`` and checked with whole-array operations.
+
+Dask arrays are never converted: a guarded function given one returns a lazy dask array that
+runs the same function, checks included, block by block when computed (see :func:`guard`), and
+the ``check_*`` helpers given one return it with the same checks attached to every block.
 """
 
 from __future__ import annotations
@@ -35,6 +39,7 @@ __all__ = [
     "check_positive",
     "check_shapes",
     "collect_warnings",
+    "dask_blocks",
     "finish",
     "guard",
     "has_quantity",
@@ -72,6 +77,10 @@ def as_float(name: str, value: Any) -> FloatOrArray:
         raise InputTypeError(
             f"{name}={value!r} is a {type(value).__name__}, not a number; pass a float or an array of floats"
         )
+    if not isinstance(value, np.ndarray) and _is_dask(value):
+        if value.dtype.kind not in "iuf":
+            raise InputTypeError(f"{name} is a dask array of {value.dtype}, not real numbers; pass floats")
+        return value  # type: ignore[no-any-return]  # checked block by block by the caller
     if isinstance(value, np.ndarray):
         if type(value) is not np.ndarray and hasattr(value, "mask"):
             raise InputTypeError(
@@ -104,6 +113,21 @@ def as_float(name: str, value: Any) -> FloatOrArray:
     return arr
 
 
+def _is_dask(value: object) -> bool:
+    """Tell whether ``value`` is a dask array, without importing dask."""
+    module = sys.modules.get("dask.array")
+    return module is not None and isinstance(value, module.Array)
+
+
+def _check_block(check: Callable[..., FloatOrArray], name: str, fix: str, block: FloatArray) -> FloatArray:
+    return np.asarray(check(name, block, fix), dtype=float)
+
+
+def _lazy_check(check: Callable[..., FloatOrArray], name: str, x: Any, fix: str) -> Any:
+    """Attach ``check`` to every block of the dask array ``x``; nothing is computed now."""
+    return x.map_blocks(functools.partial(_check_block, check, name, fix), dtype=float)
+
+
 def _bad(name: str, value: FloatOrArray, mask: Any, what: str, fix: str) -> InputValueError:
     if isinstance(value, float):
         shown = repr(value)
@@ -127,6 +151,8 @@ def check_positive(name: str, value: Any, fix: str = "") -> FloatOrArray:
                 raise _bad(name, x, None, "is not positive", fix)
             raise _bad(name, x, None, f"is outside {lo:g} to {hi:g}, the range accepted in SI units", fix)
         return x
+    if not isinstance(x, np.ndarray):  # a dask array: the same check on every block, when computed
+        return _lazy_check(check_positive, name, x, fix)
     # fast path: two reductions, no temporary arrays (NaN fails the min test)
     if x.size == 0 or (x.min() >= lo and x.max() <= hi):
         return x
@@ -153,6 +179,8 @@ def check_nonnegative(name: str, value: Any, fix: str = "") -> FloatOrArray:
                 raise _bad(name, x, None, "is negative", fix)
             raise _bad(name, x, None, f"exceeds {hi:g}, the range accepted in SI units", fix)
         return x
+    if not isinstance(x, np.ndarray):  # a dask array: the same check on every block, when computed
+        return _lazy_check(check_nonnegative, name, x, fix)
     if x.size == 0 or (x.min() >= 0.0 and x.max() <= hi):
         return x
     ok = np.isfinite(x)
@@ -198,6 +226,8 @@ def check_finite(name: str, value: Any, fix: str = "") -> FloatOrArray:
         if abs(x) > MAGNITUDE_LIMIT:
             raise _bad(name, x, None, f"exceeds {MAGNITUDE_LIMIT:g} in magnitude", fix)
         return x
+    if not isinstance(x, np.ndarray):  # a dask array: the same check on every block, when computed
+        return _lazy_check(check_finite, name, x, fix)
     if x.size == 0 or (x.min() >= -MAGNITUDE_LIMIT and x.max() <= MAGNITUDE_LIMIT):
         return x
     ok = np.isfinite(x)
@@ -220,6 +250,8 @@ def finish(value: FloatOrArray | FloatArray) -> FloatOrArray:
     """Return a Python float for 0-d results, else the float64 array."""
     if isinstance(value, float):
         return float(value)  # also turns numpy float64 scalars into Python floats
+    if not isinstance(value, np.ndarray) and _is_dask(value):
+        return value  # stays lazy
     arr = np.asarray(value, dtype=float)
     if arr.ndim == 0:
         return float(arr)
@@ -375,14 +407,95 @@ def has_quantity(args: tuple[Any, ...], kwargs: dict[str, Any]) -> bool:
     return False
 
 
+def _has_dask(args: tuple[Any, ...], kwargs: dict[str, Any]) -> bool:
+    cls = sys.modules["dask.array"].Array
+    return any(isinstance(v, cls) for v in args) or any(isinstance(v, cls) for v in kwargs.values())
+
+
+def _apply_block(
+    fn: Callable[..., Any],
+    args: tuple[Any, ...],
+    kwargs: dict[str, Any],
+    slots: tuple[int | str, ...],
+    *blocks: FloatArray,
+) -> FloatArray:
+    """Call ``fn`` with one block in each array slot (positions or keywords), the rest as given."""
+    a, kw = list(args), dict(kwargs)
+    for slot, block in zip(slots, blocks, strict=True):
+        if isinstance(slot, int):
+            a[slot] = block
+        else:
+            kw[slot] = block
+    out = np.asarray(fn(*a, **kw), dtype=float)
+    return out if out.shape == blocks[0].shape else np.broadcast_to(out, blocks[0].shape)
+
+
+def _lazy_call(
+    fn: Callable[..., Any],
+    target: Callable[..., Any],
+    name: str,
+    args: tuple[Any, ...],
+    kwargs: dict[str, Any],
+) -> Any:
+    """Return ``fn(*args, **kwargs)`` as a lazy dask array evaluated block by block.
+
+    The array arguments (dask or numpy) are broadcast together and cut into common blocks;
+    each block is passed to ``fn`` itself, so its checks, envelope warnings and guard run on
+    every block when, and only when, the result is computed.
+    """
+    da = sys.modules["dask.array"]
+
+    def is_array(v: Any) -> bool:
+        return isinstance(v, da.Array) or (isinstance(v, np.ndarray) and v.ndim > 0)
+
+    try:
+        names = list(inspect.signature(target).bind_partial(*args).arguments)
+    except TypeError:
+        names = []
+    slots: tuple[int | str, ...] = (
+        *(i for i, v in enumerate(args) if is_array(v)),
+        *(k for k, v in kwargs.items() if is_array(v)),
+    )
+    values = [args[s] if isinstance(s, int) else kwargs[s] for s in slots]
+    shown = [names[s] if isinstance(s, int) and s < len(names) else str(s) for s in slots]
+    for label, v in zip(shown, values, strict=True):
+        if v.dtype.kind not in "iuf":
+            raise InputTypeError(f"{label} is an array of {v.dtype}, not real numbers; pass floats")
+    try:
+        arrays = da.broadcast_arrays(*(da.asarray(v) for v in values))
+    except ValueError:
+        listed = ", ".join(f"{label} {v.shape}" for label, v in zip(shown, values, strict=True))
+        raise InputShapeError(
+            f"{name}: array arguments do not broadcast together: {listed}; "
+            "pass arrays of one shape, or scalars"
+        ) from None
+    block = functools.partial(_apply_block, fn, args, kwargs, slots)
+    ndim = arrays[0].ndim
+    return da.map_blocks(block, *arrays, dtype=float, meta=np.empty((0,) * ndim, dtype=float))
+
+
+def dask_blocks(fn: Callable[..., Any], *args: Any, **kwargs: Any) -> Any:
+    """``fn(*args, **kwargs)`` as a lazy dask array, block by block: for an unguarded fast path given dask."""
+    name = getattr(fn, "__qualname__", "function")
+    return _lazy_call(fn, fn, name, args, kwargs)
+
+
+def _returns_array(f: Callable[..., Any]) -> bool:
+    """Tell from its return annotation whether ``f`` returns a float or an array (state by state)."""
+    annotation = inspect.unwrap(f).__annotations__.get("return")
+    return annotation in ("FloatOrArray", FloatOrArray)
+
+
 @overload
 def guard(fn: Callable[_P, _R], /) -> Callable[_P, _R]: ...
 @overload
-def guard(*, check_output: bool = True) -> Callable[[Callable[_P, _R]], Callable[_P, _R]]: ...
+def guard(
+    *, check_output: bool = True, elementwise: bool | None = None
+) -> Callable[[Callable[_P, _R]], Callable[_P, _R]]: ...
 
 
 def guard(
-    fn: Callable[_P, _R] | None = None, /, *, check_output: bool = True
+    fn: Callable[_P, _R] | None = None, /, *, check_output: bool = True, elementwise: bool | None = None
 ) -> Callable[_P, _R] | Callable[[Callable[_P, _R]], Callable[_P, _R]]:
     """Decorate a public function so that arithmetic failures become library errors, and only those.
 
@@ -400,10 +513,19 @@ def guard(
     :func:`masstransfer._units.call_with_units`: quantities are converted to the units the
     docstring states for each parameter, and the result is returned as a quantity in the unit
     of the Returns section.  Plain calls pay one type look-up per argument and import nothing.
+
+    Dask arrays: a function that works state by state (``elementwise``; by default, one whose
+    return annotation is ``FloatOrArray``) given any dask array returns a lazy dask array at
+    once, with nothing computed: the array arguments are broadcast into common blocks and the
+    function itself, checks and all, runs on each block when the result is computed, so bad
+    input raises the library's error then.  Any other function (one that works across a whole
+    array, or returns a result object, ``elementwise=False``) refuses dask arrays with
+    :class:`~masstransfer.errors.InputTypeError`; ``masstransfer.sweep`` maps those over blocks.
     """
 
     def decorate(f: Callable[_P, _R]) -> Callable[_P, _R]:
         name = getattr(f, "__qualname__", getattr(f, "__name__", "function"))
+        by_state = _returns_array(f) if elementwise is None else elementwise
 
         @functools.wraps(f)
         def wrapper(*args: _P.args, **kwargs: _P.kwargs) -> _R:
@@ -411,6 +533,14 @@ def guard(
                 from ._units import call_with_units
 
                 return call_with_units(wrapper, f, args, kwargs)  # type: ignore[no-any-return]
+            if "dask.array" in sys.modules and _has_dask(args, kwargs):
+                if not by_state:
+                    raise InputTypeError(
+                        f"{name} does not take dask arrays (it works across whole arrays or returns a "
+                        "result object); pass numpy arrays, or map it over blocks with "
+                        "masstransfer.sweep.evaluate"
+                    )
+                return _lazy_call(wrapper, f, name, args, kwargs)  # type: ignore[no-any-return]
             try:
                 out = f(*args, **kwargs)
             except _ARITHMETIC as exc:

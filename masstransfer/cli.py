@@ -21,7 +21,7 @@ from typing import Any, NoReturn
 
 import numpy as np
 
-from . import _cli_column, _cli_diffusivity, _cli_humidity, _cli_units
+from . import _cli_column, _cli_humidity, _cli_units
 from .errors import MassTransferError
 
 __all__ = ["main"]
@@ -50,7 +50,9 @@ def _parser() -> argparse.ArgumentParser:
     sub = p.add_subparsers(dest="command", required=True)
     sub.add_parser("demo", help="print the demo report (an invented kiln-drying scenario)")
 
-    _cli_diffusivity.register(sub)
+    from ._cli_diffusivity import register as register_diffusivity
+
+    register_diffusivity(sub)
 
     c = sub.add_parser(
         "coefficient",
@@ -314,7 +316,6 @@ def main(argv: Sequence[str] | None = None) -> int:
     _cli_units.begin(args)
     as_json = bool(getattr(args, "json", False))
     handlers = {
-        "diffusivity": _cli_diffusivity.run,
         "coefficient": _coefficient,
         "correlations": _correlations,
         "wet-bulb": _wet_bulb,
@@ -331,7 +332,7 @@ def main(argv: Sequence[str] | None = None) -> int:
 
                 out = demo_report()
             else:
-                out = handlers[args.command](args)
+                out = handlers[args.command](args) if args.command in handlers else args.handler(args)
             if as_json:
                 out = _cli_units.convert_json(out)
         except MassTransferError as exc:

@@ -16,6 +16,7 @@ SUBPACKAGES = (
     "bodies",
     "contactors",
     "humidity",
+    "sweep",
     "testing",
     "constants",
     "errors",

@@ -20,7 +20,7 @@ from hypothesis import HealthCheck, given, settings
 from hypothesis import strategies as st
 
 import masstransfer as mt
-from masstransfer import bodies, contactors, diffusivity, humidity, substances, surface
+from masstransfer import bodies, contactors, diffusivity, humidity, substances, surface, sweep
 
 _PET = bodies.Layer(12e-6, permeability=1e-17)
 _REC = surface.correlation("sphere-ranz-marshall")
@@ -560,6 +560,13 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
             "steps": 4,
         },
     ),
+    (
+        "evaporation_flux",
+        sweep.evaporation_flux,
+        {"h": 20.0, "solute": "water", "medium": "air", "T": 320.0, "P": 101325.0, "y_bulk": 0.01},
+    ),
+    ("design_grid", sweep.design_grid, {"T": [300.0, 320.0], "h": [10.0, 20.0], "block_states": 2}),
+    ("evaluate", sweep.evaluate, {"fn": np.sqrt, "grid": {"x": np.array([1.0, 4.0])}}),
 ]
 
 # Bad values, grouped by the error each must give for a numeric argument.

@@ -30,6 +30,7 @@ from .._validation import (
     check_nonnegative,
     check_positive,
     check_shapes,
+    dask_blocks,
     finish,
     guard,
     has_quantity,
@@ -647,7 +648,7 @@ def brokaw(
     return _kinetic(Tv, Pv, 0.00266, _m_ab(float(Ma), float(Mb)), s_ab, e_ab, d2)
 
 
-@guard
+@guard(elementwise=False)  # sums over the components (last axis)
 def blanc(D_binary: ArrayLike, mole_fractions: ArrayLike) -> FloatOrArray:
     """Diffusivity of a dilute solute in a gas mixture by Blanc's law.
 
@@ -1111,10 +1112,14 @@ def _ready(method: object, solute: object, medium: object) -> _Ready:
     return ready
 
 
-def _slow_checks(r: _Ready, Tv: FloatOrArray, Pv: FloatOrArray) -> None:
-    """Phase check, range and class warnings (the fast path calls this only when needed)."""
+def _slow_checks(r: _Ready, Tv: FloatOrArray, Pv: FloatOrArray, fraction: float = 1.0) -> None:
+    """Phase check, range and class warnings (the fast path calls this only when needed).
+
+    ``fraction`` is the medium's mole fraction when it is one component of a gas mixture: its
+    partial pressure, not the total, must stay below its vapour pressure.
+    """
     if (Tv < r.Tc) if isinstance(Tv, float) else bool(np.any(Tv < r.Tc)):
-        check_vapour(r.limits, Tv, Pv, r.solute)
+        check_vapour(r.limits, Tv, Pv * fraction if fraction != 1.0 else Pv, r.solute)
     _warn_pressure(Pv, f"gas_diffusivity(method={r.record.name!r})")
     lo = Tv < r.T_lo if isinstance(Tv, float) else bool(np.any(Tv < r.T_lo))
     hi = Tv > r.T_hi if isinstance(Tv, float) else bool(np.any(Tv > r.T_hi))
@@ -1125,6 +1130,19 @@ def _slow_checks(r: _Ready, Tv: FloatOrArray, Pv: FloatOrArray) -> None:
         )
     for c in r.cautions:
         warn_caller(c, EnvelopeWarning)
+
+
+def binary_in_mixture(
+    solute: Species, component: Species, T: FloatOrArray, P: FloatOrArray, fraction: float, method: str | None
+) -> FloatOrArray:
+    """Binary diffusivity of ``solute`` in one ``component`` of a gas mixture (for Blanc's law).
+
+    As :func:`gas_diffusivity`, except that the component must be a vapour at its partial
+    pressure ``fraction * P`` (water at 3 % in humid air), not at the total pressure.
+    """
+    r = ready_gas(solute, component, method)
+    _slow_checks(r, T, P, fraction)
+    return r.record.evaluate(r.prepared, T, P)  # type: ignore[no-any-return]
 
 
 def ready_gas(solute: str | Species, medium: str | Species, method: str | None) -> _Ready:
@@ -1223,6 +1241,8 @@ def gas_diffusivity(
         r = _ready(method, solute, medium)
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
+    if not isinstance(Tv, float | np.ndarray) or not isinstance(Pv, float | np.ndarray):
+        return dask_blocks(gas_diffusivity, solute, medium, T, P, method)  # lazy, block by block
     if isinstance(Tv, float) and isinstance(Pv, float):  # scalar fast path: checks only when needed
         if Tv < r.Tc or Pv > LOW_PRESSURE_LIMIT or not r.T_lo <= Tv <= r.T_hi or r.cautions:
             _slow_checks(r, Tv, Pv)
@@ -1353,11 +1373,15 @@ def gas_diffusivity_in_mixture(
         )
     names = list(carrier)
     y = [float(carrier[n]) for n in names]  # type: ignore[index]
+    a = species(solute)
+    Tv, Pv = check_positive("T", T), check_positive("P", P)
+    check_shapes(T=Tv, P=Pv)
     total = sum(y)
-    # each binary at the component's partial pressure, scaled back to P (D*P is constant at low
-    # pressure), so the phase check asks whether each component is a vapour at its own share
+    # each component a vapour at its own partial pressure (fractions as given, renormalised)
     Ds = [
-        np.asarray(gas_diffusivity(solute, n, T, np.asarray(P) * (yi / total), method)) * (yi / total)
+        np.asarray(
+            binary_in_mixture(a, species(n), Tv, Pv, max(yi / total, 1e-300) if total > 0 else 1.0, method)
+        )
         for n, yi in zip(names, y, strict=True)
     ]
     stacked = np.stack(np.broadcast_arrays(*Ds), axis=-1)

