@@ -342,3 +342,13 @@ def test_liquid_methods_positive_and_finite(T, mu, V, P_a, P_b):
         mt.diffusivity.tyn_calus(T, mu, V, V, P_a, P_b),
     ]
     assert all(np.isfinite(v) and v > 0 for v in values)
+
+
+def test_class_caution_reaches_a_python_dash_c_caller():
+    code = (
+        "import masstransfer as mt; print(mt.gas_diffusivity('water', 'air', 300.0, method='chapman-enskog'))"
+    )
+    out = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, check=True)
+    assert float(out.stdout) > 0
+    assert "EnvelopeWarning" in out.stderr
+    assert "polar member" in out.stderr
