@@ -14,6 +14,7 @@ groups used, and the warnings raised.
 from __future__ import annotations
 
 import functools
+import inspect
 import math
 import warnings
 from dataclasses import dataclass
@@ -652,14 +653,15 @@ def mass_transfer_from_heat(
     shape = blocked_shape(hv, Tv, Pv)
     if shape is not None:  # long arrays: the same chain over cache-sized blocks (flat cost per state)
         chain = functools.partial(
-            mass_transfer_from_heat,
+            inspect.unwrap(mass_transfer_from_heat),  # guarded once, here, not per block
             solute=a,
             carrier=b,
             phase=phase,
             diffusivity_method=diffusivity_method,
             exponent=exponent,
         )
-        return blockwise(chain, {"h": hv, "T": Tv, "P": Pv}, shape)
+        blocked: TransferCoefficients = blockwise(chain, {"h": hv, "T": Tv, "P": Pv}, shape)
+        return blocked
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
         if phase == "gas":
