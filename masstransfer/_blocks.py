@@ -14,19 +14,20 @@ from __future__ import annotations
 
 import dataclasses
 import math
+import warnings
 from collections.abc import Callable
 from typing import Any, TypeVar
 
 import numpy as np
 
 from ._typing import FloatOrArray
-from ._validation import collect_warnings, warn_caller
+from ._validation import warn_caller
 
 __all__ = ["BLOCK", "blocked_shape", "blockwise"]
 
 #: States per block: 16384 float64 values are 128 kB per array, so the dozen arrays a chain
 #: keeps alive at once fit in a 1-2 MB level-2 cache (measured in ``benchmarks/run.py``).
-BLOCK = 16384
+BLOCK = 65536
 
 _R = TypeVar("_R")
 
@@ -57,7 +58,8 @@ def blockwise(call: Callable[..., _R], arrays: dict[str, FloatOrArray], shape: t
     first: Any = None
     texts: dict[str, None] = {}
     offset = 0
-    with collect_warnings() as caught:
+    with warnings.catch_warnings(record=True) as caught:
+        warnings.simplefilter("always")
         it = np.nditer(
             [np.broadcast_to(op, shape) for op in ops],
             flags=["external_loop", "buffered", "zerosize_ok"],
@@ -83,10 +85,10 @@ def blockwise(call: Callable[..., _R], arrays: dict[str, FloatOrArray], shape: t
                         texts.update(dict.fromkeys(v))
                 offset += n
     seen: set[tuple[str, type[Warning]]] = set()
-    for message, category in caught:
-        if (message, category) not in seen:
-            seen.add((message, category))
-            warn_caller(message, category)
+    for w in caught:
+        if (str(w.message), w.category) not in seen:
+            seen.add((str(w.message), w.category))
+            warn_caller(str(w.message), w.category)
     changes: dict[str, Any] = {k: v.reshape(shape) for k, v in outputs.items()}
     changes.update({n: v for n, v in arrays.items() if hasattr(first, n)})
     if hasattr(first, "warnings"):

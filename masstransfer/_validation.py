@@ -353,13 +353,20 @@ def _suspect(fn: Callable[..., Any], args: tuple[Any, ...], kwargs: dict[str, An
     return f"{worst_name}={worst_shown} is the most extreme input; bring it closer to a physical value"
 
 
+_NOT_NUMBERS = frozenset({str, bool, int})
+
+
 def _finite_out(out: Any, depth: int = 0) -> bool:
     """Tell whether every float inside ``out`` is finite (floats, arrays, tuples, dataclass fields)."""
     if type(out) is float:
         return math.isfinite(out)
     if isinstance(out, np.ndarray):
-        return out.dtype.kind not in "fc" or bool(np.isfinite(out).all())
-    if depth > 2:
+        if out.dtype.kind == "f":  # two reductions (NaN propagates, inf is an extreme): no temporary array
+            return out.size == 0 or (math.isfinite(out.min()) and math.isfinite(out.max()))
+        return out.dtype.kind != "c" or bool(np.isfinite(out).all())
+    if depth > 2 or out is None or type(out) in _NOT_NUMBERS:  # labels, flags and counts: nothing to check
+        return True
+    if type(out) is tuple and all(type(v) is str for v in out):  # e.g. the warnings of a result
         return True
     if isinstance(out, tuple | list):
         return all(_finite_out(v, depth + 1) for v in out)

@@ -14,6 +14,7 @@ groups used, and the warnings raised.
 from __future__ import annotations
 
 import functools
+import inspect
 import math
 from collections.abc import Callable, Mapping
 from dataclasses import dataclass
@@ -775,7 +776,7 @@ def mass_transfer_from_heat(
         and all(v is None or callable(v) or np.ndim(v) == 0 for v in overrides.values())
     ):  # long arrays: the same chain over cache-sized blocks (flat cost per state)
         chain = functools.partial(
-            mass_transfer_from_heat,
+            inspect.unwrap(mass_transfer_from_heat),  # guarded once, here, not per block
             solute=a,
             carrier=carrier,
             phase=phase,
@@ -785,7 +786,8 @@ def mass_transfer_from_heat(
             D_uncertainty=D_uncertainty,
             **overrides,
         )
-        return blockwise(chain, {"h": hv, "T": Tv, "P": Pv}, shape)
+        blocked: TransferCoefficients = blockwise(chain, {"h": hv, "T": Tv, "P": Pv}, shape)
+        return blocked
     rho_v: FloatOrArray
     cp_v: FloatOrArray
     k_v: FloatOrArray

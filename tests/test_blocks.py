@@ -1,0 +1,78 @@
+"""Long arrays in cache-sized blocks: the same numbers as one whole-array evaluation, warnings once."""
+
+from __future__ import annotations
+
+import dataclasses
+import warnings
+
+import numpy as np
+import pytest
+
+import masstransfer as mt
+from masstransfer import _blocks
+
+
+def _unblocked(h, T, P=101325.0):
+    # one call per slice, each below the blocking threshold: the plain whole-array arithmetic
+    n = np.size(T)
+    step = _blocks.BLOCK
+    parts = [
+        mt.mass_transfer_from_heat(h[i : i + step], "water", "air", T[i : i + step], P)
+        for i in range(0, n, step)
+    ]
+    return {
+        f: np.concatenate([getattr(p, f) for p in parts]) for f in ("k_c", "k_G", "k_y", "rho", "D", "Le")
+    }
+
+
+def test_blocked_equals_plain_arithmetic_state_by_state():
+    n = 2 * _blocks.BLOCK + 1234
+    T = np.linspace(290.0, 390.0, n)
+    h = np.linspace(5.0, 150.0, n)
+    r = mt.mass_transfer_from_heat(h, "water", "air", T)
+    want = _unblocked(h, T)
+    for field, values in want.items():
+        np.testing.assert_array_equal(getattr(r, field), values, err_msg=field)
+    assert r.T is T
+    assert r.h is h
+    assert r.k_x is None
+    assert r.method.startswith("Chilton-Colburn")
+
+
+def test_blocked_broadcasts_without_copies_and_keeps_the_shape():
+    T = np.linspace(290.0, 390.0, 401)[:, None]
+    h = np.linspace(5.0, 150.0, 400)[None, :]
+    r = mt.mass_transfer_from_heat(h, "water", "air", T, 2e5)
+    assert np.shape(r.k_c) == (401, 400)
+    assert np.shape(r.rho) == (401, 400)
+    row = mt.mass_transfer_from_heat(h[0], "water", "air", float(T[7, 0]), 2e5)
+    np.testing.assert_array_equal(r.k_c[7], row.k_c)
+    assert r.P == 2e5
+
+
+def test_blocked_warns_once_per_message():
+    n = 3 * _blocks.BLOCK
+    T = np.full(n, 300.0)
+    with warnings.catch_warnings(record=True) as caught:
+        warnings.simplefilter("always")
+        r = mt.mass_transfer_from_heat(np.full(n, 20.0), "water", "air", T, 3e6)  # high pressure: warns
+    ours = [w for w in caught if issubclass(w.category, mt.MassTransferWarning)]
+    assert ours
+    assert len({str(w.message) for w in ours}) == len(ours)
+    assert len(r.warnings) == len(set(r.warnings)) >= 1
+
+
+def test_blocked_errors_are_the_same():
+    n = 3 * _blocks.BLOCK
+    T = np.full(n, 300.0)
+    T[-5] = -1.0
+    with pytest.raises(mt.errors.InputValueError, match=r"T=-1\.0"):
+        mt.mass_transfer_from_heat(np.full(n, 20.0), "water", "air", T)
+
+
+def test_result_is_a_plain_dataclass_of_arrays():
+    n = 2 * _blocks.BLOCK + 1
+    r = mt.mass_transfer_from_heat(np.full(n, 20.0), "water", "air", np.full(n, 320.0))
+    arrays = [f.name for f in dataclasses.fields(r) if isinstance(getattr(r, f.name), np.ndarray)]
+    assert {"k_c", "k_G", "k_y", "rho", "cp", "k", "mu", "D", "Pr", "Sc", "Le", "h", "T"} <= set(arrays)
+    assert all(getattr(r, a).flags.writeable for a in ("k_c", "D"))
