@@ -377,6 +377,12 @@ def _finite_out(out: Any, depth: int = 0) -> bool:
     return True
 
 
+def _with_units(call: Callable[..., _R], fn: Callable[..., Any], args: Any, kwargs: Any) -> _R:
+    from ._units import call_with_units
+
+    return call_with_units(call, fn, args, kwargs)  # type: ignore[no-any-return]
+
+
 def call_with_quantities(fn: Callable[..., _R], args: tuple[Any, ...], kwargs: dict[str, Any]) -> _R:
     """Run ``fn`` on quantities, as the guard does: for the few public functions without a guard."""
     from ._units import call_with_units
@@ -497,12 +503,17 @@ def _returns_array(f: Callable[..., Any]) -> bool:
 def guard(fn: Callable[_P, _R], /) -> Callable[_P, _R]: ...
 @overload
 def guard(
-    *, check_output: bool = True, elementwise: bool | None = None
+    *, check_output: bool = True, elementwise: bool | None = None, quantities: bool = True
 ) -> Callable[[Callable[_P, _R]], Callable[_P, _R]]: ...
 
 
 def guard(
-    fn: Callable[_P, _R] | None = None, /, *, check_output: bool = True, elementwise: bool | None = None
+    fn: Callable[_P, _R] | None = None,
+    /,
+    *,
+    check_output: bool = True,
+    elementwise: bool | None = None,
+    quantities: bool = True,
 ) -> Callable[_P, _R] | Callable[[Callable[_P, _R]], Callable[_P, _R]]:
     """Decorate a public function so that arithmetic failures become library errors, and only those.
 
@@ -519,7 +530,8 @@ def guard(
     When an argument is a physical quantity (pint), the call goes through
     :func:`masstransfer._units.call_with_units`: quantities are converted to the units the
     docstring states for each parameter, and the result is returned as a quantity in the unit
-    of the Returns section.  Plain calls pay one type look-up per argument and import nothing.
+    of the Returns section.  Plain calls pay one type look-up per argument and import nothing;
+    ``quantities=False`` builds the guard without that look-out (the benchmarks' baseline).
 
     Dask arrays: a function that works state by state (``elementwise``; by default, one whose
     return annotation is ``FloatOrArray``) given any dask array returns a lazy dask array at
@@ -534,12 +546,40 @@ def guard(
         name = getattr(f, "__qualname__", getattr(f, "__name__", "function"))
         by_state = _returns_array(f) if elementwise is None else elementwise
 
+        if not quantities:  # the guard as it was before units: the benchmarks' baseline
+
+            @functools.wraps(f)
+            def bare(*args: _P.args, **kwargs: _P.kwargs) -> _R:
+                if "dask.array" in sys.modules and _has_dask(args, kwargs):
+                    if not by_state:
+                        raise InputTypeError(f"{name} does not take dask arrays")
+                    return _lazy_call(bare, f, name, args, kwargs)  # type: ignore[no-any-return]
+                try:
+                    out = f(*args, **kwargs)
+                except _ARITHMETIC as exc:
+                    raise InputValueError(
+                        f"{name}: the inputs overflow the equations ({exc}); {_suspect(f, args, kwargs)}"
+                    ) from exc
+                if check_output and not _finite_out(out):
+                    raise InputValueError(
+                        f"{name}: the result is not finite for these inputs; {_suspect(f, args, kwargs)}"
+                    )
+                return out
+
+            return bare
+
+        plain = _PLAIN_TYPES  # a closure cell: quicker to reach than the module global
+
         @functools.wraps(f)
         def wrapper(*args: _P.args, **kwargs: _P.kwargs) -> _R:
-            if has_quantity(args, kwargs):  # pint quantities: converted by the docstring's units
-                from ._units import call_with_units
-
-                return call_with_units(wrapper, f, args, kwargs)  # type: ignore[no-any-return]
+            # pint quantities, spotted without importing pint: converted by the docstring's units
+            for a in args:
+                if a.__class__ is not float and a.__class__ not in plain and _is_quantity_type(type(a)):
+                    return _with_units(wrapper, f, args, kwargs)
+            if kwargs:
+                for a in kwargs.values():
+                    if a.__class__ is not float and a.__class__ not in plain and _is_quantity_type(type(a)):
+                        return _with_units(wrapper, f, args, kwargs)
             if "dask.array" in sys.modules and _has_dask(args, kwargs):
                 if not by_state:
                     raise InputTypeError(
