@@ -173,7 +173,7 @@ class Correlation:
 
         return (correlation, (self.slug,))
 
-    def _plan(self, kind: Kind) -> _Plan:
+    def _plan(self, transport: Kind) -> _Plan:
         """Build the scalar fast path's plan for one form, once, from the declared domains.
 
         Per input: (name in this form, default, lowest, highest) accepted without a word, the
@@ -193,7 +193,7 @@ class Correlation:
             default = self.parameters.get(key)
             entries.append(
                 (
-                    self._name(key, kind),
+                    self._name(key, transport),
                     None if default is None else float(default),
                     max(lo, elo),
                     min(hi, ehi),
@@ -208,13 +208,13 @@ class Correlation:
             params = []
         return _Plan(tuple(entries), products, params == list(keys), keys, not self.branches)
 
-    def _fast(self, kind: Kind, given: Mapping[str, Any]) -> float | None:
+    def _fast(self, transport: Kind, given: Mapping[str, Any]) -> float | None:
         """Return the value for Python-float inputs inside the envelope and domain, else None.
 
         None sends the call down the general path, which raises or warns exactly as it always
         does; this path only ever returns what that path would return, with nothing to say.
         """
-        plan = self._plans[kind]
+        plan = self._plans[transport]
         if not plan.usable:
             return None
         values: list[float] = []
@@ -307,13 +307,13 @@ class Correlation:
 
     @guard(check_output=False)
     def evaluate(
-        self, kind: Kind, *, strict: bool = False, stacklevel: int = 2, **inputs: Any
+        self, transport: Kind, *, strict: bool = False, stacklevel: int = 2, **inputs: Any
     ) -> CorrelationResult:
         """Evaluate for heat or mass transfer and return the value with metadata.
 
         Parameters
         ----------
-        kind : {'heat', 'mass'}
+        transport : {'heat', 'mass'}
             ``'heat'`` gives Nu from Pr; ``'mass'`` gives Sh from Sc.
         strict : bool
             Raise instead of warning outside the envelope.
@@ -328,23 +328,24 @@ class Correlation:
             Value, metadata and any envelope warnings.
 
         """
-        if kind not in ("heat", "mass"):
-            raise InputValueError(f"kind={kind!r} must be 'heat' or 'mass'")
-        values, extremes = self._collect(kind, inputs)
-        messages = self._check_envelope(kind, values, extremes, strict)
+        if transport not in ("heat", "mass"):
+            raise InputValueError(f"transport={transport!r} must be 'heat' or 'mass'")
+        values, extremes = self._collect(transport, inputs)
+        messages = self._check_envelope(transport, values, extremes, strict)
         for msg in messages:
             warn_caller(msg, EnvelopeWarning)
         value = finish(np.asarray(self.function(**values), dtype=float))
         analogy = None
-        if self.fitted_on != "both" and self.fitted_on != kind:
+        if self.fitted_on != "both" and self.fitted_on != transport:
             analogy = (
-                f"{self.slug} was fitted on {self.fitted_on} transfer and is used here for {kind} "
-                f"transfer through the heat-mass analogy ({'Sc for Pr' if kind == 'mass' else 'Pr for Sc'})"
+                f"{self.slug} was fitted on {self.fitted_on} transfer and is used here for {transport} "
+                "transfer through the heat-mass analogy "
+                f"({'Sc for Pr' if transport == 'mass' else 'Pr for Sc'})"
             )
-        used = {self._name(k, kind): v for k, v in values.items()}
+        used = {self._name(k, transport): v for k, v in values.items()}
         return CorrelationResult(
             value=value,
-            quantity="Nu" if kind == "heat" else "Sh",
+            quantity="Nu" if transport == "heat" else "Sh",
             slug=self.slug,
             inputs=FrozenMapping(used),
             analogy=analogy,
@@ -356,27 +357,27 @@ class Correlation:
     # -- helpers -------------------------------------------------------------
 
     @staticmethod
-    def _name(key: str, kind: Kind) -> str:
-        return _MASS_NAME.get(key, key) if kind == "mass" else key
+    def _name(key: str, transport: Kind) -> str:
+        return _MASS_NAME.get(key, key) if transport == "mass" else key
 
-    def accepted(self, kind: Kind) -> tuple[str, ...]:
+    def accepted(self, transport: Kind) -> tuple[str, ...]:
         """Names this record accepts in the given form (inputs, then parameters)."""
-        return tuple(self._name(k, kind) for k in (*self.inputs, *self.parameters))
+        return tuple(self._name(k, transport) for k in (*self.inputs, *self.parameters))
 
     def _collect(
-        self, kind: Kind, given: Mapping[str, Any]
+        self, transport: Kind, given: Mapping[str, Any]
     ) -> tuple[dict[str, FloatOrArray], dict[str, tuple[float, float]]]:
-        accepted = {self._name(k, kind): k for k in (*self.inputs, *self.parameters)}
+        accepted = {self._name(k, transport): k for k in (*self.inputs, *self.parameters)}
         unknown = [k for k in given if k not in accepted]
         if unknown:
             hint = ""
-            if kind == "mass" and "Pr" in unknown:
+            if transport == "mass" and "Pr" in unknown:
                 hint = " (for mass transfer pass Sc, not Pr)"
-            elif kind == "heat" and "Sc" in unknown:
+            elif transport == "heat" and "Sc" in unknown:
                 hint = " (for heat transfer pass Pr, not Sc)"
             raise InputValueError(
                 f"correlation {self.slug!r} does not use {', '.join(repr(u) for u in unknown)}{hint}; "
-                f"it takes {', '.join(self.accepted(kind))}"
+                f"it takes {', '.join(self.accepted(transport))}"
             )
         values: dict[str, FloatOrArray] = {}
         extremes: dict[str, tuple[float, float]] = {}
@@ -389,7 +390,7 @@ class Correlation:
             else:
                 raise InputValueError(
                     f"correlation {self.slug!r} needs {name}; pass {name}=... "
-                    f"(it takes {', '.join(self.accepted(kind))})"
+                    f"(it takes {', '.join(self.accepted(transport))})"
                 )
             # two reductions per array, no temporaries; NaN propagates into both
             if isinstance(v, float):
@@ -422,7 +423,7 @@ class Correlation:
 
     def _check_envelope(
         self,
-        kind: Kind,
+        transport: Kind,
         values: Mapping[str, FloatOrArray],
         extremes: Mapping[str, tuple[float, float]],
         strict: bool,
@@ -441,7 +442,7 @@ class Correlation:
                 mask = (v < lo) | (v > hi)
                 shown = f"{float(np.asarray(v)[mask].ravel()[0])!r} (and {int(mask.sum()) - 1} more)"
             msg = (
-                f"correlation {self.slug!r}: {self._name(key, kind)}={shown} is outside its "
+                f"correlation {self.slug!r}: {self._name(key, transport)}={shown} is outside its "
                 f"envelope {lo:g} to {hi:g} ({self.reference})"
             )
             if strict:
@@ -456,7 +457,7 @@ class Correlation:
             mask = (p < lo) | (p > hi)
             if not mask.any():
                 continue
-            formula = "*".join(self._name(n, kind) for n in names)
+            formula = "*".join(self._name(n, transport) for n in names)
             shown = (
                 repr(float(p))
                 if p.ndim == 0
@@ -482,8 +483,9 @@ class Correlation:
                     repr(float(bad[0])) if mask.ndim == 0 else f"{float(bad[0])!r} (and {bad.size - 1} more)"
                 )
                 msg = (
-                    f"correlation {self.slug!r}: {self._name(key, kind)}={shown} is outside the envelope "
-                    f"{lo:g} to {hi:g} of its branch {blo:g} <= {self._name(switch, kind)} < {bhi:g} "
+                    f"correlation {self.slug!r}: {self._name(key, transport)}={shown} is outside the "
+                    f"envelope {lo:g} to {hi:g} of its branch "
+                    f"{blo:g} <= {self._name(switch, transport)} < {bhi:g} "
                     f"({self.reference})"
                 )
                 if strict:
@@ -491,12 +493,12 @@ class Correlation:
                 messages.append(msg)
         return messages
 
-    def outside(self, kind: Kind, **inputs: Any) -> tuple[str, ...]:
+    def outside(self, transport: Kind, **inputs: Any) -> tuple[str, ...]:
         """Say where the given inputs leave the envelope, without evaluating or warning.
 
         Parameters
         ----------
-        kind : {'heat', 'mass'}
+        transport : {'heat', 'mass'}
             The form the inputs are named in.
         **inputs : float or array_like
             Inputs and parameters [-].
@@ -507,5 +509,5 @@ class Correlation:
             One message per envelope condition left; empty inside.
 
         """
-        values, extremes = self._collect(kind, inputs)
-        return tuple(self._check_envelope(kind, values, extremes, strict=False))
+        values, extremes = self._collect(transport, inputs)
+        return tuple(self._check_envelope(transport, values, extremes, strict=False))

@@ -236,7 +236,7 @@ def liquid_states(*, arrays: bool = False, max_size: int = 20) -> st.SearchStrat
 
 
 def correlation_inputs(
-    record: str | Correlation, *, kind: str = "heat", arrays: bool = False, max_size: int = 20
+    record: str | Correlation, *, transport: str = "heat", arrays: bool = False, max_size: int = 20
 ) -> st.SearchStrategy[dict[str, Any]]:
     """Draw keyword inputs inside a correlation's envelope.
 
@@ -244,7 +244,7 @@ def correlation_inputs(
     ----------
     record : str or Correlation
         The record or its slug.
-    kind : {'heat', 'mass'}
+    transport : {'heat', 'mass'}
         Name the Prandtl-type input ``Pr`` (heat) or ``Sc`` (mass).
     arrays : bool
         Draw the first input as an array.
@@ -269,7 +269,7 @@ def correlation_inputs(
     >>> from masstransfer import surface
     >>> rec = surface.correlation("sphere-ranz-marshall")
     >>> @settings(max_examples=10)
-    ... @given(correlation_inputs(rec, kind="mass"))
+    ... @given(correlation_inputs(rec, transport="mass"))
     ... def test_inside(inputs):
     ...     assert rec.sherwood(strict=True, **inputs) >= 2.0
     >>> test_inside()
@@ -278,7 +278,7 @@ def correlation_inputs(
     from ..surface import _lookup as catalogue
 
     rec = catalogue.correlation(record) if isinstance(record, str) else record
-    mass = kind == "mass"
+    mass = transport == "mass"
 
     def bounds(key: str) -> tuple[float, float]:
         lo, hi = rec.envelope.get(key, rec.domain.get(key, (0.0, math.inf)))

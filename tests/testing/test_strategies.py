@@ -55,7 +55,7 @@ def test_correlation_inputs_stay_inside_envelopes(data):
     result = rec.evaluate("heat", strict=True, **inputs)  # strict: leaving the envelope would raise
     assert np.all(np.isfinite(result.value))
     mts.check_nusselt_equals_sherwood(rec, inputs)
-    mass = data.draw(mts.correlation_inputs(rec, kind="mass", arrays=True, max_size=5))
+    mass = data.draw(mts.correlation_inputs(rec, transport="mass", arrays=True, max_size=5))
     assert np.all(np.isfinite(rec.sherwood(strict=True, **mass)))
 
 
