@@ -33,8 +33,11 @@ def test_blocked_equals_plain_arithmetic_state_by_state():
     want = _unblocked(h, T)
     for field, values in want.items():
         np.testing.assert_array_equal(getattr(r, field), values, err_msg=field)
-    assert r.T is T
-    assert r.h is h
+    # the inputs as given, kept as read-only copies (results never alias the caller's arrays)
+    np.testing.assert_array_equal(r.T, T)
+    np.testing.assert_array_equal(r.h, h)
+    assert r.T is not T
+    assert not r.T.flags.writeable
     assert r.k_x is None
     assert r.method.startswith("Chilton-Colburn")
 
