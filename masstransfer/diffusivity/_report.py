@@ -48,6 +48,8 @@ class DiffusivityReport:
         Special-case rules applied (liquids).
     warnings : tuple of str
         Envelope warnings raised by the computation.
+    solute_identity, medium_identity : str
+        The resolved substances: name, CAS number, formula and molar mass.
 
     """
 
@@ -62,6 +64,8 @@ class DiffusivityReport:
     constants: Mapping[str, Mapping[str, tuple[float | None, str]]]
     notes: tuple[str, ...]
     warnings: tuple[str, ...]
+    solute_identity: str = ""
+    medium_identity: str = ""
 
     def summary(self) -> str:
         """Render a short plain-text statement for a calculation note.
@@ -89,6 +93,11 @@ class DiffusivityReport:
         lines = [
             f"D({self.solute} in {self.medium}, {self.phase}) = {shown}",
             f"method: {self.accuracy}",
+            *(
+                f"{who}: {ident}"
+                for who, ident in (("solute", self.solute_identity), ("medium", self.medium_identity))
+                if ident
+            ),
             "constants used (SI units) and their sources:",
         ]
         for who, consts in self.constants.items():
@@ -206,4 +215,6 @@ def diffusivity_report(
         constants=MappingProxyType({k: MappingProxyType(v) for k, v in consts.items()}),
         notes=tuple(notes),
         warnings=tuple(str(w.message) for w in caught),
+        solute_identity=a.identity,
+        medium_identity=b.identity,
     )

@@ -551,6 +551,8 @@ class TransferCoefficients:
         The analogy and the diffusivity method used.
     warnings : tuple of str
         Every warning raised on the way.
+    solute_identity, carrier_identity : str
+        The resolved substances: name, CAS number, formula and molar mass.
 
     """
 
@@ -574,6 +576,8 @@ class TransferCoefficients:
     Le: FloatOrArray
     method: str
     warnings: tuple[str, ...]
+    solute_identity: str = ""
+    carrier_identity: str = ""
 
 
 @guard
@@ -708,4 +712,6 @@ def mass_transfer_from_heat(
         Le=finish(Le),
         method=f"Chilton-Colburn analogy (exponent {n_text}); diffusivity by {method}",
         warnings=tuple(str(w.message) for w in caught),
+        solute_identity=a.identity,
+        carrier_identity=b.identity,
     )
