@@ -218,6 +218,114 @@ def bench_uptake() -> tuple[str, float, float, str]:
     return ("fractional_uptake slab, 10^6 times", t_ours, t_base, "bare numpy, first 50 series terms")
 
 
+def bench_contactors() -> list[tuple[str, float, float, str]]:
+    """Packed-column and reaction calls on 10^6 operating points against the bare expressions."""
+    from masstransfer import contactors
+
+    uV = np.linspace(0.3, 2.0, 1_000_000)
+    uL, a, eps, CV, Ch, rV, muV, DV, rL, muL, T = (
+        0.005,
+        112.6,
+        0.951,
+        0.41,
+        0.784,
+        1.2,
+        1.8e-5,
+        1.6e-5,
+        998.0,
+        1e-3,
+        298.15,
+    )
+    g, R = 9.80665, 8.31446261815324
+
+    def bare_kG():
+        ReL, FrL = uL * rL / (a * muL), uL**2 * a / g
+        ah = np.where(ReL < 5, Ch * ReL**0.15 * FrL**0.1, 0.85 * Ch * ReL**0.25 * FrL**0.1)
+        hL = np.cbrt(12 * muL * a * a * uL / (g * rL)) * ah ** (2 / 3)
+        dh = 4 * eps / a
+        kc = CV / np.sqrt(eps - hL) * np.sqrt(a / dh) * DV * (uV * rV / (a * muV)) ** 0.75
+        return kc * np.cbrt(muV / (rV * DV)) / (R * T)
+
+    def ours_kG():
+        return contactors.billet_schultes_k_G(uV, uL, a, eps, CV, Ch, rV, muV, DV, rL, muL, T)
+
+    np.testing.assert_allclose(ours_kG(), bare_kG(), rtol=1e-12)
+    Ha = np.geomspace(0.01, 1e3, 1_000_000)
+    Ei = 50.0
+
+    def bare_E():
+        return -(Ha**2) / (2 * (Ei - 1)) + np.sqrt(Ha**4 / (4 * (Ei - 1) ** 2) + Ei * Ha**2 / (Ei - 1) + 1)
+
+    def ours_E():
+        return contactors.enhancement_factor(Ha, Ei)
+
+    np.testing.assert_allclose(ours_E(), bare_E(), rtol=1e-9)
+    A = np.linspace(0.6, 5.0, 1_000_000)
+
+    def bare_N():
+        r = 1 - 1 / A
+        return np.log(r * ((0.02 - 0.0) / (0.01 - 0.0) - 1) + 1) / r
+
+    def ours_N():
+        return contactors.transfer_units(0.02, 0.01, 0.0, 1.2, A)
+
+    with np.errstate(divide="ignore", invalid="ignore"):
+        ref = bare_N()
+    sel = np.abs(1 - 1 / A) > 1e-3  # away from A = 1, where the bare form divides by ~0
+    np.testing.assert_allclose(np.asarray(ours_N())[sel], ref[sel], rtol=1e-12)
+    rows = []
+    for name, ours, bare, base in (
+        ("billet_schultes_k_G, 10^6 gas velocities", ours_kG, bare_kG, "bare numpy expression"),
+        ("enhancement_factor (DeCoursey), 10^6 Hatta numbers", ours_E, bare_E, "bare numpy expression"),
+        ("transfer_units (Colburn), 10^6 absorption factors", ours_N, bare_N, "bare numpy, no A = 1 branch"),
+    ):
+        with np.errstate(divide="ignore", invalid="ignore"):
+            rows.append((name, best(ours, 3), best(bare, 3), base))
+    return rows
+
+
+def bench_evaporation() -> tuple[str, float, float, str]:
+    """One-call evaporation over 10^4 gas states against the same balance in bare numpy.
+
+    The baseline solves the same wet-surface energy balance (48 bisection halvings, stagnant-gas
+    flux) with properties frozen as constants and an Antoine vapour pressure: the arithmetic
+    alone, without property curves, diffusivities, checks or the result record.
+    """
+    from masstransfer import humidity
+
+    T = np.linspace(320.0, 380.0, 10_000)
+    P, h, y = 101325.0, 30.0, 0.02
+    rho, cp, M, lam, R = 1.06, 1007.0, 0.018015, 2.4e6, 8.314462618
+    k_c = h / (rho * cp) * (0.71 / 0.6) ** (2 / 3)  # frozen Pr and Sc (constants for the baseline)
+
+    def psat(t):
+        return 133.322 * 10 ** (8.07131 - 1730.63 / (t - 39.724))  # Antoine, water (constants fixed)
+
+    def bare():
+        lo, hi = np.full_like(T, 274.0), T.copy()
+        F = k_c * P / (R * T)
+        for _ in range(48):
+            mid = 0.5 * (lo + hi)
+            N = F * np.log((1 - y) / (1 - psat(mid) / P))
+            up = h * (T - mid) - N * M * lam > 0
+            lo, hi = np.where(up, mid, lo), np.where(up, hi, mid)
+        Ts = 0.5 * (lo + hi)
+        return F * np.log((1 - y) / (1 - psat(Ts) / P)) * M
+
+    def ours():
+        return humidity.evaporation_rate("water", "air", T=T, h=h, P=P, y=y).mass_flux
+
+    # same physics, frozen versus temperature-dependent properties: a few per cent apart
+    np.testing.assert_allclose(ours(), bare(), rtol=0.15)
+    t_base, t_ours = best(bare, 1, repeat=3), best(ours, 1, repeat=3)
+    return (
+        "evaporation_rate (water in air), 10^4 states",
+        t_ours,
+        t_base,
+        "same balance, bare numpy, frozen properties",
+    )
+
+
 def bench_import() -> tuple[str, float, float, str]:
     code = (
         "import time, sys; t=time.perf_counter(); import {m}; "
@@ -285,6 +393,66 @@ def bench_cold_start() -> list[tuple[str, float, float, str]]:
     return rows
 
 
+def bench_quantity_check() -> list[tuple[str, float, float, str]]:
+    """Plain-number calls: the guard's look-out for pint quantities against the same guard without it.
+
+    The two are timed in alternation (five rounds, best of each) so that machine noise falls on
+    both alike.  A last row prices a call that does pass quantities (pint installed).
+    """
+    from masstransfer import _validation, surface
+
+    calls = {
+        "one scalar reynolds call": lambda: surface.reynolds(1.0, 0.1, 1.5e-5),
+        "one scalar mass_transfer_coefficient_from_heat call (keywords)": lambda: (
+            surface.mass_transfer_coefficient_from_heat(40.0, rho=1.16, cp=1007.0, Pr=0.707, Sc=0.61)
+        ),
+        "one scalar mass_transfer_from_heat call (names in)": lambda: mt.mass_transfer_from_heat(
+            35.0, "water", "air", 320.0
+        ),
+    }
+    real = _validation.has_quantity
+    rows = []
+    for name, call in calls.items():
+        call()
+        number = 20000 if "names in" not in name else 500
+        t_ours, t_base = float("inf"), float("inf")
+        for _ in range(5):
+            t_ours = min(t_ours, best(call, number, repeat=3))
+            _validation.has_quantity = lambda args, kwargs: False  # the guard as before units
+            try:
+                t_base = min(t_base, best(call, number, repeat=3))
+            finally:
+                _validation.has_quantity = real
+        rows.append((f"{name}, plain numbers (units check on)", t_ours, t_base, "same guard, no check"))
+    if "pint" not in sys.modules:
+        try:
+            import pint
+        except ImportError:
+            return rows
+    import pint
+
+    Q = pint.get_application_registry().Quantity
+    T, h = Q(46.85, "degC"), Q(35.0, "W/(m^2 K)")
+
+    def plain() -> object:
+        return mt.gas_diffusivity("water", "air", 320.0)
+
+    def with_units() -> object:
+        return mt.gas_diffusivity("water", "air", T)
+
+    with_units()
+    mt.mass_transfer_from_heat(h, "water", "air", T)
+    rows.append(
+        (
+            "one scalar gas_diffusivity call with a pint temperature",
+            best(with_units, 2000),
+            best(plain, 20000),
+            "same call, plain float",
+        )
+    )
+    return rows
+
+
 def scaling_plot(path: Path) -> None:
     """Time per call against problem size, 10 to 10^7, for three array calls and a bare baseline."""
     import matplotlib
@@ -334,8 +502,11 @@ def main() -> None:
         bench_analogy_numeric(),
         bench_analogy_resolved(),
         bench_uptake(),
+        *bench_contactors(),
+        bench_evaporation(),
         bench_import(),
         *bench_cold_start(),
+        *bench_quantity_check(),
     ]
     stamp = datetime.date.today().isoformat()
     machine = f"{platform.machine()}, {platform.python_implementation()} {platform.python_version()}"

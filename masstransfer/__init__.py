@@ -8,12 +8,16 @@ else lives in one subpackage each, with one public path per function:
 ``diffusivity``  numbers-in gas, liquid, porous and solid methods (``fuller``, ``wilke_chang``, ...)
 ``surface``      dimensionless groups, the correlation catalogue, analogies, conventions, fluxes
 ``bodies``       transient uptake and release, barriers, permeability units
+``contactors``   packed and bubble columns, stirred tanks, absorption with reaction, transfer units
+``humidity``     psychrometrics for any vapour-gas pair, evaporation in one call, drying, towers
 ``testing``      hypothesis strategies and invariant checks for downstream tests
+``units``        pint quantities: accepted by every function; result objects as quantities
 ``constants``    the physical constants the library uses
 ``errors``       the whole error and warning family
 
 SI units throughout.  The property databases of ``chemicals`` and ``thermo`` are loaded on first
-use, not on import; ``bodies`` (scipy) and ``testing`` (hypothesis) are imported on first use.
+use, not on import; ``bodies``, ``contactors`` and ``humidity`` (scipy) and ``testing``
+(hypothesis) are imported on first use.
 """
 
 from __future__ import annotations
@@ -33,13 +37,13 @@ from .surface._analogy import TransferCoefficients, mass_transfer_from_heat
 from .surface._wet_surface import wet_bulb_temperature, wet_surface_temperature
 
 if TYPE_CHECKING:
-    from . import bodies, testing
+    from . import bodies, contactors, humidity, testing, units
 
-_LAZY = frozenset({"bodies", "testing"})
+_LAZY = frozenset({"bodies", "contactors", "humidity", "testing", "units"})
 
 
 def __getattr__(name: str) -> object:
-    """Import ``bodies`` (scipy) and ``testing`` (hypothesis) on first use."""
+    """Import ``bodies``, ``contactors``, ``humidity`` (scipy) and ``testing`` (hypothesis) on first use."""
     if name in _LAZY:
         return importlib.import_module(f".{name}", __name__)
     raise AttributeError(f"module {__name__!r} has no attribute {name!r}")
@@ -60,11 +64,13 @@ __all__ = [
     "__version__",
     "bodies",
     "constants",
+    "contactors",
     "diffusivity",
     "diffusivity_report",
     "errors",
     "gas_diffusivity",
     "gas_model",
+    "humidity",
     "liquid_diffusivity",
     "liquid_model",
     "mass_transfer_from_heat",
@@ -72,6 +78,7 @@ __all__ = [
     "substances",
     "surface",
     "testing",
+    "units",
     "wet_bulb_temperature",
     "wet_surface_temperature",
 ]

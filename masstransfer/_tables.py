@@ -167,3 +167,151 @@ QUAYLE_PARACHOR_BONDS: Final = MappingProxyType(
 )
 #: Ring-closure increments by ring size, same source.
 QUAYLE_PARACHOR_RINGS: Final = MappingProxyType({3: 12.5, 4: 6.0, 5: 3.0, 6: 0.8, 7: 4.0})
+
+# --- Packings for gas-liquid contactors ---------------------------------------
+# One row per packing: kind, nominal size [m], material, specific area a [m^2/m^3], void
+# fraction [-], critical surface tension of the material sigma_c [N/m] (Onda, Takeuchi &
+# Okumoto 1968, J. Chem. Eng. Japan 1, 56, Table 1: ceramic 0.061, steel 0.075, polyethylene
+# 0.033, carbon 0.056, glass 0.073 N/m (from memory)), Billet & Schultes constants
+# C_L, C_V, C_h, C_S (Billet & Schultes 1999, Chem. Eng. Technol. 22, 1, Table 1, and
+# Billet, Packed Towers, VCH 1995, Table 2 (from memory); None where not recalled), and the
+# corrugation geometry of structured packings for Bravo, Rocha & Fair (1985): side S, base B,
+# crimp height h [m] and flow-channel angle theta [deg] from the horizontal (Rocha, Bravo &
+# Fair 1996, Ind. Eng. Chem. Res. 35, 1660, Table 1 (from memory)).
+PACKING_DATA: Final = MappingProxyType(
+    {
+        "pall-ring-metal-25": {
+            "kind": "random",
+            "nominal_size": 0.025,
+            "material": "steel",
+            "a": 223.5,
+            "void_fraction": 0.954,
+            "sigma_c": 0.075,
+            "C_L": 1.440,
+            "C_V": 0.336,
+            "C_h": 0.719,
+            "C_S": 2.627,
+            "source": (
+                "Billet & Schultes (1999) Table 1 (from memory); sigma_c: Onda et al. (1968) (from memory)"
+            ),
+        },
+        "pall-ring-metal-50": {
+            "kind": "random",
+            "nominal_size": 0.050,
+            "material": "steel",
+            "a": 112.6,
+            "void_fraction": 0.951,
+            "sigma_c": 0.075,
+            "C_L": 1.192,
+            "C_V": 0.410,
+            "C_h": 0.784,
+            "C_S": 2.725,
+            "source": (
+                "Billet & Schultes (1999) Table 1 (from memory); sigma_c: Onda et al. (1968) (from memory)"
+            ),
+        },
+        "pall-ring-plastic-25": {
+            "kind": "random",
+            "nominal_size": 0.025,
+            "material": "polyolefin",
+            "a": 225.0,
+            "void_fraction": 0.887,
+            "sigma_c": 0.033,
+            "C_L": 0.905,
+            "C_V": 0.446,
+            "C_h": 0.528,
+            "C_S": 2.696,
+            "source": (
+                "Billet & Schultes (1999) Table 1 (from memory); sigma_c: Onda et al. (1968) value "
+                "for polyethylene (from memory)"
+            ),
+        },
+        "pall-ring-plastic-50": {
+            "kind": "random",
+            "nominal_size": 0.050,
+            "material": "polyolefin",
+            "a": 111.1,
+            "void_fraction": 0.919,
+            "sigma_c": 0.033,
+            "C_L": 1.239,
+            "C_V": 0.368,
+            "C_h": 0.593,
+            "C_S": 2.816,
+            "source": (
+                "Billet & Schultes (1999) Table 1 (from memory); sigma_c: Onda et al. (1968) value "
+                "for polyethylene (from memory)"
+            ),
+        },
+        "raschig-ring-ceramic-25": {
+            "kind": "random",
+            "nominal_size": 0.025,
+            "material": "ceramic",
+            "a": 190.0,
+            "void_fraction": 0.680,
+            "sigma_c": 0.061,
+            "C_L": 1.361,
+            "C_V": 0.412,
+            "C_h": None,
+            "C_S": None,
+            "source": (
+                "Billet & Schultes (1999) Table 1 (from memory); sigma_c: Onda et al. (1968) (from memory)"
+            ),
+        },
+        "raschig-ring-ceramic-13": {
+            "kind": "random",
+            "nominal_size": 0.0127,
+            "material": "ceramic",
+            "a": 370.0,
+            "void_fraction": 0.64,
+            "sigma_c": 0.061,
+            "C_L": None,
+            "C_V": None,
+            "C_h": None,
+            "C_S": None,
+            "source": (
+                "Treybal, Mass-Transfer Operations, 3rd ed. (1980), Table 6.3, 1/2 in ceramic Raschig "
+                "rings (from memory); sigma_c: Onda et al. (1968) (from memory)"
+            ),
+        },
+        "mellapak-250y": {
+            "kind": "structured",
+            "nominal_size": 0.0119,
+            "material": "steel",
+            "a": 250.0,
+            "void_fraction": 0.970,
+            "sigma_c": 0.075,
+            "C_L": None,
+            "C_V": None,
+            "C_h": 0.554,
+            "C_S": 3.157,
+            "S": 0.0171,
+            "B": 0.0241,
+            "h": 0.0119,
+            "theta": 45.0,
+            "source": (
+                "a, void fraction, C_h, C_S: Billet & Schultes (1999) Table 1 (from memory); geometry: "
+                "Rocha, Bravo & Fair (1996) Table 1 (from memory); nominal size: the crimp height"
+            ),
+        },
+        "gauze-bx": {
+            "kind": "structured",
+            "nominal_size": 0.0064,
+            "material": "steel gauze",
+            "a": 492.0,
+            "void_fraction": 0.90,
+            "sigma_c": 0.075,
+            "C_L": None,
+            "C_V": None,
+            "C_h": None,
+            "C_S": None,
+            "S": 0.0089,
+            "B": 0.0127,
+            "h": 0.0064,
+            "theta": 60.0,
+            "source": (
+                "Bravo, Rocha & Fair (1985), Hydrocarbon Processing 64(1), 91, Table 1 (from memory); "
+                "nominal size: the crimp height"
+            ),
+        },
+    }
+)

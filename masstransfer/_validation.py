@@ -24,11 +24,12 @@ from typing import Any, ParamSpec, TypeVar, overload
 import numpy as np
 
 from ._typing import FloatArray, FloatOrArray
-from .errors import InputShapeError, InputTypeError, InputValueError
+from .errors import InputShapeError, InputTypeError, InputValueError, UnitError
 
 __all__ = [
     "MAGNITUDE_LIMIT",
     "as_float",
+    "call_with_quantities",
     "check_finite",
     "check_nonnegative",
     "check_positive",
@@ -36,6 +37,7 @@ __all__ = [
     "collect_warnings",
     "finish",
     "guard",
+    "has_quantity",
     "in_range",
     "scalar",
     "warn_caller",
@@ -56,8 +58,16 @@ def _describe(value: Any) -> str:
 
 def as_float(name: str, value: Any) -> FloatOrArray:
     """Return ``value`` as a float (for Python scalars) or a float64 array."""
-    if type(value) is float or type(value) is int:
-        return float(value)
+    if type(value) is float:
+        return value
+    if type(value) is int:
+        try:
+            return float(value)
+        except OverflowError:
+            raise InputValueError(
+                f"{name} is an integer of {value.bit_length()} bits, beyond double precision; "
+                f"pass a value within +-{MAGNITUDE_LIMIT:g} in SI units"
+            ) from None
     if isinstance(value, bool | str | bytes | complex) or value is None:
         raise InputTypeError(
             f"{name}={value!r} is a {type(value).__name__}, not a number; pass a float or an array of floats"
@@ -70,6 +80,11 @@ def as_float(name: str, value: Any) -> FloatOrArray:
             )
         raw = value
     else:
+        if _is_quantity_type(type(value)):  # never strip a unit silently
+            raise UnitError(
+                f"{name} is a physical quantity ({value!r}) where a plain number in SI units is "
+                "expected here; pass the magnitude in the documented unit"
+            )
         try:
             raw = np.asarray(value)
         except (TypeError, ValueError) as exc:
@@ -275,7 +290,9 @@ def warn_caller(message: str, category: type[Warning]) -> None:
         frame.f_lineno,
         module=frame.f_globals.get("__name__"),
         registry=registry,
-        module_globals=frame.f_globals,
+        # source lines come from the caller's module, except for code with no file behind it
+        # (python -c, a REPL, exec), whose loader cannot give any
+        module_globals=None if filename.startswith("<") else frame.f_globals,
     )
 
 
@@ -321,7 +338,41 @@ def _finite_out(out: Any, depth: int = 0) -> bool:
     return True
 
 
+def call_with_quantities(fn: Callable[..., _R], args: tuple[Any, ...], kwargs: dict[str, Any]) -> _R:
+    """Run ``fn`` on quantities, as the guard does: for the few public functions without a guard."""
+    from ._units import call_with_units
+
+    return call_with_units(fn, fn, args, kwargs)  # type: ignore[no-any-return]
+
+
 _ARITHMETIC = (FloatingPointError, OverflowError, ZeroDivisionError, RuntimeWarning)
+
+#: Argument types that are never physical quantities: the quantity check stops at one set look-up.
+_PLAIN_TYPES: frozenset[type] = frozenset(
+    {float, int, str, bool, type(None), np.ndarray, np.float64, list, tuple, dict}
+)
+#: Other argument types seen, and whether they are quantities (pint's classes, found by duck typing).
+_QUANTITY_TYPES: dict[type, bool] = {}
+
+
+def _is_quantity_type(t: type) -> bool:
+    known = _QUANTITY_TYPES.get(t)
+    if known is None:
+        known = hasattr(t, "_REGISTRY") and hasattr(t, "to") and hasattr(t, "magnitude")
+        if len(_QUANTITY_TYPES) < 512:
+            _QUANTITY_TYPES[t] = known
+    return known
+
+
+def has_quantity(args: tuple[Any, ...], kwargs: dict[str, Any]) -> bool:
+    """Tell whether any argument is a physical quantity, without importing pint."""
+    for a in args:
+        if type(a) not in _PLAIN_TYPES and _is_quantity_type(type(a)):
+            return True
+    for a in kwargs.values():  # noqa: SIM110 - a plain loop: no generator object on every call
+        if type(a) not in _PLAIN_TYPES and _is_quantity_type(type(a)):
+            return True
+    return False
 
 
 @overload
@@ -344,6 +395,11 @@ def guard(
     (``AttributeError``, ``KeyError``, ``IndexError``, a stray ``TypeError``), propagates as
     itself with its full traceback.  Argument domains are declared inside each function by the
     ``check_*`` helpers of this module, once, before any arithmetic.
+
+    When an argument is a physical quantity (pint), the call goes through
+    :func:`masstransfer._units.call_with_units`: quantities are converted to the units the
+    docstring states for each parameter, and the result is returned as a quantity in the unit
+    of the Returns section.  Plain calls pay one type look-up per argument and import nothing.
     """
 
     def decorate(f: Callable[_P, _R]) -> Callable[_P, _R]:
@@ -351,6 +407,10 @@ def guard(
 
         @functools.wraps(f)
         def wrapper(*args: _P.args, **kwargs: _P.kwargs) -> _R:
+            if has_quantity(args, kwargs):  # pint quantities: converted by the docstring's units
+                from ._units import call_with_units
+
+                return call_with_units(wrapper, f, args, kwargs)  # type: ignore[no-any-return]
             try:
                 out = f(*args, **kwargs)
             except _ARITHMETIC as exc:

@@ -4,6 +4,9 @@ Subcommands: ``demo``, ``diffusivity``, ``coefficient``, ``correlations``
 and ``wet-bulb``.  Readable tables with units by default, ``--json`` for
 scripts.  Errors from the library print one line (a JSON object with ``--json``) and exit with
 status 2; cautions (envelope warnings) go to stderr, or into the JSON under ``"warnings"``.
+
+Values may carry units (``-T "60 degC"``) and ``--units`` picks the units shown; see
+:mod:`masstransfer._cli_units`.
 """
 
 from __future__ import annotations
@@ -15,17 +18,33 @@ import re
 import sys
 import warnings
 from collections.abc import Sequence
-from typing import Any
+from typing import Any, NoReturn
 
 import numpy as np
 
+from . import _cli_column, _cli_humidity, _cli_units
 from .errors import MassTransferError
 
 __all__ = ["main"]
 
 
+class _UsageError(Exception):
+    """A command-line usage mistake (unknown option, missing argument), raised by the parser."""
+
+    def __init__(self, parser: argparse.ArgumentParser, message: str) -> None:
+        super().__init__(message)
+        self.parser = parser
+
+
+class _Parser(argparse.ArgumentParser):
+    """An argument parser that raises usage errors instead of exiting, so --json can report them."""
+
+    def error(self, message: str) -> NoReturn:
+        raise _UsageError(self, message)
+
+
 def _parser() -> argparse.ArgumentParser:
-    p = argparse.ArgumentParser(
+    p = _Parser(
         prog="masstransfer",
         description="Diffusivities, mass-transfer coefficients and correlations for process engineering.",
     )
@@ -79,6 +98,9 @@ def _parser() -> argparse.ArgumentParser:
     w.add_argument("--rh", type=float, required=True, help="relative humidity as a fraction (0-1)")
     w.add_argument("-P", "--pressure", type=float, default=101325.0, metavar="PA", help="pressure in Pa")
     w.add_argument("--json", action="store_true", help="print JSON instead of a table")
+    _cli_column.register(sub)
+    _cli_humidity.register(sub)
+    _cli_units.install(p)  # values with units, --units for output, --uncertainty
     return p
 
 
@@ -105,6 +127,7 @@ def _state_args(p: argparse.ArgumentParser) -> None:
 
 
 def _table(title: str, header: Sequence[str], rows: Sequence[Sequence[str]], foot: str = "") -> str:
+    header, rows = _cli_units.convert_table(list(header), [list(r) for r in rows])
     widths = [max(len(h), *(len(r[i]) for r in rows)) for i, h in enumerate(header)]
     line = "  ".join(h.rjust(w) for h, w in zip(header, widths, strict=True))
     out = [title, line, "-" * len(line)]
@@ -125,6 +148,7 @@ def _diffusivity(args: argparse.Namespace) -> str:
     else:
         method = args.method or "wilke-chang"
         D = np.atleast_1d(liquid_diffusivity(args.solute, args.medium, T, method))
+    u = _cli_units.method_uncertainty(args.phase, method)
     if args.json:
         return json.dumps(
             {
@@ -136,6 +160,7 @@ def _diffusivity(args: argparse.Namespace) -> str:
                 "P_Pa": args.pressure if args.phase == "gas" else None,
                 "T_K": T.tolist(),
                 "D_m2_per_s": D.tolist(),
+                "relative_uncertainty": u,
             },
             indent=2,
         )
@@ -155,7 +180,10 @@ def _diffusivity(args: argparse.Namespace) -> str:
         + _table(
             f"Diffusivity of {args.solute} in {args.medium} ({where}); method: {method}",
             ["T [K]", "D [m^2/s]", "D [cm^2/s]"],
-            [[f"{t:.2f}", f"{d:.4e}", f"{d * 1e4:.4e}"] for t, d in zip(T, D, strict=True)],
+            [
+                [f"{t:.2f}", _cli_units.plus_minus(d, u), _cli_units.plus_minus(d * 1e4, u)]
+                for t, d in zip(T, D, strict=True)
+            ],
             "" if report else "Estimates; check safety-relevant designs against measured data.",
         )
     )
@@ -165,15 +193,22 @@ def _coefficient(args: argparse.Namespace) -> str:
     from .surface._analogy import heat_transfer_coefficient_from_mass, mass_transfer_from_heat
 
     T = np.asarray(args.temperature, dtype=float)
+    u_given = {"h_uncertainty": args.uncertainty}  # of the coefficient given, h or k_c
     if args.h is not None:
-        res = mass_transfer_from_heat(args.h, args.solute, args.medium, T, args.pressure, phase=args.phase)
+        res = mass_transfer_from_heat(
+            args.h, args.solute, args.medium, T, args.pressure, phase=args.phase, **u_given
+        )
         h = np.broadcast_to(np.asarray(res.h), T.shape)
     else:
         probe = mass_transfer_from_heat(1.0, args.solute, args.medium, T, args.pressure, phase=args.phase)
         h = np.atleast_1d(
             heat_transfer_coefficient_from_mass(args.kc, rho=probe.rho, cp=probe.cp, Pr=probe.Pr, Sc=probe.Sc)
         )
-        res = mass_transfer_from_heat(h, args.solute, args.medium, T, args.pressure, phase=args.phase)
+        res = mass_transfer_from_heat(
+            h, args.solute, args.medium, T, args.pressure, phase=args.phase, **u_given
+        )
+    u = res.relative_uncertainty  # the same for h from k_c: one power law, read either way
+    derived = "k_c_m_per_s" if args.h is not None else "h_W_per_m2K"
     fields: dict[str, Any] = {
         "T_K": T,
         "h_W_per_m2K": h,
@@ -202,6 +237,7 @@ def _coefficient(args: argparse.Namespace) -> str:
                 "method": res.method,
                 "warnings": list(res.warnings),
                 **{k: v.tolist() for k, v in cols.items()},
+                "relative_uncertainty": None if u is None else np.asarray(u, dtype=float).tolist(),
             },
             indent=2,
         )
@@ -215,6 +251,11 @@ def _coefficient(args: argparse.Namespace) -> str:
         keys.append("k_x_mol_per_m2s")
     fmt = {"T_K": "{:.2f}", "h_W_per_m2K": "{:.4g}", "Pr": "{:.3f}", "Sc": "{:.3f}", "Le": "{:.3f}"}
     rows = [[fmt.get(k, "{:.4e}").format(cols[k][i]) for k in keys] for i in range(T.size)]
+    ud = None if u is None else np.broadcast_to(np.asarray(u, dtype=float), T.shape)
+    for i, row in enumerate(rows):  # ± one standard deviation on the coefficient derived
+        row[keys.index(derived)] = _cli_units.plus_minus(
+            float(cols[derived][i]), None if ud is None else float(ud[i]), ".4g" if args.kc else ".4e"
+        )
     foot = res.method + "."
     if res.warnings:
         foot += "\nWarnings:\n  " + "\n  ".join(res.warnings)
@@ -364,13 +405,26 @@ def main(argv: Sequence[str] | None = None) -> int:
     True
 
     """
-    args = _parser().parse_args(argv)
+    argv = list(sys.argv[1:] if argv is None else argv)
+    try:
+        args = _parser().parse_args(argv)
+    except _UsageError as exc:
+        if "--json" in argv:
+            payload = {"error": {"type": "UsageError", "message": str(exc)}}
+            _emit(json.dumps(payload, indent=2), [])
+        else:
+            exc.parser.print_usage(sys.stderr)
+            print(f"{exc.parser.prog}: error: {exc}", file=sys.stderr)
+        return 2
+    _cli_units.begin(args)
     as_json = bool(getattr(args, "json", False))
     handlers = {
         "diffusivity": _diffusivity,
         "coefficient": _coefficient,
         "correlations": _correlations,
         "wet-bulb": _wet_bulb,
+        "column": _cli_column.run,
+        "evaporate": _cli_humidity.run,
     }
     # one process, one thread: recording every warning here is safe, and keeps `-W error`
     # (or any user filter) from turning a library caution into a traceback
@@ -383,6 +437,8 @@ def main(argv: Sequence[str] | None = None) -> int:
                 out = demo_report()
             else:
                 out = handlers[args.command](args)
+            if as_json:
+                out = _cli_units.convert_json(out)
         except MassTransferError as exc:
             return _emit_error(exc, as_json)
     notes = list(dict.fromkeys(f"{w.category.__name__}: {w.message}" for w in caught))

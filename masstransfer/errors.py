@@ -20,6 +20,7 @@ __all__ = [
     "MissingConstantError",
     "MissingDependencyError",
     "OutOfRangeError",
+    "UnitError",
     "UnknownMethodError",
     "UnknownSpeciesError",
 ]
@@ -79,3 +80,11 @@ class EnvelopeWarning(MassTransferWarning):
 
 class AmbiguousSpeciesWarning(MassTransferWarning):
     """A species name or formula fits several substances; the message names the one chosen."""
+
+
+class UnitError(InputTypeError):
+    """A physical quantity (pint) has a unit that cannot be converted to the one the argument takes.
+
+    Also raised for a quantity passed where the argument takes no unit.  Both a
+    :class:`MassTransferError` and a ``TypeError`` (as pint's own dimensionality error is).
+    """

@@ -9,7 +9,17 @@ import sys
 
 import masstransfer as mt
 
-SUBPACKAGES = ("substances", "diffusivity", "surface", "bodies", "testing", "constants", "errors")
+SUBPACKAGES = (
+    "substances",
+    "diffusivity",
+    "surface",
+    "bodies",
+    "contactors",
+    "humidity",
+    "testing",
+    "constants",
+    "errors",
+)
 
 
 def _public_paths() -> dict[int, list[str]]:

@@ -69,3 +69,17 @@ def test_closed_pipe_ends_quietly():
     _, err = prog.communicate(timeout=120)
     assert "Traceback" not in err
     assert "BrokenPipeError" not in err
+
+
+def test_usage_mistake_with_json_is_json_too(capsys):
+    assert main(["diffusivity", "water", "air", "--json"]) == 2  # -T missing
+    data = json.loads(capsys.readouterr().out)
+    assert data["error"]["type"] == "UsageError"
+    assert "-T/--temperature" in data["error"]["message"]
+
+
+def test_usage_mistake_without_json_prints_usage_and_the_option(capsys):
+    assert main(["diffusivity", "water", "air"]) == 2
+    err = capsys.readouterr().err
+    assert err.startswith("usage: masstransfer diffusivity")
+    assert "-T/--temperature" in err

@@ -20,7 +20,7 @@ from hypothesis import HealthCheck, given, settings
 from hypothesis import strategies as st
 
 import masstransfer as mt
-from masstransfer import bodies, diffusivity, substances, surface
+from masstransfer import bodies, contactors, diffusivity, humidity, substances, surface
 
 _PET = bodies.Layer(12e-6, permeability=1e-17)
 _REC = surface.correlation("sphere-ranz-marshall")
@@ -198,7 +198,7 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
     ("convert_flux", bodies.convert_flux, {"value": 1.0, "from_unit": "g(H2O)/(m2 day)"}),
     ("permeability", bodies.permeability, {"D": 1e-12, "S": 1e-4}),
     ("steady_flux", bodies.steady_flux, {"layers": [_PET], "p_high": 2e4}),
-    ("b_arrhenius", bodies.arrhenius, {"T": 310.0, "value_ref": 1.0, "T_ref": 298.0, "E": 4e4}),
+    ("arrhenius_ref", diffusivity.arrhenius_diffusivity, {"T": 310.0, "D0": 1.0, "Ea": -4e4, "T_ref": 298.0}),
     ("time_lag", bodies.time_lag, {"thickness": 5e-5, "D": 1e-12}),
     ("lag_to_D", bodies.diffusivity_from_time_lag, {"thickness": 5e-5, "lag": 400.0}),
     ("permeation_curve", bodies.permeation_curve, {"t": 1000.0, "thickness": 5e-5, "D": 1e-12}),
@@ -223,7 +223,313 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
     ("parachor", substances.parachor, {"liquid": "benzene"}),
     ("quayle_parachor", substances.quayle_parachor, {"atoms": {"C": 6, "H": 6}, "smiles": "c1ccccc1"}),
     ("air_viscosity", mt.gas_model("air").viscosity, {"T": 300.0}),
+    ("quantities", mt.units.quantities, {"result": mt.diffusivity_report("water", "air", 300.0)}),
     ("water_density", mt.liquid_model("water").density, {"T": 300.0}),
+    ("water_surface_tension", mt.liquid_model("water").surface_tension, {"T": 300.0}),
+    # contactors
+    ("packing", contactors.packing, {"name": "pall-ring-metal-50"}),
+    (
+        "onda_wetted_area",
+        contactors.onda_wetted_area,
+        {"a": 112.6, "sigma_c": 0.075, "sigma": 0.072, "L_mass": 5.0, "mu_L": 1e-3, "rho_L": 998.0},
+    ),
+    (
+        "onda_k_L",
+        contactors.onda_k_L,
+        {
+            "L_mass": 5.0,
+            "a_w": 60.0,
+            "mu_L": 1e-3,
+            "rho_L": 998.0,
+            "D_L": 1.9e-9,
+            "a": 112.6,
+            "nominal_size": 0.05,
+        },
+    ),
+    (
+        "onda_k_G",
+        contactors.onda_k_G,
+        {
+            "G_mass": 1.8,
+            "a": 112.6,
+            "mu_G": 1.8e-5,
+            "rho_G": 1.2,
+            "D_G": 1.6e-5,
+            "nominal_size": 0.05,
+            "T": 298.0,
+        },
+    ),
+    (
+        "bs_k_L",
+        contactors.billet_schultes_k_L,
+        {
+            "u_L": 0.005,
+            "a": 112.6,
+            "void_fraction": 0.951,
+            "C_L": 1.192,
+            "rho_L": 998.0,
+            "mu_L": 1e-3,
+            "D_L": 1.9e-9,
+        },
+    ),
+    (
+        "bs_holdup",
+        contactors.billet_schultes_holdup,
+        {"u_L": 0.005, "a": 112.6, "C_h": 0.784, "rho_L": 998.0, "mu_L": 1e-3},
+    ),
+    (
+        "bs_k_G",
+        contactors.billet_schultes_k_G,
+        {
+            "u_V": 1.5,
+            "u_L": 0.005,
+            "a": 112.6,
+            "void_fraction": 0.951,
+            "C_V": 0.41,
+            "C_h": 0.784,
+            "rho_V": 1.2,
+            "mu_V": 1.8e-5,
+            "D_V": 1.6e-5,
+            "rho_L": 998.0,
+            "mu_L": 1e-3,
+            "T": 298.0,
+        },
+    ),
+    (
+        "bs_area",
+        contactors.billet_schultes_area,
+        {"u_L": 0.005, "a": 112.6, "void_fraction": 0.951, "rho_L": 998.0, "mu_L": 1e-3, "sigma": 0.072},
+    ),
+    (
+        "bs_loading",
+        contactors.billet_schultes_loading_velocity,
+        {
+            "u_L": 0.005,
+            "u_V": 2.0,
+            "a": 112.6,
+            "void_fraction": 0.951,
+            "C_S": 2.725,
+            "rho_L": 998.0,
+            "rho_V": 1.2,
+            "mu_L": 1e-3,
+            "mu_V": 1.8e-5,
+        },
+    ),
+    (
+        "brf_k_L",
+        contactors.bravo_rocha_fair_k_L,
+        {
+            "u_L": 0.003,
+            "void_fraction": 0.9,
+            "S": 0.0089,
+            "B": 0.0127,
+            "h": 0.0064,
+            "theta": 60.0,
+            "rho_L": 998.0,
+            "mu_L": 1e-3,
+            "D_L": 1.9e-9,
+        },
+    ),
+    (
+        "brf_k_G",
+        contactors.bravo_rocha_fair_k_G,
+        {
+            "u_V": 1.5,
+            "u_L": 0.003,
+            "void_fraction": 0.9,
+            "S": 0.0089,
+            "B": 0.0127,
+            "h": 0.0064,
+            "theta": 60.0,
+            "rho_V": 1.2,
+            "mu_V": 1.8e-5,
+            "D_V": 1.6e-5,
+            "rho_L": 998.0,
+            "mu_L": 1e-3,
+            "T": 298.0,
+        },
+    ),
+    (
+        "packed_column",
+        contactors.packed_column,
+        {
+            "packing": "pall-ring-metal-50",
+            "u_V": 1.2,
+            "u_L": 0.005,
+            "T": 298.0,
+            "rho_V": 1.2,
+            "mu_V": 1.8e-5,
+            "D_V": 1.6e-5,
+            "rho_L": 998.0,
+            "mu_L": 1e-3,
+            "D_L": 1.9e-9,
+            "sigma": 0.072,
+        },
+    ),
+    (
+        "rate_packing",
+        contactors.rate_packing,
+        {
+            "solute": "ammonia",
+            "gas": "air",
+            "liquid": "water",
+            "packing": "pall-ring-metal-50",
+            "T": 298.0,
+            "u_V": 1.2,
+            "u_L": 0.005,
+            "method": "onda",
+        },
+    ),
+    (
+        "rate_bubble_column",
+        contactors.rate_bubble_column,
+        {"solute": "oxygen", "liquid": "water", "T": 298.0, "u_G": 0.05, "diameter": 0.3},
+    ),
+    (
+        "ay_holdup",
+        contactors.akita_yoshida_holdup,
+        {"u_G": 0.05, "diameter": 0.3, "rho_L": 998.0, "mu_L": 1e-3, "sigma": 0.072},
+    ),
+    (
+        "ay_kla",
+        contactors.akita_yoshida_kla,
+        {"u_G": 0.05, "diameter": 0.3, "rho_L": 998.0, "mu_L": 1e-3, "sigma": 0.072, "D_L": 2e-9},
+    ),
+    ("vant_riet", contactors.vant_riet_kla, {"power_per_volume": 1000.0, "u_G": 0.01}),
+    (
+        "calderbank_k_L",
+        contactors.calderbank_bubble_k_L,
+        {"bubble_diameter": 0.004, "D_L": 2e-9, "rho_L": 998.0, "mu_L": 1e-3, "rho_G": 1.2},
+    ),
+    (
+        "sano_k_L",
+        contactors.sano_particle_k_L,
+        {"epsilon": 0.5, "particle_diameter": 2e-4, "nu_L": 1e-6, "D_L": 1e-9},
+    ),
+    ("hatta", contactors.hatta_number, {"k2": 10.0, "c_B": 500.0, "D_A": 1.8e-9, "k_L": 1e-4}),
+    ("enhancement", contactors.enhancement_factor, {"hatta": 5.0, "E_inf": 10.0}),
+    ("enhancement_film", contactors.enhancement_film, {"hatta": 2.0}),
+    ("enhancement_penetration", contactors.enhancement_penetration, {"hatta": 2.0}),
+    ("enhancement_renewal", contactors.enhancement_surface_renewal, {"hatta": 2.0}),
+    (
+        "enhancement_inf",
+        contactors.enhancement_instantaneous,
+        {"D_A": 1.8e-9, "D_B": 1.2e-9, "c_B": 500.0, "c_Ai": 30.0},
+    ),
+    (
+        "absorption_enhancement",
+        contactors.absorption_enhancement,
+        {"k2": 5.0, "c_B": 1000.0, "D_A": 1.8e-9, "D_B": 1.2e-9, "k_L": 1e-4, "c_Ai": 3.0},
+    ),
+    (
+        "transfer_units",
+        contactors.transfer_units,
+        {"y_in": 0.02, "y_out": 0.001, "x_in": 0.0, "m": 1.2, "A": 1.5},
+    ),
+    (
+        "stripping_units",
+        contactors.stripping_transfer_units,
+        {"x_in": 0.01, "x_out": 0.0005, "y_in": 0.0, "m": 30.0, "S": 2.0},
+    ),
+    ("htu", contactors.transfer_unit_height, {"flow": 20.0, "Ka": 40.0}),
+    ("htu_og", contactors.overall_gas_htu, {"H_G": 0.4, "H_L": 0.3, "A": 1.5}),
+    ("htu_ol", contactors.overall_liquid_htu, {"H_G": 0.4, "H_L": 0.3, "A": 1.5}),
+    (
+        "numerical_ntu",
+        contactors.numerical_transfer_units,
+        {"y_in": 0.02, "y_out": 0.001, "x_in": 0.0, "L_over_G": 1.8, "equilibrium": 1.2},
+    ),
+    (
+        "column_profile",
+        contactors.column_profile,
+        {"y_in": 0.02, "x_in": 0.0, "G": 20.0, "L": 36.0, "Kya": 40.0, "equilibrium": 1.2, "y_out": 0.001},
+    ),
+    (
+        "column_rating",
+        contactors.column_profile,
+        {"y_in": 0.02, "x_in": 0.0, "G": 20.0, "L": 36.0, "Kya": 40.0, "equilibrium": 1.2, "height": 3.0},
+    ),
+    # humidity: psychrometrics, evaporation, drying, towers
+    (
+        "humid_gas_state",
+        humidity.humid_gas_state,
+        {"liquid": "water", "gas": "air", "T": 303.15, "relative_humidity": 0.5},
+    ),
+    (
+        "humid_gas_state_dew",
+        humidity.humid_gas_state,
+        {"liquid": "toluene", "gas": "nitrogen", "T": 330.0, "dew_point": 290.0},
+    ),
+    ("Y_from_y", humidity.humidity_ratio_from_y, {"y": 0.02, "M_vapour": 0.018, "M_gas": 0.029}),
+    ("y_from_Y", humidity.y_from_humidity_ratio, {"humidity_ratio": 0.01, "M_vapour": 0.018, "M_gas": 0.029}),
+    (
+        "evaporation_rate",
+        humidity.evaporation_rate,
+        {"liquid": "water", "gas": "air", "T": 333.15, "h": 28.0, "humidity_ratio": 0.005},
+    ),
+    (
+        "evaporation_radiant",
+        humidity.evaporation_rate,
+        {
+            "liquid": "ethanol",
+            "gas": "nitrogen",
+            "T": 320.0,
+            "h": 20.0,
+            "y": 0.01,
+            "radiant_temperature": 340.0,
+            "conduction_coefficient": 5.0,
+        },
+    ),
+    (
+        "evaporation_correlation",
+        humidity.evaporation_rate,
+        {
+            "liquid": "water",
+            "gas": "air",
+            "T": 340.0,
+            "relative_humidity": 0.1,
+            "correlation": "flat-plate-laminar-average",
+            "velocity": 3.0,
+            "L": 0.5,
+        },
+    ),
+    (
+        "drying_time",
+        humidity.drying_time,
+        {
+            "mass_flux": 1e-4,
+            "shape": "slab",
+            "size": 0.01,
+            "dry_density": 1400.0,
+            "D": 1e-9,
+            "X_initial": 0.4,
+            "X_critical": 0.2,
+            "X_final": 0.05,
+        },
+    ),
+    (
+        "merkel_ntu",
+        humidity.merkel_ntu,
+        {
+            "T_liquid_in": 313.15,
+            "T_liquid_out": 298.15,
+            "L_over_G": 0.8,
+            "T_gas": 298.15,
+            "relative_humidity": 0.4,
+        },
+    ),
+    (
+        "counterflow_tower",
+        humidity.counterflow_tower,
+        {
+            "T_liquid_in": 313.15,
+            "T_liquid_out": 298.15,
+            "L_over_G": 0.8,
+            "T_gas": 298.15,
+            "relative_humidity": 0.4,
+            "steps": 4,
+        },
+    ),
 ]
 
 # Bad values, grouped by the error each must give for a numeric argument.
@@ -343,3 +649,43 @@ def test_adversarial_inputs(name, fn, valid, data):
         assert may_succeed, f"{name}({key}={value!r}) returned a result; expected {allowed}"
     else:
         assert isinstance(err, allowed), f"{name}({key}={value!r}) raised {type(err).__name__}: {err}"
+
+
+# --- physically signed results -------------------------------------------------------------
+# Functions whose result may take either sign by nature (fluxes driven by a difference, whose
+# direction follows the inputs); every other number-valued public function returns a positive
+# quantity (a diffusivity, a coefficient, a dimensionless group, a fraction of uptake, ...).
+_EITHER_SIGN = {"fick", "high_flux_rate", "equimolar", "stagnant", "profile"}
+
+
+def _valid_value(fn: Any, kwargs: dict[str, Any]) -> Any:
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore", mt.MassTransferWarning)
+        return fn(**kwargs)
+
+
+_POSITIVE = [
+    c
+    for c in CASES
+    if c[0] not in _EITHER_SIGN and isinstance(v := _valid_value(c[1], c[2]), float) and v > 0
+]
+
+
+@pytest.mark.parametrize(("name", "fn", "valid"), _POSITIVE, ids=[c[0] for c in _POSITIVE])
+@settings(max_examples=10, deadline=None, suppress_health_check=[HealthCheck.function_scoped_fixture])
+@given(data=st.data())
+def test_positive_quantities_stay_positive_and_finite(name, fn, valid, data):
+    # every positive number input scaled by 0.5-2: a positive, finite result or a library error
+    scaled = dict(valid)
+    for key, v in valid.items():
+        if type(v) is float and v > 0:
+            scaled[key] = v * data.draw(st.floats(0.5, 2.0), label=key)
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore", mt.MassTransferWarning)
+        warnings.simplefilter("error", RuntimeWarning)
+        try:
+            out = fn(**scaled)
+        except mt.MassTransferError:
+            return
+    assert np.isfinite(out)
+    assert out > 0, f"{name}({scaled}) = {out!r}: the quantity must be positive"

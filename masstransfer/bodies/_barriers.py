@@ -22,8 +22,18 @@ from typing import Final, overload
 
 import numpy as np
 
+from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import as_float, check_nonnegative, check_positive, check_shapes, finish, guard, scalar
+from .._validation import (
+    MAGNITUDE_LIMIT,
+    as_float,
+    check_nonnegative,
+    check_positive,
+    check_shapes,
+    finish,
+    guard,
+    scalar,
+)
 from ..constants import ATM, R_GAS, T_ICE
 from ..errors import InputTypeError, InputValueError, UnknownMethodError
 
@@ -34,7 +44,7 @@ __all__ = [
     "BarrierResult",
     "IngressResult",
     "Layer",
-    "arrhenius",
+    "TimeLagFit",
     "convert_flux",
     "convert_permeability",
     "convert_permeance",
@@ -291,9 +301,14 @@ class Layer:
     def __post_init__(self) -> None:
         for name in ("thickness", "D", "S", "permeability"):
             v = getattr(self, name)
-            if v is None:
+            if v is None and name != "thickness":
                 continue
-            if not isinstance(v, int | float) or not math.isfinite(v) or v <= 0:
+            if isinstance(v, bool) or not isinstance(v, int | float):
+                raise InputTypeError(
+                    f"Layer {self.name!r}: {name}={v!r} is a {type(v).__name__}, not a number; "
+                    "pass a finite positive float in SI units"
+                )
+            if not math.isfinite(v) or v <= 0 or v > MAGNITUDE_LIMIT or v < 1 / MAGNITUDE_LIMIT:
                 raise InputValueError(
                     f"Layer {self.name!r}: {name}={v!r} must be a finite positive number (SI)"
                 )
@@ -325,8 +340,8 @@ class Layer:
         return self.thickness / self._P
 
 
-@dataclass(frozen=True)
-class BarrierResult:
+@dataclass(frozen=True, eq=False)
+class BarrierResult(FrozenResult):
     """Steady permeation through layers in series.
 
     Attributes
@@ -445,54 +460,6 @@ def steady_flux(
         interface_concentrations=tuple(conc),
         resistances=res,
     )
-
-
-@guard
-def arrhenius(T: ArrayLike, value_ref: ArrayLike, T_ref: float, E: ArrayLike) -> FloatOrArray:
-    """Arrhenius temperature dependence of D, S or permeability.
-
-    .. math:: X(T) = X_{ref}\\exp\\left[-\\frac{E}{R}\\left(\\frac{1}{T} - \\frac{1}{T_{ref}}\\right)\\right]
-
-    Parameters
-    ----------
-    T : float or array_like
-        Temperature [K].
-    value_ref : float or array_like
-        Value at T_ref [its unit].
-    T_ref : float
-        Reference temperature [K].
-    E : float or array_like
-        Activation energy (E_D, E_P) or heat of solution (Delta H_S, often
-        negative) [J/mol].
-
-    Returns
-    -------
-    float or numpy.ndarray
-        Value at T [unit of value_ref].
-
-    Notes
-    -----
-    E_P = E_D + Delta H_S.  Holds within the range of the measurements and
-    not across a glass transition.
-
-    References
-    ----------
-    Crank, J. (1975). *The Mathematics of Diffusion*, 2nd ed., Section 9.1.
-
-    Examples
-    --------
-    >>> round(arrhenius(313.15, 1.0, 298.15, 40e3), 3)
-    2.167
-
-    """
-    Tv = check_positive("T", T)
-    v0 = check_positive("value_ref", value_ref)
-    T0 = float(check_positive("T_ref", scalar("T_ref", T_ref)))
-    Ev = as_float("E", E)
-    if not np.all(np.isfinite(Ev)):
-        raise InputValueError("E is not finite; pass a finite energy [J/mol]")
-    check_shapes(T=Tv, value_ref=v0, E=Ev)
-    return finish(v0 * np.exp(-np.asarray(Ev) / R_GAS * (1.0 / np.asarray(Tv) - 1.0 / T0)))
 
 
 @overload
@@ -651,7 +618,7 @@ def permeation_curve(t: ArrayLike, thickness: float, D: float, c_upstream: float
 
 
 @guard
-def fit_time_lag(t: ArrayLike, Q: ArrayLike, t_min: float | None = None) -> tuple[float, float, float, float]:
+def fit_time_lag(t: ArrayLike, Q: ArrayLike, t_min: float | None = None) -> TimeLagFit:
     """Fit the steady-state asymptote of a permeation curve: slope and time lag.
 
     Parameters
@@ -666,9 +633,8 @@ def fit_time_lag(t: ArrayLike, Q: ArrayLike, t_min: float | None = None) -> tupl
 
     Returns
     -------
-    tuple of float
-        (steady flux [mol/(m^2 s)], its standard error, time lag [s], its
-        standard error).
+    TimeLagFit
+        Steady flux [mol/(m^2 s)], time lag [s] and their standard errors.
 
     Notes
     -----
@@ -682,8 +648,8 @@ def fit_time_lag(t: ArrayLike, Q: ArrayLike, t_min: float | None = None) -> tupl
     Examples
     --------
     >>> t = np.linspace(0, 5000, 200)
-    >>> J, sJ, lag, slag = fit_time_lag(t, permeation_curve(t, 50e-6, 1e-12, 10.0))
-    >>> round(lag, 1)
+    >>> fit = fit_time_lag(t, permeation_curve(t, 50e-6, 1e-12, 10.0))
+    >>> round(fit.lag, 1)
     416.7
 
     """
@@ -710,14 +676,39 @@ def fit_time_lag(t: ArrayLike, Q: ArrayLike, t_min: float | None = None) -> tupl
     lag = -icpt / slope
     # theta = -b/a: var = (b^2 var_a + a^2 var_b - 2ab cov_ab)/a^4
     var_lag = (icpt**2 * cov[0, 0] + slope**2 * cov[1, 1] - 2 * slope * icpt * cov[0, 1]) / slope**4
-    return slope, math.sqrt(cov[0, 0]), lag, math.sqrt(max(var_lag, 0.0))
+    return TimeLagFit(
+        flux=slope, flux_stderr=math.sqrt(cov[0, 0]), lag=lag, lag_stderr=math.sqrt(max(var_lag, 0.0))
+    )
+
+
+@dataclass(frozen=True, eq=False)
+class TimeLagFit(FrozenResult):
+    """Result of :func:`fit_time_lag`.
+
+    Attributes
+    ----------
+    flux : float
+        Steady permeation flux, the asymptote's slope [mol/(m^2 s)].
+    flux_stderr : float
+        Its standard error [mol/(m^2 s)].
+    lag : float
+        Time lag, the asymptote's intercept on the time axis [s].
+    lag_stderr : float
+        Its standard error [s].
+
+    """
+
+    flux: float
+    flux_stderr: float
+    lag: float
+    lag_stderr: float
 
 
 # --- packaging ------------------------------------------------------------------------------
 
 
-@dataclass(frozen=True)
-class IngressResult:
+@dataclass(frozen=True, eq=False)
+class IngressResult(FrozenResult):
     """Oxygen (or other permeant) reaching a sealed pack through its walls.
 
     Attributes
@@ -780,7 +771,8 @@ def oxygen_ingress(
         pack with an oxygen scavenger or a product that consumes oxygen).
     T : float
         Storage temperature [K] (used for film resistances and reports;
-        give permeabilities at this temperature, see :func:`arrhenius`).
+        give permeabilities at this temperature, see
+        :func:`masstransfer.diffusivity.arrhenius_diffusivity` with ``T_ref``).
     limit_mg : float, optional
         Ingress limit for the pack [mg O2]; the time to reach it is returned.
 

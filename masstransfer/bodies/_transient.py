@@ -17,12 +17,14 @@ from __future__ import annotations
 
 import functools
 import math
+from collections.abc import Callable
 from dataclasses import dataclass
 from typing import Any, Final, overload
 
 import numpy as np
 from scipy import special
 
+from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import (
     check_finite,
@@ -75,8 +77,12 @@ def _shape(shape: str) -> str:
 
 
 def _ierfc(x: Any) -> Any:
-    """Integral of the complementary error function, exp(-x^2)/sqrt(pi) - x erfc(x)."""
-    return np.exp(-x * x) / math.sqrt(math.pi) - x * special.erfc(x)
+    """Integral of the complementary error function, exp(-x^2)/sqrt(pi) - x erfc(x).
+
+    Zero (below 1e-300) beyond x = 26, where x^2 would overflow for extreme arguments.
+    """
+    xc = np.minimum(x, 26.0)
+    return np.where(x > 26.0, 0.0, np.exp(-xc * xc) / math.sqrt(math.pi) - xc * special.erfc(xc))
 
 
 def _n_terms(T_min: float, decay: float) -> int:
@@ -84,7 +90,7 @@ def _n_terms(T_min: float, decay: float) -> int:
     if T_min <= 0:
         return _MAX_TERMS
     n = math.sqrt(math.log(1.0 / SERIES_TOLERANCE) / (decay * T_min)) + 2
-    return int(min(_MAX_TERMS, math.ceil(n)))
+    return _MAX_TERMS if not n < _MAX_TERMS else math.ceil(n)  # also when n overflowed to inf
 
 
 def _chunked_sum(n_terms: int, term: Any, size: int, chunk: int = 64) -> FloatArray:
@@ -211,6 +217,27 @@ def _uptake_constant_surface(shape: str, T: FloatArray) -> FloatArray:
 
 
 def _uptake_surface_resistance(shape: str, T: FloatArray, biot: float) -> FloatArray:
+    out = np.empty_like(T)
+    tiny = T < _TINY_TIME
+    if tiny.any():  # a plane surface with resistance, x = Bi sqrt(T); series where x is small
+        x = biot * np.sqrt(T[tiny])
+        nu = {"slab": 1.0, "cylinder": 2.0, "sphere": 3.0}[shape]
+        planar = np.where(
+            x < 1e-3,
+            x * x - 4 * x**3 / (3 * math.sqrt(math.pi)) + x**4 / 2,
+            special.erfcx(np.maximum(x, 1e-3)) - 1 + 2 * x / math.sqrt(math.pi),
+        )
+        out[tiny] = nu * planar / biot
+    short = (T < _PROFILE_SHORT_TIME) & ~tiny
+    if short.any():  # exact transform inverted numerically: no cancellation at tiny times
+        out[short] = _talbot(lambda s, rows: _laplace_uptake(shape, s, biot), T[short])
+    if not (short | tiny).all():
+        short = short | tiny
+        out[~short] = _uptake_surface_resistance_series(shape, T[~short], biot)
+    return out
+
+
+def _uptake_surface_resistance_series(shape: str, T: FloatArray, biot: float) -> FloatArray:
     out = np.empty_like(T)
     L = biot
     short = np.zeros(T.shape, dtype=bool)
@@ -407,20 +434,26 @@ def concentration_profile(
     Returns
     -------
     float or numpy.ndarray
-        0 at the initial state, 1 at equilibrium with the surroundings; for
+        Scaled concentration [-]: 0 at the initial state, 1 at equilibrium with the surroundings; for
         release, 1 minus this is the remaining fraction of the initial
         excess.
 
     Notes
     -----
-    Series summed to :data:`SERIES_TOLERANCE` (at most 20000 terms; at
-    Dt/a^2 below about 1e-8 the truncated series resolves the profile only
-    to the penetration depth it can represent).
+    At Dt/a^2 >= 1e-3 the series are summed to :data:`SERIES_TOLERANCE`.
+    Below, the exact Laplace-domain solution is inverted on the fixed
+    Talbot contour (24 nodes; agrees with the converged series to about
+    1e-13), evaluated only within 16 penetration depths of the surface and
+    zero deeper in, so very short times cost little and stay exact.
 
     References
     ----------
     Crank, J. (1975). *The Mathematics of Diffusion*, 2nd ed., Eqs. (4.17),
     (4.53), (5.22), (5.50), (6.18), (6.39).
+
+    Abate, J. & Valkó, P. P. (2004). Multi-precision Laplace transform
+    inversion. *Int. J. Numer. Meth. Eng.* 60, 979-993 (the fixed Talbot
+    method).
 
     Examples
     --------
@@ -439,10 +472,103 @@ def concentration_profile(
     X, Tt = np.broadcast_arrays(np.asarray(x, dtype=float) / a, np.asarray(tv, dtype=float) * Dv / a**2)
     Xf, Tf = X.ravel(), Tt.ravel()
     out = np.zeros_like(Xf)
-    pos = Tf > 0
-    if pos.any():
-        out[pos] = _profile(s, Xf[pos], Tf[pos], _biot(biot))
+    bi = _biot(biot)
+    series = Tf >= _PROFILE_SHORT_TIME
+    if series.any():
+        out[series] = _profile(s, Xf[series], Tf[series], bi)
+    # Short times: the exact Laplace-domain solution inverted numerically, only where the
+    # concentration is not negligible (within 16 penetration depths sqrt(Dt) of the surface).
+    near = (Tf > 0) & ~series & (1.0 - Xf < 16.0 * np.sqrt(Tf))
+    tiny = near & (Tf < _TINY_TIME)
+    if tiny.any():  # the plane semi-infinite solution (Carslaw & Jaeger 1959, sec. 2.7)
+        xi = (1.0 - Xf[tiny]) / (2.0 * np.sqrt(Tf[tiny]))
+        plane = special.erfc(xi)
+        if bi is not None:
+            plane = plane - np.exp(-xi * xi) * special.erfcx(xi + bi * np.sqrt(Tf[tiny]))
+        out[tiny] = plane
+    short = near & ~tiny
+    if short.any():
+        out[short] = _talbot_profile(s, Xf[short], Tf[short], bi)
     return finish(np.clip(out, 0.0, 1.0).reshape(X.shape))
+
+
+#: Below this Dt/a^2 the profile is obtained by inverting its Laplace transform (the series
+#: would need more than a few hundred terms and resolve the thin penetration layer poorly).
+_PROFILE_SHORT_TIME: Final = 1e-3
+#: Below this Dt/a^2 the penetration depth is under 1e-7 of the size: the plane semi-infinite
+#: forms hold to a relative 1e-7 (curvature) and far inside the absolute series tolerance; the
+#: Talbot nodes would also need Bessel functions of complex arguments near 1e10 in modulus.
+_TINY_TIME: Final = 1e-14
+#: Terms of the fixed Talbot contour; 24 gives about 1e-13 against the converged series.
+_TALBOT_TERMS: Final = 24
+
+
+def _surface_ratio_and_gradient(shape: str, X: Any, q: Any) -> tuple[Any, Any]:
+    """c(X)/c(1) and g(q) = (dc/dX)/c at X = 1 of the constant-surface transform, q = sqrt(s).
+
+    cosh(Xq)/cosh q and q tanh q (slab), I0(Xq)/I0(q) and q I1(q)/I0(q) (cylinder),
+    sinh(Xq)/(X sinh q) and q coth q - 1 (sphere); written with decaying exponentials and the
+    exponentially scaled Bessel functions so that nothing overflows at large |s|.
+    """
+    e2 = np.exp(-2 * q)
+    if shape == "slab":
+        ratio = np.exp((X - 1) * q) * (1 + np.exp(-2 * X * q)) / (1 + e2)
+        return ratio, q * (1 - e2) / (1 + e2)
+    if shape == "sphere":
+        Xs = np.maximum(X, 1e-9)
+        core = np.exp((Xs - 1) * q) * (1 - np.exp(-2 * Xs * q)) / (Xs * (1 - e2))
+        centre = 2 * q * np.exp(-q) / (1 - e2)
+        return np.where(X < 1e-9, centre, core), q * (1 + e2) / (1 - e2) - 1
+    i0 = special.ive(0, q)
+    return special.ive(0, X * q) / i0 * np.exp((X - 1) * q.real), q * special.ive(1, q) / i0
+
+
+def _laplace_profile(shape: str, X: Any, s: Any, biot: float | None) -> Any:
+    """Laplace transform in T = Dt/a^2 of c/c_s at X = r/a, at complex s (Crank, ch. 2-6).
+
+    Constant surface: the ratio of :func:`_surface_ratio_and_gradient` over s.  With a surface
+    resistance the transform is multiplied by Bi / (g(q) + Bi).
+    """
+    ratio, grad = _surface_ratio_and_gradient(shape, X, np.sqrt(s))
+    if biot is None:
+        return ratio / s
+    return biot * ratio / (s * (grad + biot))
+
+
+def _laplace_uptake(shape: str, s: Any, biot: float | None) -> Any:
+    """Laplace transform in T of M_t/M_inf: nu g(q) c_surface(s)/s, nu = 1, 2, 3 by shape."""
+    _, grad = _surface_ratio_and_gradient(shape, 1.0, np.sqrt(s))
+    nu = {"slab": 1.0, "cylinder": 2.0, "sphere": 3.0}[shape]
+    if biot is None:
+        return nu * grad / s**2
+    return nu * grad * biot / (s**2 * (grad + biot))
+
+
+def _talbot(F: Callable[[Any, slice], Any], T: FloatArray) -> FloatArray:
+    """Invert a Laplace transform at every T on the fixed Talbot contour (Abate & Valko 2004).
+
+    ``F(s, rows)`` evaluates the transform for the rows ``rows`` of T at s of shape (rows, nodes).
+    """
+    M = _TALBOT_TERMS
+    k = np.arange(1, M)
+    theta = k * np.pi / M
+    cot = np.cos(theta) / np.sin(theta)
+    r = 2.0 * M / 5.0
+    delta = np.concatenate(([r + 0j], r * theta * (cot + 1j)))
+    gamma = np.concatenate(
+        ([0.5 * np.exp(r) + 0j], (1 + 1j * theta * (1 + cot**2) - 1j * cot) * np.exp(delta[1:]))
+    )
+    out = np.empty_like(T)
+    for start in range(0, T.size, 4096):  # blocks keep the complex temporaries small
+        sl = slice(start, start + 4096)
+        Fs = F(delta[None, :] / T[sl, None], sl)
+        out[sl] = (r / M) * np.sum((gamma[None, :] * Fs).real, axis=1) / T[sl]
+    return out
+
+
+def _talbot_profile(shape: str, X: FloatArray, T: FloatArray, biot: float | None) -> FloatArray:
+    """Return the concentration profile at short times by :func:`_talbot`."""
+    return _talbot(lambda s, rows: _laplace_profile(shape, X[rows, None], s, biot), T)
 
 
 def _profile(shape: str, X: FloatArray, T: FloatArray, biot: float | None) -> FloatArray:
@@ -736,8 +862,8 @@ def _half_T(shape: str) -> float:
     return float(brentq(lambda T: float(fractional_uptake(shape, T, 1.0, 1.0)) - 0.5, 1e-4, 1.0, xtol=1e-14))
 
 
-@dataclass(frozen=True)
-class DiffusivityFit:
+@dataclass(frozen=True, eq=False)
+class DiffusivityFit(FrozenResult):
     """Result of :func:`fit_diffusivity`.
 
     Attributes

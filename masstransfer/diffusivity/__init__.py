@@ -31,11 +31,12 @@ from ._liquid import (
     wilke_chang,
 )
 from ._porous import bosanquet, effective_diffusivity, knudsen_diffusivity
-from ._solid import arrhenius_diffusivity, arrhenius_parameters
+from ._solid import ArrheniusFit, arrhenius_diffusivity, arrhenius_parameters
 
 __all__ = [
     "GAS_METHODS",
     "LIQUID_METHODS",
+    "ArrheniusFit",
     "LiquidDiffusivityInputs",
     "arrhenius_diffusivity",
     "arrhenius_parameters",

@@ -23,7 +23,17 @@ import numpy as np
 
 from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, scalar, warn_caller
+from .._validation import (
+    call_with_quantities,
+    check_nonnegative,
+    check_positive,
+    check_shapes,
+    finish,
+    guard,
+    has_quantity,
+    scalar,
+    warn_caller,
+)
 from ..constants import DEBYE
 from ..errors import EnvelopeWarning, InputValueError, MissingConstantError
 from ..substances._species import Species, species
@@ -853,6 +863,8 @@ def gas_diffusivity(
     0.361
 
     """
+    if (type(T) is not float or type(P) is not float) and has_quantity((T, P), {}):  # pint: units
+        return call_with_quantities(gas_diffusivity, (solute, carrier, T, P, method), {})
     m = (_METHOD_KEYS.get(method) if type(method) is str else None) or normalise_method(method, GAS_METHODS)
     prepared = _prepare(m, solute, carrier)
     Tv = check_positive("T", T)

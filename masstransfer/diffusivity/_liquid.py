@@ -21,6 +21,7 @@ from typing import Final, overload
 import numpy as np
 
 from .. import _tables as data
+from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import AVOGADRO, BOLTZMANN, DEBYE
@@ -459,8 +460,8 @@ def stokes_einstein(
 # --------------------------------------------------------------------------
 
 
-@dataclass(frozen=True)
-class LiquidDiffusivityInputs:
+@dataclass(frozen=True, eq=False)
+class LiquidDiffusivityInputs(FrozenResult):
     """The constants :func:`liquid_diffusivity` used, after special cases.
 
     Attributes

@@ -5,10 +5,11 @@ from __future__ import annotations
 import warnings
 from collections.abc import Mapping
 from dataclasses import dataclass
-from types import MappingProxyType
 from typing import Literal
 
+from .._frozen import FrozenMapping, FrozenResult
 from .._typing import ArrayLike, FloatOrArray
+from .._uncertainty import stated_uncertainty
 from .._validation import check_positive, guard
 from ..errors import InputValueError
 from ..substances._species import Species, species
@@ -26,8 +27,8 @@ _GAS_CONSTANTS = {
 }
 
 
-@dataclass(frozen=True)
-class DiffusivityReport:
+@dataclass(frozen=True, eq=False)
+class DiffusivityReport(FrozenResult):
     """A diffusivity and what it rests on.
 
     Attributes
@@ -50,6 +51,11 @@ class DiffusivityReport:
         Envelope warnings raised by the computation.
     solute_identity, medium_identity : str
         The resolved substances: name, CAS number, formula and molar mass.
+    relative_uncertainty : float or None
+        Relative standard uncertainty of ``value`` [-] (one standard deviation,
+        as a fraction), from the method's stated accuracy: an average absolute
+        deviation times sqrt(pi/2), about 1.25 (normal errors); None where the
+        method states no number.
 
     """
 
@@ -66,6 +72,7 @@ class DiffusivityReport:
     warnings: tuple[str, ...]
     solute_identity: str = ""
     medium_identity: str = ""
+    relative_uncertainty: float | None = None
 
     def summary(self) -> str:
         """Render a short plain-text statement for a calculation note.
@@ -97,6 +104,11 @@ class DiffusivityReport:
                 f"{who}: {ident}"
                 for who, ident in (("solute", self.solute_identity), ("medium", self.medium_identity))
                 if ident
+            ),
+            *(
+                []
+                if self.relative_uncertainty is None
+                else [f"relative standard uncertainty: ±{100 * self.relative_uncertainty:.1f} % (1 sigma)"]
             ),
             "constants used (SI units) and their sources:",
         ]
@@ -160,7 +172,11 @@ def diffusivity_report(
     Notes
     -----
     Same numbers as :func:`gas_diffusivity` and :func:`liquid_diffusivity`;
-    the report is what a calculation note needs to defend them.
+    the report is what a calculation note needs to defend them.  Its
+    ``relative_uncertainty`` is the method's stated average absolute
+    deviation taken as a standard uncertainty (times sqrt(pi/2), normal
+    errors; Geary 1935); a stated bound would be divided by sqrt(3) (uniform;
+    JCGM 100:2008, 4.3.7).
 
     References
     ----------
@@ -212,9 +228,10 @@ def diffusivity_report(
         T=Tv,
         P=P_used,
         accuracy=accuracy,
-        constants=MappingProxyType({k: MappingProxyType(v) for k, v in consts.items()}),
+        constants=FrozenMapping(consts),
         notes=tuple(notes),
         warnings=tuple(str(w.message) for w in caught),
         solute_identity=a.identity,
         medium_identity=b.identity,
+        relative_uncertainty=stated_uncertainty(accuracy),
     )

@@ -34,7 +34,7 @@ from .._version import __version__
 __all__ = ["cache_directory", "load_curves", "store_curves"]
 
 #: Bumped whenever the stored layout or the fitting changes.
-FORMAT = 1
+FORMAT = 2
 
 
 def _versions() -> str:
@@ -80,7 +80,7 @@ def load_curves(kind: str, key: tuple[Any, ...]) -> dict[str, Any] | None:
     if path is None or not path.is_file():
         return None
     try:
-        with np.load(path, allow_pickle=False) as z:
+        with open(path, "rb") as fh, np.load(fh, allow_pickle=False) as z:
             meta = json.loads(str(z["meta"]))
             if meta.get("key") != repr((kind, key)):
                 return None  # a digest collision or a foreign file

@@ -1,12 +1,14 @@
 """Access to the ``chemicals``/``thermo`` databases: one loader at a time, without third-party noise.
 
-The databases are read with pandas on first use, and ``thermo``/``chemicals``
-fill module-level tables as they go; two threads reading them at once can
-leave a half-filled table behind.  Every read therefore happens inside
-:func:`loading`, which holds one process-wide re-entrant lock.  Some pandas
-releases warn about options those readers pass; those warnings concern the
-libraries, not the user's inputs, so they are silenced while the databases
-are read.
+The databases are read with pandas on first use; some pandas releases warn about options those
+readers pass.  Those warnings concern the libraries, not the user's inputs, so they are
+silenced while the databases are read.
+
+``thermo`` and ``chemicals`` load their tables lazily into module globals, which is not safe
+when several threads trigger the first load at once (a half-built table left behind breaks the
+process for good).  Every read therefore happens inside :func:`loading` (or :func:`quiet`),
+which holds one process-wide re-entrant lock: database reads and model builds are serialised,
+cached results are not.
 """
 
 from __future__ import annotations
@@ -17,16 +19,18 @@ import threading
 import warnings
 from collections.abc import Iterator
 
-__all__ = ["LOCK", "loading", "quiet"]
+__all__ = ["LOCK", "loading", "quiet", "thermo_models"]
 
-#: Held while any database is read or any property model is built (re-entrant).
+#: Held while any database is read or any property model is built (re-entrant: model builders
+#: call species look-ups).
 LOCK = threading.RLock()
+_LOCK = LOCK
 
 
 @contextlib.contextmanager
 def quiet() -> Iterator[None]:
-    """Silence deprecation, future and resource warnings raised while reading databases."""
-    with warnings.catch_warnings():
+    """Hold the database lock and silence third-party warnings raised while reading databases."""
+    with LOCK, warnings.catch_warnings():
         warnings.simplefilter("ignore", DeprecationWarning)
         warnings.simplefilter("ignore", FutureWarning)
         warnings.simplefilter("ignore", PendingDeprecationWarning)
@@ -39,8 +43,8 @@ def quiet() -> Iterator[None]:
 
 @contextlib.contextmanager
 def loading() -> Iterator[None]:
-    """Hold the database lock and silence third-party warnings while reading."""
-    with LOCK, quiet():
+    """Hold the database lock and silence third-party warnings while reading (same as quiet)."""
+    with quiet():
         yield
 
 

@@ -37,9 +37,9 @@ from numpy.polynomial import chebyshev as _cheb
 
 from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_positive, check_shapes, finish, guard
+from .._validation import check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import DEBYE, R_GAS
-from ..errors import InputValueError, MissingConstantError, OutOfRangeError
+from ..errors import EnvelopeWarning, InputValueError, MissingConstantError, OutOfRangeError
 from ._cache import load_curves, store_curves
 from ._databases import loading, thermo_models
 from ._species import Species, species
@@ -421,6 +421,7 @@ class LiquidModel:
     cp_molar: PropertyCurve
     psat: PropertyCurve | None = None
     hvap: PropertyCurve | None = None
+    sigma: PropertyCurve | None = None
 
     @property
     def T_min(self) -> float:
@@ -463,6 +464,11 @@ class LiquidModel:
         return finish(
             np.asarray(self._need(self.hvap, "enthalpy of vaporisation")(T)) / self.species.molar_mass
         )
+
+    @guard
+    def surface_tension(self, T: ArrayLike) -> FloatOrArray:
+        """Surface tension against its vapour or air [N/m] at ``T`` [K]."""
+        return self._need(self.sigma, "surface tension")(T)
 
     def _need(self, curve: PropertyCurve | None, what: str) -> PropertyCurve:
         if curve is None:
@@ -636,7 +642,7 @@ def _liquid_model(sp: Species) -> LiquidModel:
         return LiquidModel(species=sp, **cached)
     with loading(), thermo_models():
         model = _build_liquid_model(sp)
-    names = ("molar_volume", "mu", "k", "cp_molar", "psat", "hvap")
+    names = ("molar_volume", "mu", "k", "cp_molar", "psat", "hvap", "sigma")
     store_curves("liquid", key, {n: getattr(model, n) for n in names})
     return model
 
@@ -651,6 +657,7 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
         EnthalpyVaporization,
         HeatCapacityGas,
         HeatCapacityLiquid,
+        SurfaceTension,
         ThermalConductivityLiquid,
         VaporPressure,
         ViscosityLiquid,
@@ -684,6 +691,9 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
     )
     vp = VaporPressure(CASRN=kw["CASRN"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, omega=sp.omega)
     hv = EnthalpyVaporization(CASRN=kw["CASRN"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, omega=sp.omega)
+    st = SurfaceTension(
+        CASRN=kw["CASRN"], MW=kw["MW"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc, omega=sp.omega
+    )
     name = f"liquid {sp.name}"
     anchor = _liquid_core(sp)
     return LiquidModel(
@@ -694,7 +704,17 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
         cp_molar=_thermo_curve(cp, f"heat capacity of {name}", "J/(mol K)", T_low, T_high, anchor),
         psat=_optional_curve(vp, f"vapour pressure of {name}", "Pa", T_low, T_crit, anchor),
         hvap=_optional_curve(hv, f"enthalpy of vaporisation of {name}", "J/mol", T_low, T_high, anchor),
+        sigma=_surface_tension_curve(st, name, T_low, T_crit, anchor),
     )
+
+
+def _surface_tension_curve(
+    prop: Any, name: str, T_low: float, T_crit: float, anchor: tuple[float, float]
+) -> PropertyCurve | None:
+    """Surface tension up to 0.9 Tc (it vanishes at Tc, where its logarithm cannot be interpolated)."""
+    top = T_crit if not math.isfinite(T_crit) else T_low + 0.9 * (T_crit - T_low)
+    with np.errstate(over="ignore", under="ignore", invalid="ignore", divide="ignore"):
+        return _optional_curve(prop, f"surface tension of {name}", "N/m", T_low, top, anchor)
 
 
 def _optional_curve(
@@ -982,7 +1002,28 @@ def henry_constant(solute: str | Species, solvent: str | Species, T: ArrayLike) 
     Tv = check_positive("T", T)
     A, B, C, D, E, F = _henry_coefficients(a, b)
     Ta = np.asarray(Tv, dtype=float)
+    lo = b.Tm if b.Tm is not None else 0.0
+    hi = b.Tc if b.Tc is not None else math.inf
+    if Ta.size and (Ta.min() < lo or Ta.max() > hi):
+        raise OutOfRangeError(
+            f"T from {Ta.min():.6g} to {Ta.max():.6g} K leaves the liquid range of the solvent "
+            f"{b.name!r} ({lo:.2f} K melting point to {hi:.2f} K critical point); no Henry's-law "
+            "constant exists there"
+        )
+    if Ta.size and (Ta.min() < _HENRY_T_RANGE[0] or Ta.max() > _HENRY_T_RANGE[1]):
+        warn_caller(
+            f"henry_constant: T from {Ta.min():.6g} to {Ta.max():.6g} K is outside "
+            f"{_HENRY_T_RANGE[0]:g}-{_HENRY_T_RANGE[1]:g} K, where the compiled temperature "
+            "dependences (fitted near 298.15 K) are extrapolated; prefer measured solubilities",
+            EnvelopeWarning,
+        )
     return finish(np.exp(A + (B + E / Ta) / Ta + C * np.log(Ta) + Ta * (D + F * Ta)))
+
+
+#: Temperatures over which the compiled Henry's-law temperature dependences are used without a
+#: warning: the compilations fit van 't Hoff forms to data mostly between the ice point and the
+#: normal boiling point of water (Sander 2015, sec. 2.4).
+_HENRY_T_RANGE = (273.15, 373.15)
 
 
 @functools.lru_cache(maxsize=256)

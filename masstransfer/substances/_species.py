@@ -88,6 +88,10 @@ class FrozenMap(Mapping[_K, _V]):
 _CAS_PATTERN = re.compile(r"\d{2,7}-\d{2}-\d")
 _AIR_NAMES = frozenset({"air", "dry air"})
 
+#: Largest dipole moment accepted [C m]: 12 debye, above every small molecule's (common practice:
+#: water 1.85 D, acetonitrile 3.9 D, DMSO 4.0 D, ionic-liquid ion pairs about 10 D).
+_DIPOLE_LIMIT = 12 * 3.33564e-30
+
 _FLOAT_FIELDS = (
     "molar_mass",
     "Tb",
@@ -180,11 +184,37 @@ class Species:
     sources: Mapping[str, str] = field(default_factory=FrozenMap, compare=False)
 
     def __post_init__(self) -> None:
-        for name in _FLOAT_FIELDS:
+        if not isinstance(self.name, str):
+            raise InputTypeError(f"Species name={self.name!r} is a {type(self.name).__name__}; pass a string")
+        for name in (*_FLOAT_FIELDS, "omega", "dipole"):
             value = getattr(self, name)
-            if value is None:
+            if value is None and name != "molar_mass":
                 continue
-            if not isinstance(value, int | float) or not math.isfinite(value) or value <= 0:
+            if isinstance(value, bool) or not isinstance(value, int | float):
+                raise InputTypeError(
+                    f"Species {self.name!r}: {name}={value!r} is a {type(value).__name__}, not a "
+                    + ("number; the molar mass is required [kg/mol]" if value is None else "number")
+                )
+            if name == "omega":  # the acentric factor may be negative (H2, He, Ne)
+                if not math.isfinite(value) or not -1.0 < value < 3.0:
+                    raise InputValueError(
+                        f"Species {self.name!r}: omega={value!r} is not a plausible acentric factor "
+                        "(about -0.4 to 2); check the value"
+                    )
+                continue
+            if name == "dipole":  # zero for a non-polar molecule
+                if not math.isfinite(value) or value < 0:
+                    raise InputValueError(
+                        f"Species {self.name!r}: dipole={value!r} must be a finite number >= 0 [C m]"
+                    )
+                if value > _DIPOLE_LIMIT:
+                    raise InputValueError(
+                        f"Species {self.name!r}: dipole={value!r} C m is implausible (no small molecule "
+                        f"exceeds about 12 debye = {_DIPOLE_LIMIT:.1e} C m); it looks like a value in "
+                        "debye: multiply by masstransfer.constants.DEBYE (3.33564e-30 C m)"
+                    )
+                continue
+            if not math.isfinite(value) or value <= 0:
                 raise InputValueError(
                     f"Species {self.name!r}: {name}={value!r} must be a finite positive "
                     "number in SI units (or omitted)"

@@ -15,16 +15,20 @@ from __future__ import annotations
 
 import math
 import warnings
+from collections.abc import Callable, Mapping
 from dataclasses import dataclass
-from typing import Literal, overload
+from typing import Any, Literal, overload
 
 import numpy as np
 
+from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
+from .._uncertainty import combine, relative_input, stated_uncertainty
 from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import R_GAS
-from ..errors import InputValueError
+from ..errors import EnvelopeWarning, InputValueError
 from ..substances._species import Species, species
+from ._medium import Override, gas_side, is_composition, property_override
 
 __all__ = [
     "TransferCoefficients",
@@ -42,6 +46,45 @@ __all__ = [
 ]
 
 _TWO_THIRDS = 2.0 / 3.0
+
+#: The ranges over which j_H = f/2 and j_D = f/2 were established, the usual statement of the
+#: Chilton-Colburn analogy's validity (Incropera & DeWitt 6th ed., Eqs. (6.70)-(6.71), from memory).
+_COLBURN_RANGES = (("Pr", 0.6, 60.0), ("Sc", 0.6, 3000.0))
+
+
+def _colburn_envelope(Pr: FloatOrArray, Sc: FloatOrArray) -> None:
+    """Warn where Pr or Sc leaves the range over which the analogy was established."""
+    for (name, lo, hi), v in zip(_COLBURN_RANGES, (Pr, Sc), strict=True):
+        if isinstance(v, float):
+            vmin = vmax = v
+        elif v.size:
+            vmin, vmax = float(v.min()), float(v.max())
+        else:
+            continue
+        if vmin < lo or vmax > hi:
+            bad = vmin if vmin < lo else vmax
+            warn_caller(
+                f"Chilton-Colburn analogy: {name}={bad!r} is outside {lo:g} to {hi:g}, the range over "
+                "which j_H = j_D was established (Incropera & DeWitt 6th ed., Eqs. 6.70-6.71); the "
+                "result is an extrapolation",
+                EnvelopeWarning,
+            )
+
+
+def _require_positive_denominator(
+    analogy: str, den: np.ndarray[Any, np.dtype[np.float64]], a: dict[str, FloatOrArray]
+) -> None:
+    """Refuse inputs for which an analogy's denominator is not positive (a negative Stanton number)."""
+    bad = den <= 0.0
+    if not bad.any():
+        return
+    f = float(np.broadcast_to(a["f_darcy"], den.shape)[bad].ravel()[0])
+    p = float(np.broadcast_to(a["Pr"], den.shape)[bad].ravel()[0])
+    raise InputValueError(
+        f"f_darcy={f!r} with Pr={p!r} makes the denominator of the {analogy} analogy zero or negative "
+        "(a negative Stanton number): the analogy holds for turbulent-flow friction factors (f_darcy "
+        "below about 0.1) and Pr (Sc) near 1; pass f_darcy and Pr in that range"
+    )
 
 
 def _checked(**kw: ArrayLike) -> dict[str, FloatOrArray]:
@@ -104,8 +147,11 @@ def mass_transfer_coefficient_from_heat(
     -----
     Holds for geometries and flows where heat and mass transfer follow the
     same correlation with the same boundary conditions, at low mass-transfer
-    rates, for 0.6 < Pr, Sc < 2500 and without form drag dominating (Chilton
-    & Colburn 1934; Incropera & DeWitt Section 6.7.2).  The result is an
+    rates, for 0.6 < Pr < 60 and 0.6 < Sc < 3000 (the ranges over which
+    :math:`j_H = f/2` and :math:`j_D = f/2` were established, Incropera &
+    DeWitt Eqs. (6.70)-(6.71)), and without form drag dominating (Chilton &
+    Colburn 1934).  Outside those ranges it warns with
+    :class:`~masstransfer.errors.EnvelopeWarning`.  The result is an
     estimate of the same quality as the h it starts from.
 
     References
@@ -127,6 +173,7 @@ def mass_transfer_coefficient_from_heat(
     a = _checked(rho=rho, cp=cp, Pr=Pr, Sc=Sc)
     n = check_positive("exponent", exponent)
     check_shapes(h=hv, **a)
+    _colburn_envelope(a["Pr"], a["Sc"])
     # the property factor first, so an array of h costs one multiplication
     return finish(hv * ((a["Pr"] / a["Sc"]) ** n / (a["rho"] * a["cp"])))
 
@@ -197,6 +244,7 @@ def heat_transfer_coefficient_from_mass(
     a = _checked(rho=rho, cp=cp, Pr=Pr, Sc=Sc)
     n = check_positive("exponent", exponent)
     check_shapes(k_c=kv, **a)
+    _colburn_envelope(a["Pr"], a["Sc"])
     return finish(kv * (a["rho"] * a["cp"] * (a["Sc"] / a["Pr"]) ** n))
 
 
@@ -393,7 +441,9 @@ def stanton_prandtl_taylor(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     """
     a = _checked(f_darcy=f_darcy, Pr=Pr)
     g = np.asarray(a["f_darcy"]) / 8.0
-    return finish(g / (1.0 + 5.0 * np.sqrt(g) * (np.asarray(a["Pr"]) - 1.0)))
+    den = 1.0 + 5.0 * np.sqrt(g) * (np.asarray(a["Pr"]) - 1.0)
+    _require_positive_denominator("Prandtl-Taylor", den, a)
+    return finish(g / den)
 
 
 @guard
@@ -437,8 +487,11 @@ def stanton_von_karman(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
     g = np.asarray(a["f_darcy"]) / 8.0
     P = np.asarray(a["Pr"])
     if (1.0 + 5.0 / 6.0 * (P - 1.0) <= 0).any():
-        raise InputValueError("Pr must exceed 0.2 for the von Karman analogy; pass Pr > 0.2")
-    return finish(g / (1.0 + 5.0 * np.sqrt(g) * (P - 1.0 + np.log(1.0 + 5.0 / 6.0 * (P - 1.0)))))
+        bad = float(P[P <= 0.2].ravel()[0])
+        raise InputValueError(f"Pr={bad!r} must exceed 0.2 for the von Karman analogy; pass Pr > 0.2")
+    den = 1.0 + 5.0 * np.sqrt(g) * (P - 1.0 + np.log(1.0 + 5.0 / 6.0 * (P - 1.0)))
+    _require_positive_denominator("von Karman", den, a)
+    return finish(g / den)
 
 
 @guard
@@ -521,8 +574,8 @@ def psychrometric_ratio(h: ArrayLike, k_Y: ArrayLike, c_s: ArrayLike) -> FloatOr
 # --------------------------------------------------------------------------
 
 
-@dataclass(frozen=True)
-class TransferCoefficients:
+@dataclass(frozen=True, eq=False)
+class TransferCoefficients(FrozenResult):
     """Mass-transfer coefficients from a known h, with everything used to get them.
 
     Attributes
@@ -553,6 +606,14 @@ class TransferCoefficients:
         Every warning raised on the way.
     solute_identity, carrier_identity : str
         The resolved substances: name, CAS number, formula and molar mass.
+    user_supplied : tuple of str
+        Names of the properties the user supplied (``"rho"``, ``"D"``, ...); the
+        others came from the databases.
+    relative_uncertainty : float or numpy.ndarray or None
+        Relative standard uncertainty of k_c [-] (one standard deviation, as a
+        fraction; the same for k_G, k_y and k_x): the diffusivity method's
+        stated accuracy and the ``h_uncertainty`` given, combined by
+        linearisation; None where neither is known.
 
     """
 
@@ -578,19 +639,34 @@ class TransferCoefficients:
     warnings: tuple[str, ...]
     solute_identity: str = ""
     carrier_identity: str = ""
+    user_supplied: tuple[str, ...] = ()
+    relative_uncertainty: FloatOrArray | None = None
+
+
+def _carrier_identity(carrier: Any) -> str:
+    """Describe the resolved carrier: one species, or each component of a composition with its fraction."""
+    if is_composition(carrier):
+        return "; ".join(f"{species(n).identity}: {float(y):g}" for n, y in carrier.items())
+    return species(carrier).identity
 
 
 @guard
 def mass_transfer_from_heat(
     h: ArrayLike,
     solute: str | Species,
-    carrier: str | Species,
+    carrier: str | Species | Mapping[str, float],
     T: ArrayLike,
     P: ArrayLike = 101325.0,
     *,
     phase: Literal["gas", "liquid"] = "gas",
     diffusivity_method: str | None = None,
     exponent: float = _TWO_THIRDS,
+    rho: Override = None,
+    cp: Override = None,
+    k: Override = None,
+    mu: Override = None,
+    D: Override = None,
+    h_uncertainty: ArrayLike = 0.0,
 ) -> TransferCoefficients:
     """Mass-transfer coefficients for a species from a known h, resolving properties.
 
@@ -600,8 +676,11 @@ def mass_transfer_from_heat(
         Heat-transfer coefficient for the same geometry and flow [W/(m^2 K)].
     solute : str or Species
         Transferring species.
-    carrier : str or Species
-        Carrier fluid (gas, e.g. ``"air"``, or solvent, e.g. ``"water"``).
+    carrier : str or Species or mapping
+        Carrier fluid (gas, e.g. ``"air"``, or solvent, e.g. ``"water"``), or a gas
+        given as a composition by mole fraction, e.g. ``{"nitrogen": 0.79, "oxygen": 0.21}``
+        or humid air ``{"air": 0.97, "water": 0.03}`` (mixture properties by the mixing
+        rules of ``chemicals``, the diffusivity by Blanc's law).
     T : float or array_like
         Film temperature [K].
     P : float or array_like
@@ -613,17 +692,39 @@ def mass_transfer_from_heat(
         ``'wilke-chang'`` for liquids).
     exponent : float
         Analogy exponent n [-] (2/3 for Chilton-Colburn).
+    rho : float or callable, optional
+        The user's carrier density [kg/m^3]: a number (or array broadcasting with T), or a
+        function of T [K] accepting numpy arrays.  Replaces the database value.
+    cp : float or callable, optional
+        The user's carrier specific heat capacity [J/(kg K)], as for ``rho``.
+    k : float or callable, optional
+        The user's carrier thermal conductivity [W/(m K)], as for ``rho``.
+    mu : float or callable, optional
+        The user's carrier viscosity [Pa s], as for ``rho``.
+    D : float or callable, optional
+        The user's diffusivity of the solute in the carrier [m^2/s], as for ``rho``.
+    h_uncertainty : float or array_like
+        Relative standard uncertainty of ``h`` [-] (0.10 for 10 %, one
+        standard deviation); 0 by default.
 
     Returns
     -------
     TransferCoefficients
-        k_c and its other conventions, with the properties, groups, method
-        and warnings.
+        k_c and its other conventions, with the properties, groups, method,
+        warnings and the relative standard uncertainty of k_c.
 
     Notes
     -----
-    Properties are the carrier's (dilute solute).  The error is that of h
-    combined with that of the diffusivity (k_c scales as D^(2/3)).  Where the
+    Properties are the carrier's (dilute solute).  Values the user supplies replace the
+    database's and are listed in ``user_supplied``; a carrier or solute the databases lack
+    works once every property it needs is given.  The error is that of h
+    combined with that of the diffusivity: with the properties fixed,
+    :math:`k_c = h\\,\\rho^{n-1} c_p^{n-1} k^{-n} D^{n}` (the viscosity cancels),
+    so by linearisation
+    :math:`u(k_c)^2 = u(h)^2 + (n\\,u(D))^2`, with u(D) the diffusivity
+    method's stated average absolute deviation times sqrt(pi/2) (normal
+    errors).  The property models' own errors (a few per cent at most) are
+    not included.  Where the
     result bears on safety (toxic or flammable vapour release, oxygen
     ingress into food, pressure equipment), check it against measured data,
     local codes and licensed engineering practice.
@@ -638,44 +739,87 @@ def mass_transfer_from_heat(
     >>> r = mass_transfer_from_heat(35.0, "water", "air", 320.0)
     >>> round(r.k_c, 4), round(r.Le, 3)
     (0.0345, 0.873)
+    >>> r = mass_transfer_from_heat(35.0, "ethanol", {"air": 0.97, "water": 0.03}, 320.0)
+    >>> r.carrier
+    'mixture(air 0.97, water 0.03)'
 
     """
-    from ..diffusivity._gas import gas_diffusivity
-    from ..diffusivity._liquid import liquid_diffusivity
-    from ..substances._properties import gas_model, liquid_model
+    from ..diffusivity._common import normalise_method
+    from ..diffusivity._gas import GAS_METHODS
+    from ..diffusivity._liquid import LIQUID_METHODS, liquid_diffusivity
+    from ..substances._properties import liquid_model
 
     if phase not in ("gas", "liquid"):
         raise InputValueError(f"phase={phase!r} must be 'gas' or 'liquid'")
     hv = check_nonnegative("h", h, "pass a heat-transfer coefficient of zero or more [W/(m^2 K)]")
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
-    check_shapes(h=hv, T=Tv, P=Pv)
-    a, b = species(solute), species(carrier)
+    u_h = relative_input("h_uncertainty", h_uncertainty)
+    check_shapes(h=hv, T=Tv, P=Pv, h_uncertainty=u_h)
+    a = species(solute)
+    if phase == "liquid" and is_composition(carrier):
+        raise InputValueError(
+            f"carrier={dict(carrier)!r}: a composition is accepted for a gas carrier only; for a "  # type: ignore[arg-type]
+            "liquid pass one solvent (and its mixture properties as rho=, cp=, k=, mu=, D=)"
+        )
+    rho_v: FloatOrArray
+    cp_v: FloatOrArray
+    k_v: FloatOrArray
+    mu_v: FloatOrArray
+    D_v: FloatOrArray
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
         if phase == "gas":
-            g = gas_model(b)
-            rho, cp, k, mu = (
-                g.density(Tv, Pv),
-                g.heat_capacity(Tv),
-                g.thermal_conductivity(Tv),
-                g.viscosity(Tv),
+            side = gas_side(
+                a,
+                carrier,
+                name="carrier",
+                diffusivity_method=diffusivity_method,
+                rho=rho,
+                cp=cp,
+                k=k,
+                mu=mu,
+                D=D,
             )
-            method = diffusivity_method or "fuller"
-            D = gas_diffusivity(a, b, Tv, Pv, method=method)
+            carrier_name, supplied = side.label, side.user_supplied
+            rho_v, cp_v, k_v, mu_v = (
+                side.density(Tv, Pv),
+                side.heat_capacity(Tv),
+                side.thermal_conductivity(Tv),
+                side.viscosity(Tv),
+            )
+            method = side.diffusivity_method
+            D_v = side.diffusivity(Tv, Pv)
+            M_carrier = side.molar_mass
         else:
-            lq = liquid_model(b)
-            rho, cp, k, mu = (
-                lq.density(Tv),
-                lq.heat_capacity(Tv),
-                lq.thermal_conductivity(Tv),
-                lq.viscosity(Tv),
-            )
+            b = species(carrier)  # type: ignore[arg-type]
+            carrier_name, M_carrier = b.name, b.molar_mass
+            over = {
+                "rho": property_override("rho", rho, "kg/m^3"),
+                "cp": property_override("cp", cp, "J/(kg K)"),
+                "k": property_override("k", k, "W/(m K)"),
+                "mu": property_override("mu", mu, "Pa s"),
+                "D": property_override("D", D, "m^2/s"),
+            }
+            supplied = tuple(key for key, fn in over.items() if fn is not None)
+
+            def value(key: str, model: Callable[[], Callable[[FloatOrArray], FloatOrArray]]) -> FloatOrArray:
+                fn = over[key]
+                return model()(Tv) if fn is None else fn(Tv)
+
+            rho_v = value("rho", lambda: liquid_model(b).density)
+            cp_v = value("cp", lambda: liquid_model(b).heat_capacity)
+            k_v = value("k", lambda: liquid_model(b).thermal_conductivity)
+            mu_v = value("mu", lambda: liquid_model(b).viscosity)
             method = diffusivity_method or "wilke-chang"
-            D = liquid_diffusivity(a, b, Tv, method=method)
+            if over["D"] is None:
+                D_v = liquid_diffusivity(a, b, Tv, method=method)
+            else:
+                D_v = over["D"](Tv)
+                method = "user-supplied"
     for w in caught:
         warn_caller(str(w.message), w.category)
-    r, c, kk, m, d = (np.asarray(x) for x in (rho, cp, k, mu, D))
+    r, c, kk, m, d = (np.asarray(x, dtype=float) for x in (rho_v, cp_v, k_v, mu_v, D_v))
     Pr = c * m / kk
     Sc = m / (r * d)
     Le = Sc / Pr
@@ -689,7 +833,9 @@ def mass_transfer_from_heat(
         k_x = None
     else:
         k_G = k_y = None
-        k_x = finish(k_c * r / b.molar_mass)
+        k_x = finish(k_c * r / M_carrier)
+    methods = GAS_METHODS if phase == "gas" else LIQUID_METHODS
+    u_D = stated_uncertainty(methods[normalise_method(method, methods, "diffusivity_method")])
     n_text = "2/3" if math.isclose(exponent, _TWO_THIRDS) else f"{exponent:g}"
     return TransferCoefficients(
         h=finish(np.asarray(hv, dtype=float)),
@@ -698,7 +844,7 @@ def mass_transfer_from_heat(
         k_y=k_y,
         k_x=k_x,
         solute=a.name,
-        carrier=b.name,
+        carrier=carrier_name,
         phase=phase,
         T=Tv,
         P=Pv,
@@ -713,5 +859,7 @@ def mass_transfer_from_heat(
         method=f"Chilton-Colburn analogy (exponent {n_text}); diffusivity by {method}",
         warnings=tuple(str(w.message) for w in caught),
         solute_identity=a.identity,
-        carrier_identity=b.identity,
+        carrier_identity=_carrier_identity(carrier),
+        user_supplied=supplied,
+        relative_uncertainty=combine((1.0, u_h if np.any(u_h) else None), (exponent, u_D)),
     )

@@ -346,8 +346,18 @@ def high_flux_rate(
     Notes
     -----
     As the mole fractions go to zero this tends to the low-flux
-    :math:`F(y_s - y_b)`; the ratio of the two is the film-theory factor of
-    :func:`high_flux_correction`.
+    :math:`F(y_s - y_b)`.  For a stagnant carrier (``flux_ratio`` = 1) the
+    ratio of the two is
+
+    .. math:: \\frac{N_A}{F\\,(y_{A,s} - y_{A,b})} = \\frac{1}{y_{B,M}},
+        \\qquad y_{B,M} = \\frac{y_{B,b} - y_{B,s}}{\\ln(y_{B,b}/y_{B,s})}
+
+    the log-mean carrier fraction: the bulk-flow correction is already in the
+    result, so do not divide by :math:`y_{B,M}` again.  F must be the low-flux
+    (F-type) coefficient; a coefficient already corrected for the bulk flow
+    (a Sherwood number correlated as Sh p_BM/P, for example) would be
+    corrected twice.  :func:`high_flux_correction` gives the same film theory
+    as a ratio of coefficients in terms of the rate factor.
 
     References
     ----------

@@ -5,13 +5,13 @@ from __future__ import annotations
 import math
 from collections.abc import Callable, Mapping
 from dataclasses import dataclass, field
-from types import MappingProxyType
 from typing import Any, Literal
 
 import numpy as np
 
+from .._frozen import FrozenMapping, FrozenResult
 from .._typing import FloatOrArray
-from .._validation import MAGNITUDE_LIMIT, as_float, check_shapes, finish, guard, warn_caller
+from .._validation import _ARITHMETIC, MAGNITUDE_LIMIT, as_float, check_shapes, finish, guard, warn_caller
 from ..errors import EnvelopeError, EnvelopeWarning, InputValueError
 
 __all__ = ["Correlation", "CorrelationResult"]
@@ -26,8 +26,8 @@ _STRICTLY_POSITIVE = frozenset({"Pr", "mu_ratio", "Pr_ratio", "porosity", "L_ove
 _MASS_NAME = {"Pr": "Sc", "Nu": "Sh"}
 
 
-@dataclass(frozen=True)
-class CorrelationResult:
+@dataclass(frozen=True, eq=False)
+class CorrelationResult(FrozenResult):
     """A correlation's value with the metadata a design note needs.
 
     Attributes
@@ -103,6 +103,21 @@ class Correlation:
         The same as a number, used to rank :func:`find` results.
     notes : str
         Anything else a user must know.
+    domain : mapping of str to (float, float)
+        Ranges outside which the equation itself is undefined (an error,
+        not a warning).
+    products : mapping of str to (tuple of str, (float, float))
+        Envelope conditions on products of inputs, e.g. ``{"Pe": (("Re",
+        "Pr"), (100.0, inf))}`` for a condition Re Pr >= 100 stated by the
+        source; leaving them warns like the envelope.
+    branches : tuple of (str, float, float, mapping)
+        Envelopes that hold on one branch only: ``(input, low, high,
+        envelope)`` applies ``envelope`` where ``low <= input < high``
+        (sources that fitted two regimes over different ranges).
+    steps : tuple of (str, float, float)
+        Documented jumps at regime switches, ``(input, value, jump_pct)``:
+        the source switches equations at ``input = value`` without
+        blending, and the value jumps by ``jump_pct`` per cent there.
 
     """
 
@@ -123,11 +138,101 @@ class Correlation:
     accuracy_pct: float | None = None
     notes: str = ""
     domain: Mapping[str, tuple[float, float]] = field(default_factory=dict)
+    products: Mapping[str, tuple[tuple[str, ...], tuple[float, float]]] = field(default_factory=dict)
+    branches: tuple[tuple[str, float, float, Mapping[str, tuple[float, float]]], ...] = ()
+    steps: tuple[tuple[str, float, float], ...] = ()
+    _plans: Mapping[str, tuple[tuple[str, str, float | None, float, float], ...]] = field(
+        init=False, repr=False, default_factory=dict
+    )
 
     def __post_init__(self) -> None:
-        object.__setattr__(self, "envelope", MappingProxyType(dict(self.envelope)))
-        object.__setattr__(self, "parameters", MappingProxyType(dict(self.parameters)))
-        object.__setattr__(self, "domain", MappingProxyType(dict(self.domain)))
+        object.__setattr__(self, "envelope", FrozenMapping(self.envelope))
+        object.__setattr__(self, "parameters", FrozenMapping(self.parameters))
+        object.__setattr__(self, "domain", FrozenMapping(self.domain))
+        object.__setattr__(self, "products", FrozenMapping(self.products))
+        object.__setattr__(
+            self,
+            "branches",
+            tuple((k, float(lo), float(hi), FrozenMapping(env)) for k, lo, hi, env in self.branches),
+        )
+        # argument domains declared once: the scalar fast path reads these plans
+        object.__setattr__(self, "_plans", {"heat": self._plan("heat"), "mass": self._plan("mass")})
+
+    def __reduce__(self) -> tuple[Any, ...]:
+        # A record is identified by its stable slug: it unpickles to the catalogue's own record.
+        from ._lookup import correlation
+
+        return (correlation, (self.slug,))
+
+    def _plan(self, kind: Kind) -> tuple[tuple[str, str, float | None, float, float], ...]:
+        """Per input: (name in this form, key, default, lowest, highest) accepted without a word.
+
+        The range is the intersection of the domain, the strictly-positive rule, the magnitude
+        limit and the envelope: a Python float inside it needs no error and no warning.
+        """
+        plan = []
+        for key in (*self.inputs, *self.parameters):
+            lo, hi = self.domain.get(key, (0.0, math.inf))
+            if key in _STRICTLY_POSITIVE:
+                lo = max(lo, 5e-324)
+            hi = min(hi, MAGNITUDE_LIMIT)
+            elo, ehi = self.envelope.get(key, (-math.inf, math.inf))
+            default = self.parameters.get(key)
+            plan.append(
+                (
+                    self._name(key, kind),
+                    key,
+                    None if default is None else float(default),
+                    max(lo, elo),
+                    min(hi, ehi),
+                )
+            )
+        return tuple(plan)
+
+    def _fast(self, kind: Kind, given: Mapping[str, Any]) -> float | None:
+        """Return the value for Python-float inputs inside the envelope and domain, else None.
+
+        None sends the call down the general path, which raises or warns exactly as it always
+        does; this path only ever returns what that path would return, with nothing to say.
+        """
+        if self.branches:
+            return None
+        values: dict[str, float] = {}
+        used = 0
+        for name, key, default, lo, hi in self._plans[kind]:
+            v = given.get(name)
+            if v is None:
+                if default is None:
+                    return None
+                v = default
+            else:
+                used += 1
+                t = type(v)
+                if t is int:
+                    v = float(v)
+                elif t is not float:
+                    return None
+            if not lo <= v <= hi:  # NaN fails too
+                return None
+            values[key] = v
+        if used != len(given):
+            return None
+        for names, (lo, hi) in self.products.values():
+            p = 1.0
+            for n in names:
+                p *= values[n]
+            if not lo <= p <= hi:
+                return None
+        try:
+            out = self.function(**values)
+        except _ARITHMETIC:
+            return None
+        if type(out) is not float:
+            if isinstance(out, np.ndarray | np.floating) and np.ndim(out) == 0:
+                out = float(out)
+            else:
+                return None
+        return out if math.isfinite(out) else None
 
     # -- evaluation --------------------------------------------------------
 
@@ -149,6 +254,9 @@ class Correlation:
             Nu [-].
 
         """
+        fast = self._fast("heat", inputs)
+        if fast is not None:
+            return fast
         return self.evaluate("heat", strict=strict, stacklevel=3, **inputs).value
 
     @guard(check_output=False)
@@ -168,6 +276,9 @@ class Correlation:
             Sh [-].
 
         """
+        fast = self._fast("mass", inputs)
+        if fast is not None:
+            return fast
         return self.evaluate("mass", strict=strict, stacklevel=3, **inputs).value
 
     @guard(check_output=False)
@@ -211,7 +322,7 @@ class Correlation:
             value=value,
             quantity="Nu" if kind == "heat" else "Sh",
             slug=self.slug,
-            inputs=MappingProxyType(used),
+            inputs=FrozenMapping(used),
             analogy=analogy,
             warnings=tuple(messages),
             reference=self.reference,
@@ -312,4 +423,65 @@ class Correlation:
             if strict:
                 raise EnvelopeError(msg)
             messages.append(msg)
+        for label, (names, (lo, hi)) in self.products.items():
+            if not all(n in values for n in names):
+                continue
+            p = np.asarray(values[names[0]], dtype=float)
+            for n in names[1:]:
+                p = p * np.asarray(values[n], dtype=float)
+            mask = (p < lo) | (p > hi)
+            if not mask.any():
+                continue
+            formula = "*".join(self._name(n, kind) for n in names)
+            shown = (
+                repr(float(p))
+                if p.ndim == 0
+                else f"{float(p[mask].ravel()[0])!r} (and {int(mask.sum()) - 1} more)"
+            )
+            msg = (
+                f"correlation {self.slug!r}: {label} = {formula} = {shown} is outside its "
+                f"envelope {lo:g} to {hi:g} ({self.reference})"
+            )
+            if strict:
+                raise EnvelopeError(msg)
+            messages.append(msg)
+        for switch, blo, bhi, env in self.branches:
+            s = np.asarray(values[switch], dtype=float)
+            on = (s >= blo) & (s < bhi)
+            for key, (lo, hi) in env.items():
+                v = np.asarray(values[key], dtype=float)
+                mask = on & ((v < lo) | (v > hi))
+                if not mask.any():
+                    continue
+                bad = np.broadcast_to(v, mask.shape)[mask].ravel()
+                shown = (
+                    repr(float(bad[0])) if mask.ndim == 0 else f"{float(bad[0])!r} (and {bad.size - 1} more)"
+                )
+                msg = (
+                    f"correlation {self.slug!r}: {self._name(key, kind)}={shown} is outside the envelope "
+                    f"{lo:g} to {hi:g} of its branch {blo:g} <= {self._name(switch, kind)} < {bhi:g} "
+                    f"({self.reference})"
+                )
+                if strict:
+                    raise EnvelopeError(msg)
+                messages.append(msg)
         return messages
+
+    def outside(self, kind: Kind, **inputs: Any) -> tuple[str, ...]:
+        """Say where the given inputs leave the envelope, without evaluating or warning.
+
+        Parameters
+        ----------
+        kind : {'heat', 'mass'}
+            The form the inputs are named in.
+        **inputs : float or array_like
+            Inputs and parameters [-].
+
+        Returns
+        -------
+        tuple of str
+            One message per envelope condition left; empty inside.
+
+        """
+        values, extremes = self._collect(kind, inputs)
+        return tuple(self._check_envelope(kind, values, extremes, strict=False))

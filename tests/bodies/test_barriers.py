@@ -98,7 +98,8 @@ def test_time_lag_and_permeation_curve():
     assert br.time_lag(L, D) == pytest.approx(L**2 / (6 * D))
     t = np.linspace(0.0, 20 * br.time_lag(L, D), 400)
     Q = br.permeation_curve(t, L, D, c1)
-    J, _sJ, lag, slag = br.fit_time_lag(t, Q)
+    fit = br.fit_time_lag(t, Q)
+    J, lag, slag = fit.flux, fit.lag, fit.lag_stderr
     assert pytest.approx(D * c1 / L, rel=1e-6) == J
     assert lag == pytest.approx(br.time_lag(L, D), rel=1e-5)
     D_est, _ = br.diffusivity_from_time_lag(L, lag, slag)
@@ -112,11 +113,16 @@ def test_permeation_curve_short_and_long_forms_agree():
     assert q[0] == pytest.approx(q[1], rel=1e-6)
 
 
-def test_arrhenius():
-    assert br.arrhenius(298.15, 3.0, 298.15, 40e3) == pytest.approx(3.0)
-    assert br.arrhenius(308.15, 1.0, 298.15, 40e3) == pytest.approx(
+def test_arrhenius_with_a_reference_temperature():
+    arr = mt.diffusivity.arrhenius_diffusivity
+    assert arr(298.15, 3.0, 40e3, T_ref=298.15) == pytest.approx(3.0)
+    assert arr(308.15, 1.0, 40e3, T_ref=298.15) == pytest.approx(
         np.exp(-40e3 / 8.314462618 * (1 / 308.15 - 1 / 298.15))
     )
+    # a negative heat of solution lowers the solubility coefficient as T rises
+    assert arr(308.15, 1.0, -20e3, T_ref=298.15) < 1.0
+    with pytest.raises(mt.errors.InputValueError, match="Ea"):
+        arr(308.15, 1.0, -20e3)  # without T_ref, Ea is an activation energy (>= 0)
 
 
 def test_oxygen_ingress():

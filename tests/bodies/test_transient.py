@@ -165,3 +165,85 @@ def test_bad_input():
         tr.fractional_uptake("slab", 1.0, 1e-9, 1e-3, biot=-2.0)
     with pytest.raises(mt.errors.InputValueError, match="position"):
         tr.concentration_profile("slab", 2e-3, 1.0, 1e-9, 1e-3)
+
+
+# --- profiles at very short times (fixed Talbot inversion of the Laplace-domain solution) ----
+
+
+def _sphere_images(r, T):
+    # Crank (1975), The Mathematics of Diffusion, 2nd ed., Eq. (6.19): the sphere's exact
+    # image-series solution for a constant surface, fast-converging at short times
+    from scipy.special import erfc
+
+    rt = 2 * np.sqrt(T)
+    return sum(erfc(((2 * n + 1) - r) / rt) - erfc(((2 * n + 1) + r) / rt) for n in range(6)) / r
+
+
+@pytest.mark.parametrize("T", [1e-10, 1e-7, 1e-5, 5e-4])
+def test_sphere_profile_at_short_times_matches_crank_images(T):
+    r = np.array([1e-6, 0.3, 0.9, 1 - 3 * np.sqrt(T), 1 - np.sqrt(T), 1 - 0.1 * np.sqrt(T), 1.0])
+    got = tr.concentration_profile("sphere", r, T, 1.0, 1.0)
+    np.testing.assert_allclose(got, _sphere_images(r, T), rtol=1e-9, atol=1e-12)
+    assert got[0] == 0.0  # the centre has seen nothing yet
+
+
+@pytest.mark.parametrize("shape", tr.SHAPES)
+def test_surface_value_with_resistance_at_short_times(shape):
+    # a thin penetration layer sees a plane surface: the semi-infinite solution with a surface
+    # resistance, c_s/c_inf = 1 - exp(B^2 T) erfc(B sqrt(T)) (Carslaw & Jaeger 1959, Conduction of
+    # Heat in Solids, 2nd ed., sec. 2.7), curvature corrections being of order sqrt(T)
+    from scipy.special import erfcx
+
+    T, B = 1e-10, 10.0
+    got = tr.concentration_profile(shape, 1.0, T, 1.0, 1.0, biot=B)
+    expected = 1 - erfcx(B * math.sqrt(T))
+    assert got == pytest.approx(expected, rel=1e-4)
+
+
+@pytest.mark.parametrize("shape", tr.SHAPES)
+@pytest.mark.parametrize("biot", [None, 0.3, 5.0, 200.0])
+@pytest.mark.parametrize("T", [1e-3, 0.01, 0.3])
+def test_talbot_inversion_agrees_with_series(shape, biot, T):
+    X = np.linspace(0.0, 1.0, 21)
+    series = _transient._profile(shape, X, np.full(X.shape, T), biot)
+    inverted = _transient._talbot_profile(shape, X, np.full(X.shape, T), biot)
+    np.testing.assert_allclose(inverted, series, atol=1e-10)
+
+
+@pytest.mark.parametrize("shape", tr.SHAPES)
+def test_profile_continuous_across_the_short_time_switch(shape):
+    x = np.linspace(0.0, 1.0, 11)
+    T0 = _transient._PROFILE_SHORT_TIME
+    below = tr.concentration_profile(shape, x, T0 * (1 - 1e-9), 1.0, 1.0, biot=3.0)
+    above = tr.concentration_profile(shape, x, T0, 1.0, 1.0, biot=3.0)
+    np.testing.assert_allclose(below, above, atol=1e-9)
+
+
+@pytest.mark.parametrize("biot", [0.0, -1.0, 1e-300, 1e300, float("nan")])
+def test_profile_rejects_a_bad_biot_number(biot):
+    with pytest.raises(mt.errors.InputValueError, match="biot"):
+        tr.concentration_profile("sphere", 0.5e-3, 10.0, 1e-9, 1e-3, biot=biot)
+
+
+@pytest.mark.parametrize("shape", tr.SHAPES)
+@pytest.mark.parametrize("T", [1e-300, 1e-20, 1e-14, 1e-12, 1e-10])
+def test_uptake_with_resistance_at_tiny_times_is_surface_controlled(shape, T):
+    # early times: M/M_inf = nu Bi T (1 - 4 Bi sqrt(T) / (3 sqrt(pi)) + ...), nu = A a / V
+    # (Crank 1975, 2nd ed., sec. 4.3.5, expanding Eq. (4.44) for a plane sheet; curvature
+    # enters at relative order sqrt(T))
+    nu = {"slab": 1.0, "cylinder": 2.0, "sphere": 3.0}[shape]
+    Bi = 2.0
+    expected = nu * Bi * T * (1 - 4 * Bi * math.sqrt(T) / (3 * math.sqrt(math.pi)))
+    assert tr.fractional_uptake(shape, T, 1.0, 1.0, biot=Bi) == pytest.approx(expected, rel=1e-5)
+
+
+@pytest.mark.parametrize("shape", tr.SHAPES)
+@pytest.mark.parametrize("biot", [None, 0.5, 10.0])
+def test_uptake_inversion_agrees_with_series(shape, biot):
+    T = np.array([1e-3, 1e-2, 0.1, 1.0])
+    if biot is None:
+        series = _transient._uptake_constant_surface(shape, T)
+    else:
+        series = _transient._uptake_surface_resistance_series(shape, T, biot)
+    inverted = _transient._talbot(lambda s, rows: _transient._laplace_uptake(shape, s, biot), T)
+    np.testing.assert_allclose(inverted, series, atol=1e-12)

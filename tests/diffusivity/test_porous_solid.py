@@ -43,9 +43,25 @@ def test_arrhenius_carbon_in_iron():
 def test_arrhenius_fit_round_trip():
     T = np.array([900.0, 1000.0, 1100.0, 1200.0])
     D = mt.diffusivity.arrhenius_diffusivity(T, 2.3e-5, 148e3)
-    D0, Ea = mt.diffusivity.arrhenius_parameters(T, D)
-    assert pytest.approx(2.3e-5, rel=1e-8) == D0
-    assert Ea == pytest.approx(148e3, rel=1e-8)
+    fit = mt.diffusivity.arrhenius_parameters(T, D)
+    assert pytest.approx(2.3e-5, rel=1e-8) == fit.D0
+    assert fit.Ea == pytest.approx(148e3, rel=1e-8)
+    assert fit.n_points == 4
+    assert fit.Ea_stderr == pytest.approx(0.0, abs=1e-3)  # exact data: no scatter
+
+
+def test_arrhenius_fit_standard_error_against_a_by_hand_regression():
+    # noisy invented data; the standard error of the slope of ln D on 1/T by the textbook formula
+    # s_b = sqrt(SSE/(n-2) / Sxx)
+    T = np.array([900.0, 1000.0, 1100.0, 1200.0, 1300.0])
+    D = mt.diffusivity.arrhenius_diffusivity(T, 2.3e-5, 148e3) * np.array([1.05, 0.97, 1.02, 0.96, 1.03])
+    fit = mt.diffusivity.arrhenius_parameters(T, D)
+    x, y = 1 / T, np.log(D)
+    b, a = np.polyfit(x, y, 1)
+    sse = float(np.sum((y - (a + b * x)) ** 2))
+    sxx = float(np.sum((x - x.mean()) ** 2))
+    assert fit.Ea_stderr == pytest.approx(8.314462618 * np.sqrt(sse / 3 / sxx), rel=1e-9)
+    assert mt.diffusivity.arrhenius_parameters(T[:2], D[:2]).Ea_stderr is None
 
 
 def test_orders_of_magnitude_by_phase():
