@@ -37,7 +37,7 @@ method = "billet-schultes"    # or "onda", "bravo-rocha-fair"
 # height_m = 3.0              # needed for mode = "rate"
 
 [gas]
-carrier = "air"
+medium = "air"
 solute = "ammonia"
 flow_mol_per_s = 12.0
 y_in = 0.02
@@ -46,7 +46,7 @@ T_K = 298.15
 P_Pa = 101325.0
 
 [liquid]
-solvent = "water"
+medium = "water"
 flow_mol_per_s = 60.0
 x_in = 0.0
 T_K = 298.15
@@ -59,7 +59,7 @@ heat_of_absorption_J_per_mol = 0.0
 _KEYS: Mapping[str, Mapping[str, str]] = {
     "column": {"mode": "str", "diameter_m": "float", "packing": "str", "method": "str", "height_m": "float"},
     "gas": {
-        "carrier": "str",
+        "medium": "str",
         "solute": "str",
         "flow_mol_per_s": "float",
         "y_in": "float",
@@ -67,13 +67,13 @@ _KEYS: Mapping[str, Mapping[str, str]] = {
         "T_K": "float",
         "P_Pa": "float",
     },
-    "liquid": {"solvent": "str", "flow_mol_per_s": "float", "x_in": "float", "T_K": "float"},
+    "liquid": {"medium": "str", "flow_mol_per_s": "float", "x_in": "float", "T_K": "float"},
     "equilibrium": {"m": "float", "heat_of_absorption_J_per_mol": "float"},
 }
 _REQUIRED = {
     "column": ("diameter_m", "packing"),
-    "gas": ("carrier", "solute", "flow_mol_per_s", "y_in"),
-    "liquid": ("solvent", "flow_mol_per_s"),
+    "gas": ("medium", "solute", "flow_mol_per_s", "y_in"),
+    "liquid": ("medium", "flow_mol_per_s"),
 }
 
 
@@ -158,27 +158,27 @@ def _compute(spec: Mapping[str, Mapping[str, Any]], points: int) -> dict[str, An
     T_liq = float(liq.get("T_K", T_gas))
     G = float(gas["flow_mol_per_s"]) / area
     L = float(liq["flow_mol_per_s"]) / area
-    solvent = liquid_model(liq["solvent"])
-    M_L = solvent.species.molar_mass
-    rho_L = float(solvent.density(T_liq))
+    liquid = liquid_model(liq["medium"])
+    M_L = liquid.species.molar_mass
+    rho_L = float(liquid.density(T_liq))
     u_V = G * R_GAS * T_gas / P
     u_L = L * M_L / rho_L
     method = col.get("method", "billet-schultes")
     film = rate_packing(
-        gas["solute"], gas["carrier"], liq["solvent"], col["packing"], T_liq, u_V, u_L, P, method
+        gas["solute"], gas["medium"], liq["medium"], col["packing"], T_liq, u_V, u_L, P, method
     )
     if "m" in eq:
         m = float(eq["m"])
         m_source = "given in the spec"
     else:
-        m = float(henry_constant(gas["solute"], liq["solvent"], T_liq)) / P
-        m_source = f"Henry's constant of {gas['solute']} in {liq['solvent']} at {T_liq:g} K over P"
+        m = float(henry_constant(gas["solute"], liq["medium"], T_liq)) / P
+        m_source = f"Henry's constant of {gas['solute']} in {liq['medium']} at {T_liq:g} K over P"
     c_L = rho_L / M_L
     k_y_a = float(film.k_G_a) * P
     k_x_a = float(film.k_L_a) * c_L
     K_y_a = 1.0 / (1.0 / k_y_a + m / k_x_a)
     dH = float(eq.get("heat_of_absorption_J_per_mol", 0.0))
-    cp = float(solvent.heat_capacity(T_liq)) * M_L
+    cp = float(liquid.heat_capacity(T_liq)) * M_L
     x_in = float(liq.get("x_in", 0.0))
     y_in = float(gas["y_in"])
     y_out = float(gas["y_out"]) if mode == "size" else None

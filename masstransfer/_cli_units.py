@@ -19,7 +19,7 @@ from typing import Any
 
 from .errors import MissingDependencyError, UnitError
 
-__all__ = ["begin", "convert_json", "convert_table", "install", "method_uncertainty", "plus_minus"]
+__all__ = ["begin", "convert_json", "convert_table", "install", "plus_minus"]
 
 #: Options that take a physical value: option dest -> SI unit read for a plain number.
 _VALUE_OPTIONS = {
@@ -205,17 +205,6 @@ def convert_json(text: str) -> str:
         raise UnitError(f"--units: no field named {', '.join(missing)} in this output; name one it shows")
     data["converted"] = converted
     return json.dumps(data, indent=2)
-
-
-def method_uncertainty(phase: str, method: str) -> float | None:
-    """Relative standard uncertainty of a diffusivity method, from its stated accuracy."""
-    from ._uncertainty import stated_uncertainty
-    from .diffusivity._common import normalise_method
-    from .diffusivity._gas import GAS_METHODS
-    from .diffusivity._liquid import LIQUID_METHODS
-
-    methods = GAS_METHODS if phase == "gas" else LIQUID_METHODS
-    return stated_uncertainty(methods[normalise_method(method, methods)])
 
 
 def plus_minus(value: float, relative: float | None, digits: str = ".4e") -> str:

@@ -21,6 +21,7 @@ __all__ = [
     "QUAYLE_PARACHOR_ATOMS",
     "QUAYLE_PARACHOR_BONDS",
     "QUAYLE_PARACHOR_RINGS",
+    "SMALL_MOLECULE_VB",
     "WILKE_CHANG_ASSOCIATION",
 ]
 
@@ -100,6 +101,34 @@ LE_BAS_ATOMIC_VOLUMES: Final = MappingProxyType(
 #: Ring increments by ring size, same source (naphthalene -30.0 is two
 #: six-membered rings; anthracene's tabulated -47.5 is approximated as three).
 LE_BAS_RING_INCREMENTS: Final = MappingProxyType({3: -6.0, 4: -8.5, 5: -11.5, 6: -15.0})
+
+# --- Molar volumes of small molecules at their normal boiling point ------
+# The tabulated values the liquid-diffusivity correlations and the Wilke-Lee
+# and Brokaw estimates were built with: Treybal, Mass-Transfer Operations,
+# 3rd ed. (1980), Table 2.3, the same values as Welty, Wicks & Wilson,
+# Fundamentals of Momentum, Heat and Mass Transfer, Table 24.5 (from memory).
+# Used in place of a liquid-model value (for CO2, which has no liquid at
+# 1 atm, the tabulated value is the only meaningful one).  Keyed by CAS;
+# unit: m^3/mol.
+SMALL_MOLECULE_VB: Final = MappingProxyType(
+    {
+        "1333-74-0": 14.3e-6,  # H2
+        "7782-44-7": 25.6e-6,  # O2
+        "7727-37-9": 31.2e-6,  # N2
+        "630-08-0": 30.7e-6,  # CO
+        "124-38-9": 34.0e-6,  # CO2
+        "7446-09-5": 44.8e-6,  # SO2
+        "10102-43-9": 23.6e-6,  # NO
+        "10024-97-2": 36.4e-6,  # N2O
+        "7664-41-7": 25.8e-6,  # NH3
+        "7732-18-5": 18.9e-6,  # H2O
+        "7783-06-4": 32.9e-6,  # H2S
+        "463-58-1": 51.5e-6,  # COS
+        "7782-50-5": 48.4e-6,  # Cl2
+        "7726-95-6": 53.2e-6,  # Br2
+        "7553-56-2": 71.5e-6,  # I2
+    }
+)
 
 # --- Wilke-Chang association factors --------------------------------------
 # Wilke & Chang (1955), AIChE J. 1, 264; as given in Poling, Prausnitz &
@@ -255,6 +284,24 @@ PACKING_DATA: Final = MappingProxyType(
             "C_S": None,
             "source": (
                 "Billet & Schultes (1999) Table 1 (from memory); sigma_c: Onda et al. (1968) (from memory)"
+            ),
+        },
+        "berl-saddle-ceramic-25": {
+            "kind": "random",
+            "nominal_size": 0.025,
+            "material": "ceramic",
+            "a": 260.0,
+            "void_fraction": 0.680,
+            "sigma_c": 0.061,
+            "C_L": 1.246,
+            "C_V": 0.387,
+            "C_h": None,
+            "C_S": None,
+            "source": (
+                "a and void fraction: Billet's table as reprinted in Kolev, Packed Bed Columns for "
+                "Absorption, Desorption, Rectification and Direct Heat Transfer (Elsevier 2006), "
+                "Ch. 4, Table 1; C_L, C_V: Billet & Schultes (1999) Table 1 (from memory); sigma_c: "
+                "Onda et al. (1968) (from memory)"
             ),
         },
         "raschig-ring-ceramic-13": {

@@ -38,6 +38,7 @@ class _Unit:
 
     kind: str  # "unit", "free", "named", "attr", "none"
     text: str = ""
+    difference: bool = False  # "temperature difference [K]": an offset unit (degC) is refused
 
 
 @dataclass(frozen=True)
@@ -114,6 +115,8 @@ def _build(fn: Callable[..., Any]) -> _Spec:
     kinds = {p.name: p.kind for p in sig.parameters.values()}
     for raw_names, type_line, desc in _entries(_section(doc, "Parameters")):
         unit = _unit_of(desc, names) if _NUMERIC.search(type_line) else _Unit("none")
+        if unit.kind == "unit" and "difference" in desc.split("[", 1)[0]:
+            unit = _Unit("unit", unit.text, difference=True)
         for name in (n.strip().lstrip("*") for n in raw_names.split(",")):
             if kinds.get(name) is inspect.Parameter.VAR_KEYWORD:
                 var_kw = unit
@@ -156,8 +159,22 @@ def _is_quantity(value: Any) -> bool:
     return hasattr(t, "_REGISTRY") and hasattr(t, "to") and hasattr(t, "magnitude")
 
 
+_PARSED: dict[tuple[int, str], Any] = {}
+
+
 def parse_unit(registry: Any, text: str) -> Any:
-    """Parse a docstring unit (``"W/(m^2 K)"``, ``"-"``, ``"mg O2"``) in ``registry``."""
+    """Parse a docstring unit (``"W/(m^2 K)"``, ``"-"``, ``"mg O2"``) in ``registry`` (cached)."""
+    key = (id(registry), text)
+    unit = _PARSED.get(key)
+    if unit is None or unit._REGISTRY is not registry:
+        unit = _parse_unit(registry, text)
+        if len(_PARSED) > 4096:
+            _PARSED.clear()
+        _PARSED[key] = unit
+    return unit
+
+
+def _parse_unit(registry: Any, text: str) -> Any:
     text = text.strip()
     if text == "-":
         return registry.dimensionless
@@ -174,7 +191,7 @@ def parse_unit(registry: Any, text: str) -> Any:
 def _convert(spec: _Spec, name: str, unit: _Unit, q: Any, free: list[Any]) -> Any:
     """Return the magnitude of quantity ``q`` in the unit the function expects for ``name``."""
     reg = type(q)._REGISTRY
-    given = f"{q.units:~}" or "dimensionless"
+    given = _Given(q)
     if unit.kind == "unit":
         target = parse_unit(reg, unit.text)
         if q.dimensionality != target.dimensionality:
@@ -182,6 +199,11 @@ def _convert(spec: _Spec, name: str, unit: _Unit, q: Any, free: list[Any]) -> An
                 f"{spec.name}: {name} was given in {given} ({q.dimensionality}), which cannot be "
                 f"converted to the expected unit {unit.text} ({target.dimensionality}); pass {name} "
                 f"as a quantity with the dimension of {unit.text}"
+            )
+        if unit.difference and not getattr(q, "_is_multiplicative", True):
+            raise UnitError(
+                f"{spec.name}: {name} is a difference, but was given in {given}, a point on an offset "
+                f"scale; pass it as a difference (e.g. delta_degC) or in {unit.text}"
             )
         return q.to(target).magnitude
     if unit.kind == "free":
@@ -203,6 +225,16 @@ def _convert(spec: _Spec, name: str, unit: _Unit, q: Any, free: list[Any]) -> An
     raise UnitError(
         f"{spec.name}: {name} was given as a quantity in {given}, but it takes no unit; pass a plain value"
     )
+
+
+class _Given:
+    """The unit of a quantity as shown in a message, formatted only if a message is written."""
+
+    def __init__(self, q: Any) -> None:
+        self.q = q
+
+    def __str__(self) -> str:
+        return f"{self.q.units:~}" or "dimensionless"
 
 
 def _wrap(value: Any, unit: _Unit, registry: Any, free: list[Any], owner: Any) -> Any:
@@ -268,7 +300,8 @@ def field_units(cls: type) -> dict[str, str]:
     """Units of a result class's fields, read from its numpydoc Attributes section.
 
     An entry naming several fields (``T, P : ...  State [K], [Pa].``) gives them the bracketed
-    units in order, or the single unit to all; fields without a bracketed unit are left out.
+    units in order, or the single unit to all; with fewer units than fields the last unit
+    covers the rest ("the groups [-]"); fields without a bracketed unit are left out.
     """
     doc = inspect.getdoc(cls) or ""
     out: dict[str, str] = {}
@@ -281,4 +314,7 @@ def field_units(cls: type) -> dict[str, str]:
             out[names[0]] = found[0]
         elif len(found) == 1:
             out.update(dict.fromkeys(names, found[0]))
+        elif 1 < len(found) < len(names):  # "D, Pr, Sc : diffusivity [m^2/s] and the groups [-]"
+            out.update(zip(names, found[:-1], strict=False))
+            out.update(dict.fromkeys(names[len(found) - 1 :], found[-1]))
     return out

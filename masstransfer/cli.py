@@ -51,18 +51,9 @@ def _parser() -> argparse.ArgumentParser:
     sub = p.add_subparsers(dest="command", required=True)
     sub.add_parser("demo", help="print the demo report (an invented kiln-drying scenario)")
 
-    d = sub.add_parser(
-        "diffusivity",
-        help="estimate a binary diffusivity in a gas or a liquid",
-        description="Estimate the diffusivity of SOLUTE in MEDIUM (a gas or a liquid solvent).",
-    )
-    d.add_argument("solute", help="diffusing species: name, CAS number or formula")
-    d.add_argument("medium", help="carrier gas (e.g. air) or solvent (e.g. water)")
-    _state_args(d)
-    d.add_argument("--method", default=None, help="estimation method (default: fuller / wilke-chang)")
-    d.add_argument(
-        "--explain", action="store_true", help="also print the method, accuracy and constants with sources"
-    )
+    from ._cli_diffusivity import register as register_diffusivity
+
+    register_diffusivity(sub)
 
     c = sub.add_parser(
         "coefficient",
@@ -135,58 +126,6 @@ def _table(title: str, header: Sequence[str], rows: Sequence[Sequence[str]], foo
     if foot:
         out.append(foot)
     return "\n".join(out)
-
-
-def _diffusivity(args: argparse.Namespace) -> str:
-    from .diffusivity._gas import gas_diffusivity
-    from .diffusivity._liquid import liquid_diffusivity
-
-    T = np.asarray(args.temperature, dtype=float)
-    if args.phase == "gas":
-        method = args.method or "fuller"
-        D = np.atleast_1d(gas_diffusivity(args.solute, args.medium, T, args.pressure, method))
-    else:
-        method = args.method or "wilke-chang"
-        D = np.atleast_1d(liquid_diffusivity(args.solute, args.medium, T, method))
-    u = _cli_units.method_uncertainty(args.phase, method)
-    if args.json:
-        return json.dumps(
-            {
-                "solute": args.solute,
-                "medium": args.medium,
-                "resolved": _resolved(args.solute, args.medium),
-                "phase": args.phase,
-                "method": method,
-                "P_Pa": args.pressure if args.phase == "gas" else None,
-                "T_K": T.tolist(),
-                "D_m2_per_s": D.tolist(),
-                "relative_uncertainty": u,
-            },
-            indent=2,
-        )
-    where = f"gas at {args.pressure:g} Pa" if args.phase == "gas" else "liquid, infinite dilution"
-    if args.explain:
-        from .diffusivity._report import diffusivity_report
-
-        report = diffusivity_report(
-            args.solute, args.medium, T, args.pressure, phase=args.phase, method=method
-        ).summary()
-    else:
-        report = ""
-    return (
-        report
-        + ("\n\n" if report else "")
-        + _identity_lines(args.solute, args.medium)
-        + _table(
-            f"Diffusivity of {args.solute} in {args.medium} ({where}); method: {method}",
-            ["T [K]", "D [m^2/s]", "D [cm^2/s]"],
-            [
-                [f"{t:.2f}", _cli_units.plus_minus(d, u), _cli_units.plus_minus(d * 1e4, u)]
-                for t, d in zip(T, D, strict=True)
-            ],
-            "" if report else "Estimates; check safety-relevant designs against measured data.",
-        )
-    )
 
 
 def _coefficient(args: argparse.Namespace) -> str:
@@ -419,7 +358,6 @@ def main(argv: Sequence[str] | None = None) -> int:
     _cli_units.begin(args)
     as_json = bool(getattr(args, "json", False))
     handlers = {
-        "diffusivity": _diffusivity,
         "coefficient": _coefficient,
         "correlations": _correlations,
         "wet-bulb": _wet_bulb,
@@ -436,7 +374,7 @@ def main(argv: Sequence[str] | None = None) -> int:
 
                 out = demo_report()
             else:
-                out = handlers[args.command](args)
+                out = handlers[args.command](args) if args.command in handlers else args.handler(args)
             if as_json:
                 out = _cli_units.convert_json(out)
         except MassTransferError as exc:

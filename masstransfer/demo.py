@@ -108,7 +108,7 @@ def demo_report() -> str:
     T = T_c + 273.15
     P = 101325.0
     w_f = np.asarray(gas_diffusivity("water", "air", T, P, method="fuller"))
-    w_ce = np.asarray(gas_diffusivity("water", "air", T, P, method="chapman-enskog"))
+    w_ce = np.asarray(gas_diffusivity("water", "air", T, P, method="brokaw"))
     e_f = np.asarray(gas_diffusivity("ethanol", "air", T, P, method="fuller"))
     e_wl = np.asarray(gas_diffusivity("ethanol", "air", T, P, method="wilke-lee"))
     lines = [
@@ -119,7 +119,7 @@ def demo_report() -> str:
         "Binary diffusivity in air at 101.325 kPa, mm^2/s (1 mm^2/s = 1e-6 m^2/s)",
         "",
         f"{'T':>7} {'T':>8} | {'water vapour':^23} | {'ethanol vapour':^23}",
-        f"{'[C]':>7} {'[K]':>8} | {'Fuller':>7} {'Ch.-Ensk.':>9} {'diff':>5} "
+        f"{'[C]':>7} {'[K]':>8} | {'Fuller':>7} {'Brokaw':>9} {'diff':>5} "
         f"| {'Fuller':>7} {'Wilke-Lee':>9} {'diff':>5}",
         "-" * 66,
     ]
@@ -133,10 +133,10 @@ def demo_report() -> str:
     lines += [
         "",
         "diff: second method relative to Fuller. A spread of this size is typical of",
-        "the methods' published errors; for the polar water molecule the Lennard-Jones",
-        "(Chapman-Enskog) value is the less reliable of the two.",
+        "the methods' published errors; Brokaw's Stockmayer form is the one meant for a",
+        "polar molecule such as water.",
         "",
-        "For comparison, ethanol dissolved in the glaze water at 40 C (Wilke-Chang):",
+        "For comparison, ethanol dissolved in the glaze water at 40 C (Hayduk-Minhas):",
         f"  D = {liquid_diffusivity('ethanol', 'water', 313.15) * 1e9:.2f}e-9 m^2/s, "
         "about four orders of magnitude below the gas values.",
         *_drying_chain(),

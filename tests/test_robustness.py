@@ -70,12 +70,12 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
     (
         "gas_diffusivity",
         mt.gas_diffusivity,
-        {"solute": "water", "carrier": "air", "T": 300.0, "P": 1e5},
+        {"solute": "water", "medium": "air", "T": 300.0, "P": 1e5},
     ),
     (
         "gas_diffusivity_ce",
         mt.gas_diffusivity,
-        {"solute": "water", "carrier": "air", "T": 300.0, "method": "chapman-enskog"},
+        {"solute": "carbon dioxide", "medium": "air", "T": 300.0, "method": "chapman-enskog"},
     ),
     (
         "gas_mixture",
@@ -121,6 +121,9 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
         {"solute": "benzene", "solvent": "water", "T": 298.0},
     ),
     ("liquid_inputs", diffusivity.liquid_diffusivity_inputs, {"solute": "water", "solvent": "ethanol"}),
+    ("available_methods", diffusivity.available_methods, {"solute": "water", "medium": "air"}),
+    ("liquid_default", diffusivity.liquid_default, {"solvent": "ethanol"}),
+    ("classify", diffusivity.classify, {"sp": "ethanol"}),
     ("knudsen", diffusivity.knudsen_diffusivity, {"T": 300.0, "pore_diameter": 1e-8, "M": 0.032}),
     ("bosanquet", diffusivity.bosanquet, {"D_molecular": 2e-5, "D_knudsen": 2e-6}),
     ("effective", diffusivity.effective_diffusivity, {"D": 1e-6, "porosity": 0.4, "tortuosity": 3.0}),
@@ -440,6 +443,18 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
         {"y_in": 0.02, "y_out": 0.001, "x_in": 0.0, "L_over_G": 1.8, "equilibrium": 1.2},
     ),
     (
+        "film_ntu",
+        contactors.film_transfer_units,
+        {
+            "y_in": 0.02,
+            "y_out": 0.001,
+            "x_in": 0.0,
+            "L_over_G": 1.8,
+            "equilibrium": 1.2,
+            "kxa_over_kya": 40.0,
+        },
+    ),
+    (
         "column_profile",
         contactors.column_profile,
         {"y_in": 0.02, "x_in": 0.0, "G": 20.0, "L": 36.0, "Kya": 40.0, "equilibrium": 1.2, "y_out": 0.001},
@@ -505,6 +520,22 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
             "X_initial": 0.4,
             "X_critical": 0.2,
             "X_final": 0.05,
+        },
+    ),
+    (
+        "drying_time_biot",
+        humidity.drying_time,
+        {
+            "mass_flux": 1e-4,
+            "shape": "sphere",
+            "size": 0.005,
+            "dry_density": 900.0,
+            "D": 1e-9,
+            "X_initial": 0.5,
+            "X_critical": 0.3,
+            "X_final": 0.1,
+            "X_equilibrium": 0.02,
+            "biot": 2.0,
         },
     ),
     (

@@ -1,61 +1,247 @@
 """Measured diffusivities used to validate the estimation methods.
 
-Each row: (solute, medium, T [K], P [Pa] or None, measured D [m^2/s], source).
-Values recalled without the book at hand say "(from memory)".
+Gas rows: (solute, medium, T [K], P [Pa], measured D [m^2/s], set, source).
+Liquid rows: (solute, solvent, T [K], measured D [m^2/s], set, source).
+
+Each row was checked against the source it names for temperature, pressure basis and units.
+Values read from a copy of the source found on the web say where; values recalled without the
+source at hand say "(from memory)".
+
+Rows left out on purpose:
+
+* naphthalene-air (Incropera & DeWitt Table A.8, 300 K): published values differ by about 35 %
+  between sources, which cannot test a 5 % method;
+* acetone, benzene, ethanol, diethyl ether, ethyl acetate and MEK in chloroform, and six
+  solutes in ethyl acetate (Benitez Table A.2): the liquid property models of chloroform and
+  ethyl acetate do not load yet, so these rows cannot be computed;
+* methanol-air at 298 K (quoted beside a Fuller example in Coulson & Richardson Vol. 6): the
+  number equals a Fuller estimate, not a measurement.
 """
 
 from __future__ import annotations
 
 ATM = 101325.0
+BAR = 1.0e5
 
-GAS_PAIRS: list[tuple[str, str, float, float, float, str]] = [
-    # Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 6th ed., Table A.8
-    # (298 K, 1 atm; from memory)
-    ("water", "air", 298.0, ATM, 0.26e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    ("carbon dioxide", "air", 298.0, ATM, 0.16e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    ("oxygen", "air", 298.0, ATM, 0.21e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    ("acetone", "air", 298.0, ATM, 0.11e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    ("benzene", "air", 298.0, ATM, 0.88e-5, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    ("naphthalene", "air", 298.0, ATM, 0.62e-5, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    ("argon", "nitrogen", 298.0, ATM, 0.19e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    ("hydrogen", "oxygen", 298.0, ATM, 0.70e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    ("hydrogen", "nitrogen", 298.0, ATM, 0.68e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    ("hydrogen", "carbon dioxide", 298.0, ATM, 0.55e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    ("carbon dioxide", "nitrogen", 298.0, ATM, 0.16e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    ("carbon dioxide", "oxygen", 298.0, ATM, 0.14e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    ("oxygen", "nitrogen", 298.0, ATM, 0.18e-4, "Incropera & DeWitt 6th ed. Table A.8 (from memory)"),
-    # Coulson & Richardson's Chemical Engineering Vol. 6, ch. 8 (the measured value quoted beside
-    # its Fuller example)
-    ("methanol", "air", 298.0, ATM, 15.9e-6, "Coulson & Richardson Vol. 6, ch. 8"),
-    # Cussler, Diffusion, 3rd ed., Example 5.1-2
-    ("hydrogen", "nitrogen", 294.0, 2 * ATM, 0.38e-4, "Cussler, Diffusion, 3rd ed., Example 5.1-2"),
-    # Poling, Prausnitz & O'Connell, The Properties of Gases and Liquids, 5th ed., Table 11-2 (from memory)
-    ("carbon dioxide", "air", 317.2, ATM, 0.177e-4, "Poling et al. 5th ed. Table 11-2 (from memory)"),
-    ("ethanol", "air", 313.0, ATM, 0.145e-4, "Poling et al. 5th ed. Table 11-2 (from memory)"),
-    ("helium", "air", 317.2, ATM, 0.765e-4, "Poling et al. 5th ed. Table 11-2 (from memory)"),
-    ("n-hexane", "air", 328.0, ATM, 0.093e-4, "Poling et al. 5th ed. Table 11-2 (from memory)"),
-    ("toluene", "air", 298.9, ATM, 0.086e-4, "Poling et al. 5th ed. Table 11-2 (from memory)"),
-    ("water", "air", 313.0, ATM, 0.292e-4, "Poling et al. 5th ed. Table 11-2 (from memory)"),
-    ("water", "nitrogen", 308.0, ATM, 0.259e-4, "Poling et al. 5th ed. Table 11-2 (from memory)"),
-    ("ammonia", "nitrogen", 298.0, ATM, 0.230e-4, "Poling et al. 5th ed. Table 11-2 (from memory)"),
-    ("helium", "nitrogen", 298.0, ATM, 0.687e-4, "Cussler, Diffusion, 3rd ed., Table 5.1-1 (from memory)"),
-    # Treybal, Mass-Transfer Operations, 3rd ed., Table 2.1 (from memory)
-    ("ethanol", "air", 273.0, ATM, 0.102e-4, "Treybal 3rd ed. Table 2.1 (from memory)"),
+#: CRC Handbook of Chemistry and Physics, table "Diffusion in gases" (from Marrero & Mason 1972,
+#: J. Phys. Chem. Ref. Data 1, 3), p = 101.325 kPa; air rows are for a gas in a large excess of
+#: air, the others equimolar.  Read from a reproduction of the table (zanotowane.pl/1014/7325).
+CRC = "CRC Handbook, 'Diffusion in gases' (Marrero & Mason 1972), 101.325 kPa"
+#: Perry's Chemical Engineers' Handbook, Table 2-371 "Diffusivities of pairs of gases and
+#: vapors (1 atm)", 7th ed. (the same table is 2-324 in the 8th ed.); the air and H2 columns only
+#: (rows where the column is unambiguous).  Read from a reproduction of the table (scribd.com
+#: document 572279144).
+PERRY = "Perry's 7th ed. Table 2-371 (1 atm)"
+INCROPERA = "Incropera & DeWitt, 6th ed., Table A.8, 1 atm (from memory)"
+#: Bird, Stewart & Lightfoot, Transport Phenomena, 2nd ed., Table 17.1-1, 1 atm (values from
+#: Hirschfelder, Curtiss & Bird 1964; water and ammonia pairs from Reid, Prausnitz & Poling 4th
+#: ed.; hydrocarbon pairs from Gotoh et al. 1974).  Read from a reproduction of the page
+#: (digilib.universitaspertamina.ac.id, Transport Phenomena, page 537).
+BSL = "Bird, Stewart & Lightfoot 2nd ed. Table 17.1-1 (1 atm)"
+#: Welty, Wicks & Wilson, Fundamentals of Momentum, Heat and Mass Transfer, 3rd ed. (1984), as
+#: reprinted in Benitez, Principles and Modern Applications of Mass Transfer Operations, Appendix
+#: Table A.1, which lists D*P in m^2 Pa/s (divided here by 101325 Pa for D at 1 atm).  Read from a
+#: reproduction of the appendix (scribd.com document 379518623).
+WELTY = "Welty, Wicks & Wilson 3rd ed., via Benitez Table A.1 (D*P)"
+#: Poling, Prausnitz & O'Connell 5th ed. Table 11-2 lists D*P in bar cm^2/s: rows at P = 1 bar.
+POLING = "Poling et al. 5th ed. Table 11-2, D*P at 1 bar (from memory)"
+
+GAS_PAIRS: list[tuple[str, str, float, float, float, str, str]] = [
+    # --- permanent gases (CRC) ---
+    ("argon", "air", 273.15, ATM, 0.167e-4, "permanent gases", CRC),
+    ("argon", "air", 293.15, ATM, 0.189e-4, "permanent gases", CRC),
+    ("methane", "air", 293.15, ATM, 0.210e-4, "permanent gases", CRC),
+    ("carbon monoxide", "air", 293.15, ATM, 0.208e-4, "permanent gases", CRC),
+    ("carbon dioxide", "air", 293.15, ATM, 0.160e-4, "permanent gases", CRC),
+    ("carbon dioxide", "air", 373.15, ATM, 0.252e-4, "permanent gases", CRC),
+    ("hydrogen", "air", 293.15, ATM, 0.756e-4, "permanent gases", CRC),
+    ("helium", "air", 293.15, ATM, 0.697e-4, "permanent gases", CRC),
+    ("argon", "carbon dioxide", 293.15, ATM, 0.148e-4, "permanent gases", CRC),
+    ("argon", "hydrogen", 293.15, ATM, 0.794e-4, "permanent gases", CRC),
+    ("argon", "helium", 293.15, ATM, 0.726e-4, "permanent gases", CRC),
+    ("argon", "nitrogen", 293.15, ATM, 0.190e-4, "permanent gases", CRC),
+    ("argon", "oxygen", 293.15, ATM, 0.187e-4, "permanent gases", CRC),
+    ("methane", "hydrogen", 293.15, ATM, 0.708e-4, "permanent gases", CRC),
+    ("methane", "helium", 293.15, ATM, 0.650e-4, "permanent gases", CRC),
+    ("methane", "nitrogen", 293.15, ATM, 0.208e-4, "permanent gases", CRC),
+    ("methane", "oxygen", 293.15, ATM, 0.220e-4, "permanent gases", CRC),
+    # Incropera Table A.8 lists these at 273 K or 293 K, not 298 K
+    ("hydrogen", "oxygen", 273.0, ATM, 0.70e-4, "permanent gases", INCROPERA),
+    ("hydrogen", "nitrogen", 273.0, ATM, 0.68e-4, "permanent gases", INCROPERA),
+    ("hydrogen", "carbon dioxide", 273.0, ATM, 0.55e-4, "permanent gases", INCROPERA),
+    ("carbon dioxide", "oxygen", 273.0, ATM, 0.14e-4, "permanent gases", INCROPERA),
+    ("oxygen", "nitrogen", 273.0, ATM, 0.18e-4, "permanent gases", INCROPERA),
+    ("carbon dioxide", "nitrogen", 293.0, ATM, 0.16e-4, "permanent gases", INCROPERA),
+    # the same pair as the 273 K row above, at 294 K and 2 atm: consistent with it by T^1.75/P
+    (
+        "hydrogen",
+        "nitrogen",
+        294.0,
+        2 * ATM,
+        0.38e-4,
+        "permanent gases",
+        "Cussler, Diffusion, 3rd ed., Example 5.1-2 (from memory)",
+    ),
+    ("carbon dioxide", "nitrous oxide", 273.2, ATM, 0.096e-4, "permanent gases", BSL),
+    ("carbon dioxide", "carbon monoxide", 273.2, ATM, 0.139e-4, "permanent gases", BSL),
+    ("carbon dioxide", "nitrogen", 273.2, ATM, 0.144e-4, "permanent gases", BSL),
+    ("carbon dioxide", "nitrogen", 288.2, ATM, 0.158e-4, "permanent gases", BSL),
+    ("carbon dioxide", "nitrogen", 298.2, ATM, 0.165e-4, "permanent gases", BSL),
+    ("nitrogen", "oxygen", 273.2, ATM, 0.181e-4, "permanent gases", BSL),
+    ("hydrogen", "sulfur hexafluoride", 298.2, ATM, 0.420e-4, "permanent gases", BSL),
+    ("hydrogen", "methane", 298.2, ATM, 0.726e-4, "permanent gases", BSL),
+    ("hydrogen", "nitrogen", 273.2, ATM, 0.674e-4, "permanent gases", BSL),
+    ("carbon dioxide", "air", 317.2, BAR, 0.177e-4, "permanent gases", POLING),
+    ("helium", "air", 317.2, BAR, 0.765e-4, "permanent gases", POLING),
+    # --- water and polar inorganic vapours ---
+    ("water", "air", 293.15, ATM, 0.242e-4, "polar vapours", CRC),
+    ("water", "air", 373.15, ATM, 0.399e-4, "polar vapours", CRC),
+    ("water", "air", 298.0, ATM, 0.26e-4, "polar vapours", INCROPERA),
+    ("ammonia", "air", 298.0, ATM, 0.28e-4, "polar vapours", INCROPERA),
+    ("water", "air", 313.0, BAR, 0.292e-4, "polar vapours", POLING),
+    ("water", "nitrogen", 308.0, ATM, 0.259e-4, "polar vapours", BSL),
+    ("water", "oxygen", 352.0, ATM, 0.357e-4, "polar vapours", BSL),
+    ("ammonia", "nitrogen", 298.0, ATM, 0.233e-4, "polar vapours", BSL),
+    ("ammonia", "hydrogen", 263.0, ATM, 0.58e-4, "polar vapours", BSL),
+    # --- organic vapours in air and hydrogen ---
+    ("acetic acid", "air", 273.15, ATM, 0.1064e-4, "organic vapours", PERRY),
+    ("acetone", "air", 273.15, ATM, 0.109e-4, "organic vapours", PERRY),
+    ("benzene", "air", 273.15, ATM, 0.077e-4, "organic vapours", PERRY),
+    ("benzene", "air", 298.0, ATM, 0.88e-5, "organic vapours", INCROPERA),
+    ("1-butanol", "air", 273.15, ATM, 0.0703e-4, "organic vapours", PERRY),
+    ("1-butanol", "air", 303.15, ATM, 0.088e-4, "organic vapours", PERRY),
+    ("2-methyl-1-propanol", "air", 273.15, ATM, 0.0727e-4, "organic vapours", PERRY),
+    ("n-butyl acetate", "air", 273.15, ATM, 0.058e-4, "organic vapours", PERRY),
+    ("butyric acid", "air", 273.15, ATM, 0.067e-4, "organic vapours", PERRY),
+    ("carbon disulfide", "air", 273.15, ATM, 0.0892e-4, "organic vapours", PERRY),
+    ("chloroform", "air", 273.15, ATM, 0.091e-4, "organic vapours", PERRY),
+    ("chlorobenzene", "air", 303.15, ATM, 0.075e-4, "organic vapours", PERRY),
+    ("aniline", "air", 303.15, ATM, 0.075e-4, "organic vapours", PERRY),
+    ("diethylamine", "air", 273.15, ATM, 0.0884e-4, "organic vapours", PERRY),
+    ("diethyl ether", "air", 273.15, ATM, 0.0778e-4, "organic vapours", PERRY),
+    ("ethyl acetate", "air", 273.15, ATM, 0.0715e-4, "organic vapours", PERRY),
+    ("ethyl acetate", "air", 303.15, ATM, 0.089e-4, "organic vapours", PERRY),
+    ("ethanol", "air", 273.15, ATM, 0.102e-4, "organic vapours", PERRY),
+    ("ethylbenzene", "air", 273.15, ATM, 0.0658e-4, "organic vapours", PERRY),
+    ("acetic acid", "hydrogen", 273.15, ATM, 0.416e-4, "organic vapours", PERRY),
+    ("benzene", "hydrogen", 273.15, ATM, 0.306e-4, "organic vapours", PERRY),
+    ("ethanol", "hydrogen", 273.15, ATM, 0.375e-4, "organic vapours", PERRY),
+    ("ethanol", "air", 313.0, BAR, 0.145e-4, "organic vapours", POLING),
+    ("n-hexane", "air", 328.0, BAR, 0.093e-4, "organic vapours", POLING),
+    ("toluene", "air", 298.9, BAR, 0.086e-4, "organic vapours", POLING),
+    ("benzene", "air", 298.0, ATM, 0.974 / ATM, "organic vapours", WELTY),
+    ("toluene", "air", 298.0, ATM, 0.855 / ATM, "organic vapours", WELTY),
+    ("ethanol", "air", 298.0, ATM, 1.337 / ATM, "organic vapours", WELTY),
+    ("methanol", "air", 298.0, ATM, 1.641 / ATM, "organic vapours", WELTY),
+    ("n-octane", "air", 298.0, ATM, 0.610 / ATM, "organic vapours", WELTY),
+    ("nitrobenzene", "air", 298.0, ATM, 0.879 / ATM, "organic vapours", WELTY),
+    ("n-propyl acetate", "air", 315.0, ATM, 0.932 / ATM, "organic vapours", WELTY),
+    ("diethyl ether", "air", 293.0, ATM, 0.908 / ATM, "organic vapours", WELTY),
+    ("ethanol", "carbon dioxide", 273.0, ATM, 0.702 / ATM, "organic vapours", WELTY),
+    ("benzene", "carbon dioxide", 318.0, ATM, 0.724 / ATM, "organic vapours", WELTY),
+    ("ethyl acetate", "carbon dioxide", 319.0, ATM, 0.675 / ATM, "organic vapours", WELTY),
+    ("benzene", "hydrogen", 273.0, ATM, 3.211 / ATM, "organic vapours", WELTY),
+    ("benzene", "oxygen", 296.0, ATM, 0.951 / ATM, "organic vapours", WELTY),
+    ("water", "air", 298.0, ATM, 2.634 / ATM, "polar vapours", WELTY),
+    ("water", "carbon dioxide", 298.0, ATM, 1.661 / ATM, "polar vapours", WELTY),
+    ("water", "oxygen", 308.1, ATM, 2.857 / ATM, "polar vapours", WELTY),
+    ("ammonia", "nitrogen", 293.0, ATM, 2.441 / ATM, "polar vapours", WELTY),
+    ("ammonia", "oxygen", 293.0, ATM, 2.563 / ATM, "polar vapours", WELTY),
+    ("sulfur dioxide", "air", 273.0, ATM, 1.236 / ATM, "polar vapours", WELTY),
+    ("carbon dioxide", "nitrogen", 298.0, ATM, 1.672 / ATM, "permanent gases", WELTY),
+    ("oxygen", "hydrogen", 273.0, ATM, 7.061 / ATM, "permanent gases", WELTY),
+    ("ethane", "hydrogen", 273.0, ATM, 4.447 / ATM, "permanent gases", WELTY),
+    ("methane", "hydrogen", 273.0, ATM, 6.331 / ATM, "permanent gases", WELTY),
+    ("propane", "carbon dioxide", 298.0, ATM, 0.874 / ATM, "permanent gases", WELTY),
+    ("ethylene", "nitrogen", 298.0, ATM, 1.651 / ATM, "permanent gases", WELTY),
+    # --- hydrocarbon pairs ---
+    ("nitrogen", "ethane", 298.2, ATM, 0.148e-4, "hydrocarbon pairs", BSL),
+    ("nitrogen", "n-butane", 298.2, ATM, 0.0960e-4, "hydrocarbon pairs", BSL),
+    ("propane", "n-butane", 378.2, ATM, 0.0768e-4, "hydrocarbon pairs", BSL),
+    ("propane", "n-butane", 437.7, ATM, 0.107e-4, "hydrocarbon pairs", BSL),
+    ("propane", "isobutane", 298.0, ATM, 0.0439e-4, "hydrocarbon pairs", BSL),
+    ("propane", "isobutane", 378.2, ATM, 0.0823e-4, "hydrocarbon pairs", BSL),
+    ("propane", "isobutane", 437.8, ATM, 0.112e-4, "hydrocarbon pairs", BSL),
+    ("propane", "neopentane", 298.1, ATM, 0.0431e-4, "hydrocarbon pairs", BSL),
+    ("propane", "neopentane", 378.2, ATM, 0.0703e-4, "hydrocarbon pairs", BSL),
+    ("propane", "neopentane", 437.7, ATM, 0.0945e-4, "hydrocarbon pairs", BSL),
+    ("n-butane", "neopentane", 298.0, ATM, 0.0413e-4, "hydrocarbon pairs", BSL),
+    ("n-butane", "neopentane", 378.2, ATM, 0.0644e-4, "hydrocarbon pairs", BSL),
+    ("n-butane", "neopentane", 437.8, ATM, 0.0839e-4, "hydrocarbon pairs", BSL),
+    ("isobutane", "neopentane", 298.1, ATM, 0.0362e-4, "hydrocarbon pairs", BSL),
+    ("isobutane", "neopentane", 378.2, ATM, 0.0580e-4, "hydrocarbon pairs", BSL),
 ]
 
-LIQUID_SYSTEMS: list[tuple[str, str, float, float, str]] = [
-    # Poling, Prausnitz & O'Connell, 5th ed., ch. 11 (from memory)
-    ("ethylbenzene", "water", 293.0, 0.81e-9, "Poling et al. 5th ed. ch. 11 (from memory)"),
-    # Cussler, Diffusion, 3rd ed., Table 5.2-1, dilute in water at 25 C (from memory)
-    ("oxygen", "water", 298.15, 2.10e-9, "Cussler 3rd ed. Table 5.2-1 (from memory)"),
-    ("carbon dioxide", "water", 298.15, 1.92e-9, "Cussler 3rd ed. Table 5.2-1 (from memory)"),
-    ("nitrogen", "water", 298.15, 1.88e-9, "Cussler 3rd ed. Table 5.2-1 (from memory)"),
-    ("methane", "water", 298.15, 1.49e-9, "Cussler 3rd ed. Table 5.2-1 (from memory)"),
-    ("ethane", "water", 298.15, 1.20e-9, "Cussler 3rd ed. Table 5.2-1 (from memory)"),
-    ("propane", "water", 298.15, 0.97e-9, "Cussler 3rd ed. Table 5.2-1 (from memory)"),
-    ("benzene", "water", 298.15, 1.02e-9, "Cussler 3rd ed. Table 5.2-1 (from memory)"),
-    ("acetic acid", "water", 298.15, 1.21e-9, "Cussler 3rd ed. Table 5.2-1 (from memory)"),
-    ("acetone", "water", 298.15, 1.16e-9, "Cussler 3rd ed. Table 5.2-1 (from memory)"),
-    ("ammonia", "water", 298.15, 1.64e-9, "Cussler 3rd ed. Table 5.2-1 (from memory)"),
-    ("hydrogen", "water", 298.15, 4.50e-9, "Cussler 3rd ed. Table 5.2-1 (from memory)"),
+#: Cussler, Diffusion: Mass Transfer in Fluid Systems, 3rd ed., Table 5.2-1 (dilute in water).
+CUSSLER = "Cussler 3rd ed. Table 5.2-1 (from memory)"
+#: Benitez, Principles and Modern Applications of Mass Transfer Operations, Appendix Table A.2
+#: (infinite dilution), read from a reproduction of the appendix (scribd.com document 379518623).
+BENITEZ = "Benitez, Appendix Table A.2"
+#: Geankoplis, Transport Processes and Separation Process Principles, 4th ed., Table 6.3-1.
+GEANKOPLIS = "Geankoplis 4th ed. Table 6.3-1, dilute (from memory)"
+
+LIQUID_SYSTEMS: list[tuple[str, str, float, float, str, str]] = [
+    # --- organic solutes in water ---
+    (
+        "ethylbenzene",
+        "water",
+        293.0,
+        0.81e-9,
+        "organic solutes in water",
+        "Poling et al. 5th ed. ch. 11 example (from memory)",
+    ),
+    ("benzene", "water", 298.15, 1.02e-9, "organic solutes in water", CUSSLER),
+    ("acetone", "water", 298.15, 1.16e-9, "organic solutes in water", CUSSLER),
+    ("acetic acid", "water", 298.15, 1.21e-9, "organic solutes in water", CUSSLER),
+    ("ethanol", "water", 298.15, 1.24e-9, "organic solutes in water", GEANKOPLIS),
+    ("methanol", "water", 288.15, 1.28e-9, "organic solutes in water", GEANKOPLIS),
+    ("1-butanol", "water", 288.15, 0.77e-9, "organic solutes in water", GEANKOPLIS),
+    ("urea", "water", 298.15, 1.38e-9, "organic solutes in water", GEANKOPLIS),
+    ("ethylene glycol", "water", 298.15, 1.16e-9, "organic solutes in water", CUSSLER),
+    ("glycerol", "water", 298.15, 1.06e-9, "organic solutes in water", CUSSLER),
+    ("aniline", "water", 293.15, 0.92e-9, "organic solutes in water", CUSSLER),
+    # --- dissolved gases in water ---
+    ("oxygen", "water", 298.15, 2.10e-9, "gases in water", CUSSLER),
+    ("carbon dioxide", "water", 298.15, 1.92e-9, "gases in water", CUSSLER),
+    ("nitrogen", "water", 298.15, 1.88e-9, "gases in water", CUSSLER),
+    ("methane", "water", 298.15, 1.49e-9, "gases in water", CUSSLER),
+    ("ethane", "water", 298.15, 1.20e-9, "gases in water", CUSSLER),
+    ("propane", "water", 298.15, 0.97e-9, "gases in water", CUSSLER),
+    ("ammonia", "water", 298.15, 1.64e-9, "gases in water", CUSSLER),
+    ("hydrogen", "water", 298.15, 4.50e-9, "gases in water", CUSSLER),
+    # --- solutes in organic solvents ---
+    ("chlorine", "water", 298.0, 1.25e-9, "gases in water", BENITEZ),
+    # acetic acid and benzoic acid in benzene: the same values in Geankoplis (from memory)
+    ("acetic acid", "benzene", 298.0, 2.09e-9, "solutes in organic solvents", BENITEZ),
+    ("benzoic acid", "benzene", 298.0, 1.38e-9, "solutes in organic solvents", BENITEZ),
+    ("aniline", "benzene", 298.0, 1.96e-9, "solutes in organic solvents", BENITEZ),
+    ("bromobenzene", "benzene", 281.0, 1.45e-9, "solutes in organic solvents", BENITEZ),
+    ("ethanol", "benzene", 288.15, 2.25e-9, "solutes in organic solvents", GEANKOPLIS),
+    ("acetic acid", "acetone", 298.15, 3.31e-9, "solutes in organic solvents", GEANKOPLIS),
+    ("water", "ethanol", 298.15, 1.132e-9, "solutes in organic solvents", GEANKOPLIS),
+    ("chloroform", "ethanol", 293.15, 1.25e-9, "solutes in organic solvents", GEANKOPLIS),
+    (
+        "benzene",
+        "ethanol",
+        298.15,
+        1.81e-9,
+        "solutes in organic solvents",
+        "Lusis & Ratcliff, AIChE J. 17, 1492 (1971) (from memory)",
+    ),
+    (
+        "toluene",
+        "n-hexane",
+        298.15,
+        4.21e-9,
+        "solutes in organic solvents",
+        "Poling et al. 5th ed. Table 11-5 (from memory)",
+    ),
+    (
+        "benzene",
+        "n-heptane",
+        298.15,
+        3.40e-9,
+        "solutes in organic solvents",
+        "Poling et al. 5th ed. Table 11-5 (from memory)",
+    ),
 ]

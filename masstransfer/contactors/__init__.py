@@ -59,6 +59,7 @@ from ._reaction import (
 from ._transfer_units import (
     ColumnProfile,
     column_profile,
+    film_transfer_units,
     numerical_transfer_units,
     overall_gas_htu,
     overall_liquid_htu,
@@ -92,6 +93,7 @@ __all__ = [
     "enhancement_instantaneous",
     "enhancement_penetration",
     "enhancement_surface_renewal",
+    "film_transfer_units",
     "hatta_number",
     "numerical_transfer_units",
     "onda_k_G",

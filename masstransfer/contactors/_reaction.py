@@ -7,6 +7,7 @@ from __future__ import annotations
 
 import math
 from dataclasses import dataclass
+from typing import overload
 
 import numpy as np
 
@@ -38,6 +39,12 @@ def _arr(x: FloatOrArray) -> FloatArray:
     return np.asarray(x, dtype=float)
 
 
+@overload
+def hatta_number(k2: float, c_B: float, D_A: float, k_L: float) -> float: ...
+@overload
+def hatta_number(k2: FloatArray, c_B: ArrayLike, D_A: ArrayLike, k_L: ArrayLike) -> FloatArray: ...
+@overload
+def hatta_number(k2: ArrayLike, c_B: ArrayLike, D_A: ArrayLike, k_L: ArrayLike) -> FloatOrArray: ...
 @guard
 def hatta_number(k2: ArrayLike, c_B: ArrayLike, D_A: ArrayLike, k_L: ArrayLike) -> FloatOrArray:
     """Hatta number of a reaction first order in the gas A and the liquid reactant B.
@@ -289,6 +296,12 @@ def enhancement_instantaneous(
     return finish(np.maximum(r + ratio / r, 1.0))
 
 
+@overload
+def enhancement_factor(hatta: float, E_inf: float) -> float: ...
+@overload
+def enhancement_factor(hatta: FloatArray, E_inf: ArrayLike) -> FloatArray: ...
+@overload
+def enhancement_factor(hatta: ArrayLike, E_inf: ArrayLike) -> FloatOrArray: ...
 @guard
 def enhancement_factor(hatta: ArrayLike, E_inf: ArrayLike) -> FloatOrArray:
     """Enhancement factor of a second-order reaction, DeCoursey's explicit approximation.

@@ -2,13 +2,17 @@
 
 The names-in entry points :func:`masstransfer.gas_diffusivity`,
 :func:`masstransfer.liquid_diffusivity` and :func:`masstransfer.diffusivity_report` live at the
-top level; the numbers-in methods, the mixture rule and the porous and solid media are here.
+top level; the numbers-in methods, the method records (``GAS_METHODS``, ``LIQUID_METHODS``: one
+:class:`DiffusivityMethod` each), :func:`available_methods`, the mixture rule and the porous and
+solid media are here.
 """
 
 from __future__ import annotations
 
 from ._gas import (
+    GAS_DEFAULT,
     GAS_METHODS,
+    available_methods,
     blanc,
     brokaw,
     chapman_enskog,
@@ -25,25 +29,44 @@ from ._liquid import (
     hayduk_minhas,
     hayduk_minhas_aqueous,
     hayduk_minhas_paraffin,
+    liquid_default,
     liquid_diffusivity_inputs,
     stokes_einstein,
     tyn_calus,
     wilke_chang,
 )
 from ._porous import bosanquet, effective_diffusivity, knudsen_diffusivity
+from ._records import (
+    ClassRule,
+    ConstantUsed,
+    DiffusivityMethod,
+    MethodAvailability,
+    Prepared,
+    SpeciesClass,
+    classify,
+)
 from ._solid import ArrheniusFit, arrhenius_diffusivity, arrhenius_parameters
 
 __all__ = [
+    "GAS_DEFAULT",
     "GAS_METHODS",
     "LIQUID_METHODS",
     "ArrheniusFit",
+    "ClassRule",
+    "ConstantUsed",
+    "DiffusivityMethod",
     "LiquidDiffusivityInputs",
+    "MethodAvailability",
+    "Prepared",
+    "SpeciesClass",
     "arrhenius_diffusivity",
     "arrhenius_parameters",
+    "available_methods",
     "blanc",
     "bosanquet",
     "brokaw",
     "chapman_enskog",
+    "classify",
     "effective_diffusivity",
     "fuller",
     "fuller_volume",
@@ -52,6 +75,7 @@ __all__ = [
     "hayduk_minhas_aqueous",
     "hayduk_minhas_paraffin",
     "knudsen_diffusivity",
+    "liquid_default",
     "liquid_diffusivity_inputs",
     "neufeld_collision_integral",
     "rescale_gas_diffusivity",

@@ -17,7 +17,9 @@ from __future__ import annotations
 
 import math
 from collections.abc import Mapping
-from typing import Final, overload
+from dataclasses import dataclass
+from types import MappingProxyType
+from typing import Final, Literal, overload
 
 import numpy as np
 
@@ -36,11 +38,24 @@ from .._validation import (
 )
 from ..constants import DEBYE
 from ..errors import EnvelopeWarning, InputValueError, MissingConstantError
-from ..substances._species import Species, species
+from ..substances._species import Origin, Species, species
 from ._common import normalise_method
+from ._phase import PhaseLimits, check_vapour, phase_limits
+from ._records import (
+    ClassRule,
+    ConstantUsed,
+    DiffusivityMethod,
+    MethodAvailability,
+    Prepared,
+    Role,
+    SpeciesClass,
+    classify,
+)
 
 __all__ = [
+    "GAS_DEFAULT",
     "GAS_METHODS",
+    "available_methods",
     "blanc",
     "brokaw",
     "chapman_enskog",
@@ -56,15 +71,6 @@ __all__ = [
 #: Pressure above which the low-pressure methods warn [Pa] (common practice:
 #: the ideal-gas kinetic theory behind them holds to roughly 10 bar).
 LOW_PRESSURE_LIMIT: Final = 1.0e6
-
-#: Accepted ``method=`` names of :func:`gas_diffusivity` and the average
-#: absolute error their sources report, for messages and reports.
-GAS_METHODS: Final = {
-    "fuller": "Fuller, Schettler & Giddings (1966; volumes of 1969): about 4-5 % on non-polar pairs",
-    "chapman-enskog": "Chapman-Enskog with Neufeld collision integral: about 7-8 %",
-    "wilke-lee": "Wilke & Lee (1955): about 5-7 %",
-    "brokaw": "Brokaw (1969) for polar pairs: about 7-10 %",
-}
 
 _BAR = 1.0e5
 
@@ -192,7 +198,9 @@ def fuller_volume(sp: str | Species) -> float:
     The special-molecule volume is used where the source tabulates one
     (H2, N2, O2, air, CO2, H2O, NH3, ...).  Otherwise atomic increments for
     C, H, O, N, F, Cl, Br, I and S are summed and -18.3 is added for each
-    aromatic or heterocyclic ring found in the species' SMILES.
+    aromatic ring (heteroaromatic included) found in the species' SMILES; none for
+    saturated rings, heterocyclic or not (the increment was fitted on aromatic rings and
+    over-predicts D by about 20 % for tetrahydrofuran or dioxane).
 
     Parameters
     ----------
@@ -226,9 +234,13 @@ def fuller_volume(sp: str | Species) -> float:
     111.48
 
     """
-    s = species(sp)
+    return _fuller_volume_parts(species(sp))[0]
+
+
+def _fuller_volume_parts(s: Species) -> tuple[float, tuple[str, ...]]:
+    """Fuller volume of ``s`` and the notes on the rules that set it."""
     if s.fuller_volume is not None:
-        return s.fuller_volume
+        return s.fuller_volume, ()
     if not s.atoms:
         raise MissingConstantError(
             f"species {s.name!r} has no formula, so its Fuller volume cannot be summed; "
@@ -243,12 +255,25 @@ def fuller_volume(sp: str | Species) -> float:
                 "use method='chapman-enskog', or supply Species(..., fuller_volume=...)"
             )
         total += n * inc
+    notes: list[str] = []
     mol = s.molecule
     if mol is not None:
-        for ring in mol.rings:
-            if ring.aromatic or ring.hetero:
-                total += data.FULLER_RING_INCREMENT
-    return total
+        aromatic = sum(1 for ring in mol.rings if ring.aromatic)
+        saturated_hetero = sum(1 for ring in mol.rings if ring.hetero and not ring.aromatic)
+        if aromatic:
+            total += aromatic * data.FULLER_RING_INCREMENT
+            notes.append(
+                f"{s.name}: Fuller ring increment {data.FULLER_RING_INCREMENT:g} applied to "
+                f"{aromatic} aromatic ring(s): volume {total:.2f} (atomic sum "
+                f"{total - aromatic * data.FULLER_RING_INCREMENT:.2f})"
+            )
+        if saturated_hetero:
+            notes.append(
+                f"{s.name}: no Fuller ring increment for its {saturated_hetero} saturated "
+                "heterocyclic ring(s) (the increment is for aromatic rings; applying it would "
+                f"lower the volume to {total + saturated_hetero * data.FULLER_RING_INCREMENT:.2f})"
+            )
+    return total, tuple(notes)
 
 
 # Neufeld, Janzen & Aziz (1972) constants, as in Poling et al. 5th ed. Eq. (11-3.6).
@@ -504,7 +529,18 @@ def wilke_lee(
     _check_M("M_b", Mb)
     _warn_pressure(Pv, "wilke_lee")
     M_ab = _m_ab(float(Ma), float(Mb))
+    if M_ab <= _WILKE_LEE_M_MIN:
+        raise InputValueError(
+            f"M_a={float(Ma):g} and M_b={float(Mb):g} kg/mol give a pair molar mass M_AB = "
+            f"{M_ab:.4g} g/mol, where Wilke-Lee's leading factor 3.03 - 0.98/M_AB^0.5 is not positive "
+            f"(it changes sign at {_WILKE_LEE_M_MIN:.4f} g/mol); check the units (kg/mol) or use "
+            "chapman_enskog"
+        )
     return _kinetic(Tv, Pv, _wilke_lee_constant(M_ab), M_ab, float(s) * 1e10, float(e), 0.0)
+
+
+#: Pair molar mass [g/mol] at which Wilke-Lee's factor 3.03 - 0.98/M_AB^0.5 is zero.
+_WILKE_LEE_M_MIN: Final = (0.98 / 3.03) ** 2
 
 
 def _wilke_lee_constant(M_ab: float) -> float:
@@ -723,107 +759,434 @@ def rescale_gas_diffusivity(
 
 
 # --------------------------------------------------------------------------
-# names in
+# names in: constant preparation per method, the records, the dispatcher
 # --------------------------------------------------------------------------
 
 
-def _lj_pair(a: Species, b: Species, method: str) -> tuple[float, float]:
-    sa, sb = a.require("sigma", method), b.require("sigma", method)
-    ea, eb = a.require("epsilon_k", method), b.require("epsilon_k", method)
-    return 0.5 * (sa + sb), math.sqrt(ea * eb)
+def _used(sp: Species, name: str, value: float | None = None) -> ConstantUsed:
+    """Return a constant as used, with its source (the origin, when no text source was given)."""
+    v = getattr(sp, name) if value is None else value
+    if v is None:
+        return ConstantUsed(None, "absent")
+    origin = sp.origins.get(name)
+    src = sp.sources.get(name) or (origin.value if origin is not None else "user")
+    return ConstantUsed(float(v), src)
 
 
-def _wilke_lee_params(s: Species) -> tuple[float, float]:
-    """Tabulated LJ values, else Wilke & Lee's estimates from Tb and Vb."""
-    tabulated = (
-        "tabulated" in s.sources.get("sigma", "")
-        or "Svehla" in s.sources.get("sigma", "")
-        or s.sources.get("sigma", "").startswith(("masstransfer._tables", "user"))
-    )
-    if s.sigma is not None and s.epsilon_k is not None and tabulated:
-        return s.sigma, s.epsilon_k
-    if s.Vb is not None and s.Tb is not None:
-        return 1.18e-10 * (s.Vb * 1e6) ** (1.0 / 3.0), 1.15 * s.Tb
-    return s.require("sigma", "Wilke-Lee"), s.require("epsilon_k", "Wilke-Lee")
+def _prepare_fuller(a: Species, b: Species) -> Prepared:
+    va, notes_a = _fuller_volume_parts(a)
+    vb, notes_b = _fuller_volume_parts(b)
+    c = float(_fuller_constant(a.molar_mass, b.molar_mass, va, vb))
+    consts = {
+        role: {"molar_mass": _used(sp, "molar_mass"), "fuller_volume": ConstantUsed(v, _fuller_source(sp))}
+        for role, sp, v in (("solute", a, va), ("medium", b, vb))
+    }
+    return Prepared((c,), consts, (*notes_a, *notes_b))
 
 
-_PREPARED: dict[tuple[str, object, object], tuple[float, ...]] = {}
-_METHOD_KEYS: Final = {name: name for name in GAS_METHODS}
+def _fuller_source(sp: Species) -> str:
+    if sp.fuller_volume is not None:
+        return sp.sources.get("fuller_volume") or sp.origins["fuller_volume"].value
+    return "Fuller et al. (1969) atomic and ring increments"
 
 
-def _prepare(method: str, solute: str | Species, carrier: str | Species) -> tuple[float, ...]:
-    key = (method, solute, carrier)
-    try:
-        got = _PREPARED.get(key)
-    except TypeError:  # an unhashable identifier: let species() explain what it expects
-        species(solute)
-        species(carrier)
-        raise
-    if got is not None:
-        return got
-    a, b = species(solute), species(carrier)
-    Ma, Mb = a.molar_mass, b.molar_mass
-    prepared: tuple[float, ...]
-    if method == "fuller":
-        prepared = (float(_fuller_constant(Ma, Mb, fuller_volume(a), fuller_volume(b))),)
-    elif method == "chapman-enskog":
-        s, e = _lj_pair(a, b, "Chapman-Enskog")
-        prepared = (0.00266, _m_ab(Ma, Mb), s * 1e10, e, 0.0)
-    elif method == "wilke-lee":
-        sa, ea = _wilke_lee_params(a)
-        sb, eb = _wilke_lee_params(b)
-        M_ab = _m_ab(Ma, Mb)
-        prepared = (_wilke_lee_constant(M_ab), M_ab, 0.5 * (sa + sb) * 1e10, math.sqrt(ea * eb), 0.0)
-    else:  # brokaw
-        s_ab, e_ab, d2 = _brokaw_pair(
-            a.require("Vb", "Brokaw"),
-            b.require("Vb", "Brokaw"),
-            a.require("Tb", "Brokaw"),
-            b.require("Tb", "Brokaw"),
-            a.dipole or 0.0,
-            b.dipole or 0.0,
+def _lj_constants(sp: Species, method: str) -> tuple[float, float, tuple[str, ...]]:
+    """(sigma [m], epsilon/k [K], notes) for Chapman-Enskog; estimated values are noted."""
+    s, e = sp.require("sigma", method), sp.require("epsilon_k", method)
+    notes: tuple[str, ...] = ()
+    if sp.origins.get("sigma") is Origin.ESTIMATED or sp.origins.get("epsilon_k") is Origin.ESTIMATED:
+        notes = (
+            f"{sp.name}: Lennard-Jones constants estimated from the critical point (no tabulated "
+            f"values): sigma = {s * 1e10:.3f} angstrom, epsilon/k = {e:.1f} K",
         )
-        prepared = (0.00266, _m_ab(Ma, Mb), s_ab, e_ab, d2)
-    if len(_PREPARED) > 4096:
-        _PREPARED.clear()
-    _PREPARED[key] = prepared
-    return prepared
+    return s, e, notes
+
+
+def _prepare_chapman_enskog(a: Species, b: Species) -> Prepared:
+    sa, ea, na = _lj_constants(a, "Chapman-Enskog")
+    sb, eb, nb = _lj_constants(b, "Chapman-Enskog")
+    consts = {
+        role: {n: _used(sp, n) for n in ("molar_mass", "sigma", "epsilon_k")}
+        for role, sp in (("solute", a), ("medium", b))
+    }
+    args = (0.00266, _m_ab(a.molar_mass, b.molar_mass), 0.5 * (sa + sb) * 1e10, math.sqrt(ea * eb), 0.0)
+    return Prepared(args, consts, (*na, *nb))
+
+
+def _vb_for_gas_methods(sp: Species) -> tuple[float | None, tuple[str, ...]]:
+    """Molar volume at Tb, taking the tabulated value for small gases (noted when it changes Vb)."""
+    tab = data.SMALL_MOLECULE_VB.get(sp.CAS or "")
+    if tab is None or sp.origins.get("Vb") is Origin.USER:
+        return sp.Vb, ()
+    if sp.Vb is not None and abs(sp.Vb - tab) <= 0.01 * tab:
+        return tab, ()
+    was = "none" if sp.Vb is None else f"{sp.Vb * 1e6:.1f}"
+    return tab, (
+        f"{sp.name}: tabulated molar volume at the boiling point {tab * 1e6:.1f} cm^3/mol used "
+        f"(the value the correlations were fitted with) instead of {was} cm^3/mol",
+    )
+
+
+def _wilke_lee_params(sp: Species) -> tuple[float, float, tuple[str, ...]]:
+    """Tabulated or user Lennard-Jones values, else Wilke & Lee's estimates from Tb and Vb."""
+    if (
+        sp.sigma is not None
+        and sp.epsilon_k is not None
+        and sp.origins.get("sigma") in (Origin.TABULATED, Origin.USER)
+        and sp.origins.get("epsilon_k") in (Origin.TABULATED, Origin.USER)
+    ):
+        return sp.sigma, sp.epsilon_k, ()
+    Vb, notes = _vb_for_gas_methods(sp)
+    if Vb is not None and sp.Tb is not None:
+        s, e = 1.18e-10 * (Vb * 1e6) ** (1.0 / 3.0), 1.15 * sp.Tb
+        return (
+            s,
+            e,
+            (
+                *notes,
+                f"{sp.name}: no tabulated Lennard-Jones constants; Wilke-Lee estimates used: "
+                f"sigma = 1.18 Vb^(1/3) = {s * 1e10:.3f} angstrom, epsilon/k = 1.15 Tb = {e:.1f} K",
+            ),
+        )
+    return sp.require("sigma", "Wilke-Lee"), sp.require("epsilon_k", "Wilke-Lee"), ()
+
+
+def _prepare_wilke_lee(a: Species, b: Species) -> Prepared:
+    sa, ea, na = _wilke_lee_params(a)
+    sb, eb, nb = _wilke_lee_params(b)
+    M_ab = _m_ab(a.molar_mass, b.molar_mass)
+    consts = {
+        role: {
+            "molar_mass": _used(sp, "molar_mass"),
+            "sigma (as used)": ConstantUsed(s, _lj_source(sp, n)),
+            "epsilon_k (as used)": ConstantUsed(e, _lj_source(sp, n)),
+        }
+        for role, sp, s, e, n in (("solute", a, sa, ea, na), ("medium", b, sb, eb, nb))
+    }
+    args = (_wilke_lee_constant(M_ab), M_ab, 0.5 * (sa + sb) * 1e10, math.sqrt(ea * eb), 0.0)
+    return Prepared(args, consts, (*na, *nb))
+
+
+def _lj_source(sp: Species, notes: tuple[str, ...]) -> str:
+    if notes:
+        return "Wilke & Lee (1955) estimate from Tb and Vb"
+    return sp.sources.get("sigma") or sp.origins["sigma"].value
+
+
+def _prepare_brokaw(a: Species, b: Species) -> Prepared:
+    Va, na = _vb_for_gas_methods(a)
+    Vb, nb = _vb_for_gas_methods(b)
+    for sp, V in ((a, Va), (b, Vb)):
+        if V is None:
+            sp.require("Vb", "Brokaw")
+        if sp.dipole is None:
+            raise MissingConstantError(
+                f"species {sp.name!r} has no known dipole moment, which the Brokaw method needs "
+                "(unknown is not zero); supply it: masstransfer.species(...).replace(dipole=... [C m])"
+            )
+    assert Va is not None
+    assert Vb is not None
+    assert a.dipole is not None
+    assert b.dipole is not None
+    s_ab, e_ab, d2 = _brokaw_pair(
+        Va, Vb, a.require("Tb", "Brokaw"), b.require("Tb", "Brokaw"), a.dipole, b.dipole
+    )
+    consts = {
+        role: {
+            "molar_mass": _used(sp, "molar_mass"),
+            "Tb": _used(sp, "Tb"),
+            "Vb (as used)": ConstantUsed(
+                V, "tabulated small-molecule volume" if n else _used(sp, "Vb").source
+            ),
+            "dipole": _used(sp, "dipole"),
+        }
+        for role, sp, V, n in (("solute", a, Va, na), ("medium", b, Vb, nb))
+    }
+    return Prepared((0.00266, _m_ab(a.molar_mass, b.molar_mass), s_ab, e_ab, d2), consts, (*na, *nb))
+
+
+def _evaluate_fuller(prep: Prepared, T: FloatOrArray, P: FloatOrArray) -> FloatOrArray:
+    return finish(prep.args[0] * T**1.75 / P)
+
+
+def _evaluate_kinetic(prep: Prepared, T: FloatOrArray, P: FloatOrArray) -> FloatOrArray:
+    return _kinetic(T, P, *prep.args)
+
+
+_POLAR_EITHER = ClassRule(
+    SpeciesClass.POLAR,
+    Role.EITHER,
+    "a polar member: the Lennard-Jones potential ignores dipole forces (errors of 10-20 % on polar "
+    "pairs; Poling et al. 2001, Section 11-3); use Brokaw or Fuller",
+)
+
+#: The gas-phase methods, in the order they are tried when the default does not apply.
+GAS_METHODS: Final[Mapping[str, DiffusivityMethod]] = MappingProxyType(
+    {
+        r.name: r
+        for r in (
+            DiffusivityMethod(
+                name="fuller",
+                phase="gas",
+                title="Fuller, Schettler & Giddings (1966), volumes of Fuller, Ensley & Giddings (1969)",
+                function=fuller,
+                constants=("molar_mass", "fuller_volume"),
+                accuracy_pct=5.0,
+                accuracy="about 5 % average absolute error at low pressure, larger for strongly polar "
+                "pairs (Poling et al. 2001, Section 11-4 and Table 11-2, from memory)",
+                reference="Fuller, Schettler & Giddings (1966), Ind. Eng. Chem. 58(5), 18; "
+                "https://doi.org/10.1021/ie50677a007",
+                scope="any low-pressure pair whose atoms have published increments (C H O N S F Cl "
+                "Br I) or that has a special-molecule volume",
+                T_range=(200.0, 2000.0),
+                P_max=LOW_PRESSURE_LIMIT,
+                prepare=_prepare_fuller,
+                evaluate=_evaluate_fuller,
+            ),
+            DiffusivityMethod(
+                name="chapman-enskog",
+                phase="gas",
+                title="Chapman-Enskog kinetic theory with the Neufeld et al. (1972) collision integral",
+                function=chapman_enskog,
+                constants=("molar_mass", "sigma", "epsilon_k"),
+                accuracy_pct=8.0,
+                accuracy="about 7-8 % average absolute error for non-polar pairs with tabulated "
+                "Lennard-Jones constants (Poling et al. 2001, Table 11-2, from memory)",
+                reference="Poling, Prausnitz & O'Connell (2001), The Properties of Gases and Liquids, "
+                "5th ed., Eq. (11-3.2)",
+                scope="non-polar pairs with Lennard-Jones constants (tabulated preferred)",
+                T_range=(100.0, 3000.0),
+                P_max=LOW_PRESSURE_LIMIT,
+                prepare=_prepare_chapman_enskog,
+                evaluate=_evaluate_kinetic,
+                cautions=(_POLAR_EITHER,),
+            ),
+            DiffusivityMethod(
+                name="wilke-lee",
+                phase="gas",
+                title="Wilke & Lee (1955)",
+                function=wilke_lee,
+                constants=("molar_mass", "sigma", "epsilon_k", "Tb", "Vb"),
+                accuracy_pct=7.0,
+                accuracy="about 5-7 % average absolute error (Poling et al. 2001, Table 11-2, from memory)",
+                reference="Wilke & Lee (1955), Ind. Eng. Chem. 47, 1253; https://doi.org/10.1021/ie50546a056",
+                scope="non-polar pairs, vapours of higher molar mass in particular",
+                T_range=(100.0, 2000.0),
+                P_max=LOW_PRESSURE_LIMIT,
+                prepare=_prepare_wilke_lee,
+                evaluate=_evaluate_kinetic,
+            ),
+            DiffusivityMethod(
+                name="brokaw",
+                phase="gas",
+                title="Brokaw (1969), Stockmayer potential",
+                function=brokaw,
+                constants=("molar_mass", "Tb", "Vb", "dipole"),
+                accuracy_pct=9.0,
+                accuracy="about 7-10 % average absolute error on polar pairs (Poling et al. 2001, "
+                "Section 11-3, from memory)",
+                reference="Brokaw (1969), Ind. Eng. Chem. Process Des. Dev. 8, 240; "
+                "https://doi.org/10.1021/i260030a015",
+                scope="pairs with a polar member; both dipole moments known; no quantum gas",
+                T_range=(200.0, 1500.0),
+                P_max=LOW_PRESSURE_LIMIT,
+                prepare=_prepare_brokaw,
+                evaluate=_evaluate_kinetic,
+                requires=(ClassRule(SpeciesClass.POLAR, Role.EITHER, ""),),
+                excludes=(
+                    ClassRule(
+                        SpeciesClass.QUANTUM,
+                        Role.EITHER,
+                        "a quantum gas (He, H2, D2, Ne): Brokaw's boiling-point estimates of sigma and "
+                        "epsilon fail for it (18-25 % low); use Fuller or Chapman-Enskog",
+                    ),
+                    ClassRule(
+                        SpeciesClass.DIPOLE_UNKNOWN,
+                        Role.EITHER,
+                        "a dipole moment is unknown (unknown is not zero); supply it with "
+                        "Species.replace(dipole=...)",
+                    ),
+                ),
+            ),
+        )
+    }
+)
+
+#: Default gas method (Poling, Prausnitz & O'Connell 2001, Section 11-4 recommendations, from
+#: memory: Fuller et al. for low-pressure pairs, polar ones included; Reid, Prausnitz & Poling
+#: 1987, 4th ed., Section 11-4, the same).  When its constants are missing, the next record in
+#: GAS_METHODS that applies is used and the choice is noted.
+GAS_DEFAULT: Final = "fuller"
+
+
+@dataclass(frozen=True, slots=True)
+class _Ready:
+    """Everything a names-in call needs after the first: record, constants, phase limits."""
+
+    record: DiffusivityMethod
+    prepared: Prepared
+    fast: float  # Fuller's constant, or 0.0 when the general path is needed
+    Tc: float  # the medium is a vapour above this without further checks
+    limits: PhaseLimits
+    solute: str
+    T_lo: float
+    T_hi: float
+    cautions: tuple[str, ...]
+    notes: tuple[str, ...]
+
+
+_READY: dict[tuple[object, object, object], _Ready] = {}
+
+
+def _check_record(
+    rec: DiffusivityMethod, a: Species, b: Species, explicit: bool
+) -> tuple[tuple[str, ...], tuple[str, ...]]:
+    blocked, cautions = rec.class_verdict(classify(a), classify(b))
+    if blocked and explicit:
+        raise InputValueError(
+            f"method={rec.name!r} does not apply to {a.name!r} in {b.name!r}: {'; '.join(blocked)}"
+        )
+    return blocked, cautions
+
+
+def prepare_pair(
+    records: Mapping[str, DiffusivityMethod], default: str, method: str | None, a: Species, b: Species
+) -> tuple[DiffusivityMethod, Prepared, tuple[str, ...], tuple[str, ...]]:
+    """Resolve ``method`` (None: the default, else the next that applies) and prepare its constants.
+
+    Returns the record, its prepared constants, the cautions to issue on every call, and notes
+    on the choice of method.
+    """
+    if method is not None:
+        rec = records[normalise_method(method, records)]
+        _, cautions = _check_record(rec, a, b, explicit=True)
+        prep = rec.prepare(a, b)
+        return rec, prep, (*cautions, *prep.cautions), ()
+    tried: list[str] = []
+    for name in (default, *(n for n in records if n != default)):
+        rec = records[name]
+        blocked, cautions = _check_record(rec, a, b, explicit=False)
+        if blocked:
+            tried.append(f"{name}: {'; '.join(blocked)}")
+            continue
+        try:
+            prep = rec.prepare(a, b)
+        except MissingConstantError as exc:
+            tried.append(f"{name}: {exc}")
+            continue
+        notes = (
+            ()
+            if name == default
+            else (f"default method {default!r} not used ({'; '.join(tried)}); {name!r} used",)
+        )
+        return rec, prep, (*cautions, *prep.cautions), notes
+    raise MissingConstantError(f"no method applies to {a.name!r} in {b.name!r}: " + " | ".join(tried))
+
+
+def _ready(method: object, solute: object, medium: object) -> _Ready:
+    a, b = species(solute), species(medium)  # type: ignore[arg-type]
+    if method is not None and not isinstance(method, str):
+        normalise_method(method, GAS_METHODS)  # type: ignore[arg-type]
+    rec, prep, cautions, notes = prepare_pair(GAS_METHODS, GAS_DEFAULT, method, a, b)  # type: ignore[arg-type]
+    limits = phase_limits(b)
+    ready = _Ready(
+        record=rec,
+        prepared=prep,
+        fast=prep.args[0] if rec.name == "fuller" else 0.0,
+        Tc=(limits.Tc if limits.known and limits.Tc is not None else -math.inf),
+        limits=limits,
+        solute=a.name,
+        T_lo=rec.T_range[0],
+        T_hi=rec.T_range[1],
+        cautions=tuple(f"{rec.name} for {a.name} in {b.name}: {c}" for c in cautions),
+        notes=(*notes, *prep.notes),
+    )
+    try:
+        key = (method, solute, medium)
+        if len(_READY) > 4096:
+            _READY.clear()
+        _READY[key] = ready
+    except TypeError:  # pragma: no cover - species() has already rejected unhashable input
+        pass
+    return ready
+
+
+def _slow_checks(r: _Ready, Tv: FloatOrArray, Pv: FloatOrArray, fraction: float = 1.0) -> None:
+    """Phase check, range and class warnings (the fast path calls this only when needed).
+
+    ``fraction`` is the medium's mole fraction when it is one component of a gas mixture: its
+    partial pressure, not the total, must stay below its vapour pressure.
+    """
+    if (Tv < r.Tc) if isinstance(Tv, float) else bool(np.any(Tv < r.Tc)):
+        check_vapour(r.limits, Tv, Pv * fraction if fraction != 1.0 else Pv, r.solute)
+    _warn_pressure(Pv, f"gas_diffusivity(method={r.record.name!r})")
+    lo = Tv < r.T_lo if isinstance(Tv, float) else bool(np.any(Tv < r.T_lo))
+    hi = Tv > r.T_hi if isinstance(Tv, float) else bool(np.any(Tv > r.T_hi))
+    if lo or hi:
+        warn_caller(
+            f"{r.record.name}: T outside {r.T_lo:g}-{r.T_hi:g} K, the range the method is stated for",
+            EnvelopeWarning,
+        )
+    for c in r.cautions:
+        warn_caller(c, EnvelopeWarning)
+
+
+def binary_in_mixture(
+    solute: Species, component: Species, T: FloatOrArray, P: FloatOrArray, fraction: float, method: str | None
+) -> FloatOrArray:
+    """Binary diffusivity of ``solute`` in one ``component`` of a gas mixture (for Blanc's law).
+
+    As :func:`gas_diffusivity`, except that the component must be a vapour at its partial
+    pressure ``fraction * P`` (water at 3 % in humid air), not at the total pressure.
+    """
+    r = ready_gas(solute, component, method)
+    _slow_checks(r, T, P, fraction)
+    return r.record.evaluate(r.prepared, T, P)  # type: ignore[no-any-return]
+
+
+def ready_gas(solute: str | Species, medium: str | Species, method: str | None) -> _Ready:
+    """Return the cached preparation :func:`gas_diffusivity` uses (for the report and the CLI)."""
+    try:
+        return _READY[(method, solute, medium)]
+    except (KeyError, TypeError):
+        return _ready(method, solute, medium)
 
 
 @overload
 def gas_diffusivity(
-    solute: str | Species, carrier: str | Species, T: float, P: float = ..., method: str = ...
+    solute: str | Species, medium: str | Species, T: float, P: float = ..., method: str | None = ...
 ) -> float: ...
 @overload
 def gas_diffusivity(
-    solute: str | Species, carrier: str | Species, T: FloatArray, P: ArrayLike = ..., method: str = ...
+    solute: str | Species, medium: str | Species, T: FloatArray, P: ArrayLike = ..., method: str | None = ...
 ) -> FloatArray: ...
 @overload
 def gas_diffusivity(
-    solute: str | Species, carrier: str | Species, T: ArrayLike, P: ArrayLike = ..., method: str = ...
+    solute: str | Species, medium: str | Species, T: ArrayLike, P: ArrayLike = ..., method: str | None = ...
 ) -> FloatOrArray: ...
 def gas_diffusivity(
     solute: str | Species,
-    carrier: str | Species,
+    medium: str | Species,
     T: ArrayLike,
     P: ArrayLike = 101325.0,
-    method: str = "fuller",
+    method: str | None = None,
 ) -> FloatOrArray:
-    """Binary diffusivity of ``solute`` in ``carrier`` gas, from species names.
+    """Binary diffusivity of ``solute`` in the gas ``medium``, from species names.
 
     Parameters
     ----------
     solute : str or Species
         Diffusing species: name, CAS number, formula, or :class:`Species`.
-    carrier : str or Species
-        Carrier gas, e.g. ``"air"``, ``"nitrogen"``.
+    medium : str or Species
+        The gas it diffuses in, e.g. ``"air"``, ``"nitrogen"``; it must be a vapour at T and P.
     T : float or array_like
         Temperature [K].
     P : float or array_like
         Pressure [Pa].
-    method : {'fuller', 'chapman-enskog', 'wilke-lee', 'brokaw'}
-        Estimation method (see :data:`GAS_METHODS`); ``'brokaw'`` is meant
-        for pairs with a polar member.
+    method : {None, 'fuller', 'chapman-enskog', 'wilke-lee', 'brokaw'}
+        Estimation method (see :data:`masstransfer.diffusivity.GAS_METHODS`); None picks the
+        published recommendation (Fuller), or the next method that applies when Fuller's
+        constants are missing.
 
     Returns
     -------
@@ -836,18 +1199,24 @@ def gas_diffusivity(
         If a species cannot be resolved.
     MissingConstantError
         If a species lacks a constant the method needs.
+    OutOfRangeError
+        If the medium is not a vapour at T and P (use :func:`masstransfer.liquid_diffusivity`).
     InputValueError
-        For non-finite or non-positive T or P, or mismatched shapes.
+        For non-finite or non-positive T or P, mismatched shapes, or a method that does not
+        apply to the pair (Brokaw with a quantum gas or an unknown dipole moment).
 
     Notes
     -----
-    Species are resolved and the method's constants prepared once per
-    (method, solute, carrier); later calls cost microseconds.  Typical
-    errors: Fuller about 5 %, Chapman-Enskog about 7 %, Wilke-Lee 5-7 %,
-    Brokaw 7-10 % (Poling et al. 2001, Table 11-2).  Results are estimates:
-    designs that affect safety (toxic or flammable vapour, oxygen ingress
-    into food, pressure equipment) must be checked against measured data,
-    local codes and licensed engineering practice.
+    Species are resolved and the method's constants prepared once per (method, solute,
+    medium); later calls cost about a microsecond.  Stated accuracy (each record's
+    ``accuracy``): Fuller about 5 %, Chapman-Enskog about 8 %, Wilke-Lee 5-7 %, Brokaw 7-10 %
+    (Poling et al. 2001, Table 11-2).  A method used outside its class (a polar pair in
+    Chapman-Enskog or Wilke-Lee, a non-polar pair in Brokaw) warns with
+    :class:`~masstransfer.errors.EnvelopeWarning`; :func:`masstransfer.diffusivity_report`
+    shows every special rule applied and :func:`masstransfer.diffusivity.available_methods`
+    which methods apply and why.  Results are estimates: designs that affect safety (toxic or
+    flammable vapour, oxygen ingress into food, pressure equipment) must be checked against
+    measured data, local codes and licensed engineering practice.
 
     References
     ----------
@@ -864,21 +1233,89 @@ def gas_diffusivity(
 
     """
     if (type(T) is not float or type(P) is not float) and has_quantity((T, P), {}):  # pint: units
-        return call_with_quantities(gas_diffusivity, (solute, carrier, T, P, method), {})
-    m = (_METHOD_KEYS.get(method) if type(method) is str else None) or normalise_method(method, GAS_METHODS)
-    prepared = _prepare(m, solute, carrier)
+        return call_with_quantities(gas_diffusivity, (solute, medium, T, P, method), {})
+    try:
+        r = _READY[(method, solute, medium)]
+    except (KeyError, TypeError):
+        r = _ready(method, solute, medium)
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
-    if m == "fuller" and isinstance(Tv, float) and isinstance(Pv, float):  # scalar fast path
-        if Pv > LOW_PRESSURE_LIMIT:
-            _warn_pressure(Pv, "gas_diffusivity(method='fuller')")
-        return float(prepared[0] * Tv**1.75 / Pv)
+    if isinstance(Tv, float) and isinstance(Pv, float):  # scalar fast path: checks only when needed
+        if Tv < r.Tc or Pv > LOW_PRESSURE_LIMIT or not r.T_lo <= Tv <= r.T_hi or r.cautions:
+            _slow_checks(r, Tv, Pv)
+        if r.fast:
+            return float(r.fast * Tv**1.75 / Pv)
+        return r.record.evaluate(r.prepared, Tv, Pv)  # type: ignore[no-any-return]
     check_shapes(T=Tv, P=Pv)
-    _warn_pressure(Pv, f"gas_diffusivity(method={m!r})")
-    if m == "fuller":
-        return finish(prepared[0] * Tv**1.75 / Pv)
-    c, M_ab, sig, eps, d2 = prepared
-    return _kinetic(Tv, Pv, c, M_ab, sig, eps, d2)
+    _slow_checks(r, Tv, Pv)
+    return r.record.evaluate(r.prepared, Tv, Pv)  # type: ignore[no-any-return]
+
+
+@guard(check_output=False)
+def available_methods(
+    solute: str | Species,
+    medium: str | Species,
+    phase: Literal["gas", "liquid"] = "gas",
+) -> tuple[MethodAvailability, ...]:
+    """Which diffusivity methods apply to a pair, which is the default, and why the others do not.
+
+    Parameters
+    ----------
+    solute : str or Species
+        Diffusing species.
+    medium : str or Species
+        The gas or solvent it diffuses in.
+    phase : {'gas', 'liquid'}
+        Phase of the medium.
+
+    Returns
+    -------
+    tuple of MethodAvailability
+        One entry per method of that phase, in registry order: whether it applies, whether
+        it is the default, its stated accuracy [%] and the reasons (why not, or its cautions).
+
+    Notes
+    -----
+    A method does not apply when a constant it needs is missing or when a class of species
+    excludes it (Brokaw with a quantum gas); it applies with cautions when the pair lies
+    outside its class (a polar pair in Chapman-Enskog).  Defaults follow the published
+    recommendations quoted on ``GAS_DEFAULT`` and ``liquid_default``.
+
+    References
+    ----------
+    Poling, B. E., Prausnitz, J. M., & O'Connell, J. P. (2001). *The Properties of Gases and
+    Liquids*, 5th ed., Sections 11-4 and 11-10.
+
+    Examples
+    --------
+    >>> [m.method for m in available_methods("helium", "air", "gas") if m.applies]
+    ['fuller', 'chapman-enskog', 'wilke-lee']
+
+    """
+    a, b = species(solute), species(medium)
+    if phase == "gas":
+        records, default = GAS_METHODS, ready_gas(a, b, None).record.name
+    elif phase == "liquid":
+        from ._liquid import LIQUID_METHODS, ready_liquid
+
+        records, default = LIQUID_METHODS, ready_liquid(a, b, None).record.name
+    else:
+        raise InputValueError(f"phase={phase!r} must be 'gas' or 'liquid'")
+    out = []
+    for name, rec in records.items():
+        blocked, cautions = rec.class_verdict(classify(a), classify(b))
+        reasons = list(blocked)
+        if not blocked:
+            try:
+                prep = rec.prepare(a, b)
+            except MissingConstantError as exc:
+                blocked = (str(exc),)
+                reasons.append(str(exc))
+            else:
+                reasons += [*cautions, *prep.cautions]
+        applies = not blocked
+        out.append(MethodAvailability(name, applies, name == default, rec.accuracy_pct, tuple(reasons)))
+    return tuple(out)
 
 
 @guard
@@ -887,7 +1324,7 @@ def gas_diffusivity_in_mixture(
     carrier: Mapping[str, float] | Mapping[str | Species, float],
     T: ArrayLike,
     P: ArrayLike = 101325.0,
-    method: str = "fuller",
+    method: str | None = None,
 ) -> FloatOrArray:
     """Diffusivity of a dilute ``solute`` in a gas mixture (Blanc's law).
 
@@ -902,8 +1339,8 @@ def gas_diffusivity_in_mixture(
         Temperature [K].
     P : float or array_like
         Pressure [Pa].
-    method : str
-        Binary method, as in :func:`gas_diffusivity`.
+    method : str, optional
+        Binary method, as in :func:`gas_diffusivity` (None: each pair's default).
 
     Returns
     -------
@@ -933,6 +1370,16 @@ def gas_diffusivity_in_mixture(
         )
     names = list(carrier)
     y = [float(carrier[n]) for n in names]  # type: ignore[index]
-    Ds = [np.asarray(gas_diffusivity(solute, n, T, P, method)) for n in names]
+    a = species(solute)
+    Tv, Pv = check_positive("T", T), check_positive("P", P)
+    check_shapes(T=Tv, P=Pv)
+    total = sum(y)
+    # each component a vapour at its own partial pressure (fractions as given, renormalised)
+    Ds = [
+        np.asarray(
+            binary_in_mixture(a, species(n), Tv, Pv, max(yi / total, 1e-300) if total > 0 else 1.0, method)
+        )
+        for n, yi in zip(names, y, strict=True)
+    ]
     stacked = np.stack(np.broadcast_arrays(*Ds), axis=-1)
     return blanc(stacked, y)

@@ -13,9 +13,10 @@ errors are 10-20 %; check designs that affect safety against measured data.
 
 from __future__ import annotations
 
-import functools
 import math
+from collections.abc import Mapping
 from dataclasses import dataclass
+from types import MappingProxyType
 from typing import Final, overload
 
 import numpy as np
@@ -24,10 +25,12 @@ from .. import _tables as data
 from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_positive, check_shapes, finish, guard, warn_caller
-from ..constants import AVOGADRO, BOLTZMANN, DEBYE
+from ..constants import AVOGADRO, BOLTZMANN
 from ..errors import EnvelopeWarning, InputValueError
-from ..substances._species import Species, species
+from ..substances._species import Origin, Species, species
 from ._common import normalise_method
+from ._phase import PhaseLimits, check_liquid, phase_limits
+from ._records import ConstantUsed, DiffusivityMethod, Prepared, SpeciesClass, classify
 
 __all__ = [
     "LIQUID_METHODS",
@@ -35,6 +38,7 @@ __all__ = [
     "hayduk_minhas",
     "hayduk_minhas_aqueous",
     "hayduk_minhas_paraffin",
+    "liquid_default",
     "liquid_diffusivity",
     "liquid_diffusivity_inputs",
     "stokes_einstein",
@@ -48,17 +52,18 @@ _PARACHOR_CGS: Final = 5.623413e6
 #: 2001, Section 11-10: not for viscous solvents, about 20-30 cP).
 VISCOUS_SOLVENT_LIMIT: Final = 0.02
 
-LIQUID_METHODS: Final = {
-    "wilke-chang": "Wilke & Chang (1955): about 10-15 %",
-    "hayduk-minhas": "Hayduk & Minhas (1982), aqueous, paraffin or general form: about 10 %",
-    "tyn-calus": "Tyn & Calus (1975): about 10 %",
-    "stokes-einstein": "Stokes-Einstein: large spherical solutes and particles only",
-}
-
 _WATER = "7732-18-5"
 _NON_DIMERISING_ACID_SOLVENTS = frozenset(
     {_WATER, "67-56-1", "71-36-3", "78-92-2", "78-83-1", "75-65-0"}  # water, methanol, butanols
 )
+
+
+#: Solute volume [cm^3/mol] at which the aqueous Hayduk-Minhas factor V^-0.19 - 0.292 is zero.
+_HM_AQUEOUS_V_MAX: Final = 0.292 ** (-1.0 / 0.19)
+
+
+def _describe(v: FloatOrArray) -> str:
+    return f"{v:g}" if isinstance(v, float) else f"array with maximum {float(np.max(v)):g}"
 
 
 def _cp(mu: FloatOrArray) -> FloatOrArray:
@@ -179,7 +184,8 @@ def hayduk_minhas_aqueous(T: ArrayLike, mu_water: ArrayLike, V_solute: float) ->
     Notes
     -----
     Average absolute error about 10 % for aqueous solutions (Poling et al.
-    2001, Section 11-9).
+    2001, Section 11-9).  Domain: :math:`V_A` below about 650 cm^3/mol, where
+    :math:`V_A^{-0.19} - 0.292` is positive; larger values raise an error.
 
     References
     ----------
@@ -199,6 +205,13 @@ def hayduk_minhas_aqueous(T: ArrayLike, mu_water: ArrayLike, V_solute: float) ->
     V = check_positive("V_solute", V_solute)
     _check_volume("V_solute", V)
     Va = V * 1e6
+    big = Va >= _HM_AQUEOUS_V_MAX if isinstance(Va, float) else bool(np.any(Va >= _HM_AQUEOUS_V_MAX))
+    if big:
+        raise InputValueError(
+            f"V_solute={_describe(V)} m^3/mol lies outside the domain of the aqueous Hayduk-Minhas "
+            f"equation: its factor V_A^-0.19 - 0.292 changes sign at V_A = {_HM_AQUEOUS_V_MAX:.0f} "
+            "cm^3/mol; for larger solutes use stokes_einstein"
+        )
     eps = 9.58 / Va - 1.12
     D_cgs = 1.25e-8 * (Va**-0.19 - 0.292) * Tv**1.52 * _cp(mu) ** eps
     return finish(D_cgs * 1e-4)
@@ -456,7 +469,7 @@ def stokes_einstein(
 
 
 # --------------------------------------------------------------------------
-# names in
+# names in: constant preparation per method, the records, the dispatcher
 # --------------------------------------------------------------------------
 
 
@@ -467,11 +480,11 @@ class LiquidDiffusivityInputs(FrozenResult):
     Attributes
     ----------
     V_solute : float
-        Solute molar volume at its normal boiling point [m^3/mol].
+        Solute molar volume at its normal boiling point [m^3/mol], as used.
     V_solvent : float or None
         Solvent molar volume at its normal boiling point [m^3/mol].
     parachor_solute : float or None
-        Solute parachor [N^0.25 m^2.75/mol].
+        Solute parachor [N^0.25 m^2.75/mol], as used.
     parachor_solvent : float or None
         Solvent parachor [N^0.25 m^2.75/mol].
     phi : float
@@ -479,7 +492,7 @@ class LiquidDiffusivityInputs(FrozenResult):
     form : str
         Which form of the method was used.
     notes : tuple of str
-        The special-case rules that were applied.
+        The special-case rules that were applied, with the values they changed.
 
     """
 
@@ -492,44 +505,342 @@ class LiquidDiffusivityInputs(FrozenResult):
     notes: tuple[str, ...]
 
 
-def _is_acid(s: Species) -> bool:
-    mol = s.molecule
-    if mol is None:
-        return False
-    from ..substances._species import _le_bas_class
-
-    return any(el == "O" and _le_bas_class(mol, i) == "O_acid" for i, el in enumerate(mol.elements))
-
-
-def _is_monohydroxy_alcohol(s: Species) -> bool:
-    mol = s.molecule
-    if mol is None or set(s.atoms) - {"C", "H", "O"} or s.atoms.get("O") != 1:
-        return False
-    i = mol.elements.index("O")
-    nbrs = mol.neighbours(i)
-    if len(nbrs) != 1 or nbrs[0][1] != 1.0:
-        return False
-    carbon = nbrs[0][0]
-    return not any(o == 2.0 for _, o in mol.neighbours(carbon))
+def _used(sp: Species, name: str, value: float | None = None, source: str | None = None) -> ConstantUsed:
+    v = getattr(sp, name) if value is None else value
+    if v is None:
+        return ConstantUsed(None, "absent")
+    origin = sp.origins.get(name)
+    src = source or sp.sources.get(name) or (origin.value if origin is not None else "user")
+    return ConstantUsed(float(v), src)
 
 
-def _is_n_paraffin(s: Species) -> bool:
-    n_c = s.atoms.get("C", 0)
-    if set(s.atoms) != {"C", "H"} or s.atoms.get("H") != 2 * n_c + 2 or n_c < 5:
-        return False
-    mol = s.molecule
-    if mol is None:
-        return False
-    return all(len(mol.neighbours(i)) <= 2 for i in range(len(mol.elements)))
+def _solute_volume(a: Species, method: str) -> tuple[float, tuple[str, ...], str]:
+    """Solute V_b: the tabulated value for small molecules, else the species' own (noted)."""
+    tab = data.SMALL_MOLECULE_VB.get(a.CAS or "")
+    if tab is not None and a.origins.get("Vb") is not Origin.USER:
+        if a.Vb is None or abs(a.Vb - tab) > 0.01 * tab:
+            was = "none" if a.Vb is None else f"{a.Vb * 1e6:.1f}"
+            note = (
+                f"{a.name}: tabulated molar volume at the boiling point {tab * 1e6:.1f} cm^3/mol used "
+                f"(the value the correlations were fitted with) instead of {was} cm^3/mol"
+            )
+            return tab, (note,), "Treybal 3rd ed. Table 2.3 (from memory)"
+        return tab, (), "Treybal 3rd ed. Table 2.3 (from memory)"
+    return a.require("Vb", method), (), _used(a, "Vb").source
 
 
-def _is_nonpolar(s: Species) -> bool:
-    return s.dipole is None or s.dipole < 0.5 * DEBYE
+def _prepare_wilke_chang(a: Species, b: Species) -> Prepared:
+    Va, notes, src = _solute_volume(a, "Wilke-Chang")
+    phi = data.WILKE_CHANG_ASSOCIATION.get(b.CAS or "", 1.0)
+    factor = 1.0
+    extra: list[str] = []
+    if SpeciesClass.WATER in classify(a) and SpeciesClass.WATER not in classify(b):
+        factor = 1.0 / 2.3
+        extra.append(
+            "water as solute: the Wilke-Chang value is divided by 2.3 (Olander 1961, as "
+            "recommended in Reid, Prausnitz & Poling 1987, 4th ed., Section 11-9, from memory)"
+        )
+    consts = {
+        "solute": {"Vb (as used)": ConstantUsed(Va, src)},
+        "medium": {
+            "molar_mass": _used(b, "molar_mass"),
+            "association factor": ConstantUsed(phi, "Wilke & Chang (1955), via Poling et al. Section 11-9"),
+        },
+    }
+    return Prepared((b.molar_mass, Va, phi, factor), consts, (*notes, *extra), form="wilke-chang")
+
+
+def _dimer_rules(a: Species, b: Species, Va: float, Pa: float) -> tuple[float, float, tuple[str, ...]]:
+    ca, cb = classify(a), classify(b)
+    if SpeciesClass.WATER in ca and SpeciesClass.WATER not in cb:
+        why = "water as solute"
+    elif SpeciesClass.ACID in ca and (b.CAS or "") not in _NON_DIMERISING_ACID_SOLVENTS:
+        why = "organic acid solute"
+    else:
+        return Va, Pa, ()
+    note = (
+        f"{why}: treated as a dimer, V_A {Va * 1e6:.1f} -> {2 * Va * 1e6:.1f} cm^3/mol and parachor "
+        f"{Pa * _PARACHOR_CGS:.1f} -> {2 * Pa * _PARACHOR_CGS:.1f} (Poling et al. 2001, Section 11-9, "
+        "from memory)"
+    )
+    return 2 * Va, 2 * Pa, (note,)
+
+
+def _alcohol_rule(a: Species, b: Species) -> tuple[bool, tuple[str, ...]]:
+    """Non-polar solute in a monohydroxy alcohol: V_B and P_B scaled by 8 eta_B (cP)."""
+    ca, cb = classify(a), classify(b)
+    if SpeciesClass.ALCOHOL not in cb:
+        return False, ()
+    if SpeciesClass.DIPOLE_UNKNOWN in ca:
+        return False, (
+            f"{a.name}: dipole moment unknown, so the rule for a non-polar solute in an alcohol "
+            "(V_B and solvent parachor times 8 eta_B) was not applied; supply the dipole to decide",
+        )
+    if SpeciesClass.NONPOLAR in ca:
+        return True, (
+            "non-polar solute in a monohydroxy alcohol: V_B and the solvent parachor multiplied by "
+            "8 eta_B [cP] (Poling et al. 2001, Section 11-9, from memory)",
+        )
+    return False, ()
+
+
+def _prepare_parachor_method(
+    a: Species, b: Species, name: str
+) -> tuple[tuple[float, ...], dict[str, dict[str, ConstantUsed]], tuple[str, ...]]:
+    from ..substances._properties import parachor
+
+    Va, notes, src = _solute_volume(a, name)
+    Vb = b.require("Vb", name)
+    Pa, Pb = parachor(a), parachor(b)
+    Va2, Pa2, dimer = _dimer_rules(a, b, Va, Pa)
+    alcohol, alc_notes = _alcohol_rule(a, b)
+    consts = {
+        "solute": {
+            "Vb (as used)": ConstantUsed(Va2, src),
+            "parachor (as used)": ConstantUsed(
+                Pa2, _used(a, "parachor", Pa, "masstransfer.substances.parachor").source
+            ),
+        },
+        "medium": {
+            "Vb": _used(b, "Vb"),
+            "parachor": _used(b, "parachor", Pb, "masstransfer.substances.parachor"),
+        },
+    }
+    return (Va2, Vb, Pa2, Pb, 1.0 if alcohol else 0.0), consts, (*notes, *dimer, *alc_notes)
+
+
+def _prepare_tyn_calus(a: Species, b: Species) -> Prepared:
+    args, consts, notes = _prepare_parachor_method(a, b, "Tyn-Calus")
+    return Prepared(args, consts, notes, form="tyn-calus")
+
+
+def _prepare_hayduk_minhas(a: Species, b: Species) -> Prepared:
+    cb = classify(b)
+    if SpeciesClass.WATER in cb or SpeciesClass.N_PARAFFIN in cb:
+        Va, notes, src = _solute_volume(a, "Hayduk-Minhas")
+        form = "aqueous" if SpeciesClass.WATER in cb else "n-paraffin"
+        consts = {"solute": {"Vb (as used)": ConstantUsed(Va, src)}, "medium": {}}
+        return Prepared(
+            (Va,), consts, (*notes, f"Hayduk-Minhas {form} form (solvent is {b.name})"), form=form
+        )
+    args, consts, notes = _prepare_parachor_method(a, b, "Hayduk-Minhas")
+    return Prepared(args, consts, (*notes, "Hayduk-Minhas general (non-aqueous) form"), form="general")
+
+
+def _prepare_stokes_einstein(a: Species, b: Species) -> Prepared:
+    Va, notes, src = _solute_volume(a, "Stokes-Einstein")
+    r = (3.0 * Va / (4.0 * math.pi * AVOGADRO)) ** (1.0 / 3.0)
+    cautions: tuple[str, ...] = ()
+    if r < 1e-9:
+        cautions = (
+            f"Stokes-Einstein: the solute's radius ({r * 1e9:.2f} nm, from V_b) is below about 1 nm; "
+            "the equation is for spheres much larger than the solvent molecules and under-predicts "
+            "small molecules, often by a factor of two",
+        )
+    consts = {
+        "solute": {
+            "Vb (as used)": ConstantUsed(Va, src),
+            "radius": ConstantUsed(r, "sphere of volume V_b / N_A"),
+        },
+        "medium": {},
+    }
+    return Prepared((r,), consts, notes, cautions, form="stokes-einstein")
+
+
+def _alcohol_scaled(args: tuple[float, ...], mu: FloatOrArray) -> tuple[FloatOrArray, FloatOrArray]:
+    _, Vb, _, Pb, alcohol = args
+    if not alcohol:
+        return Vb, Pb
+    factor = 8.0 * np.asarray(mu) * 1000.0
+    return finish(Vb * factor), finish(Pb * factor)
+
+
+def _evaluate_wilke_chang(prep: Prepared, T: FloatOrArray, mu: FloatOrArray) -> FloatOrArray:
+    M, Va, phi, factor = prep.args
+    return finish(wilke_chang(T, mu, M, Va, phi) * factor)
+
+
+def _evaluate_tyn_calus(prep: Prepared, T: FloatOrArray, mu: FloatOrArray) -> FloatOrArray:
+    Vb, Pb = _alcohol_scaled(prep.args, mu)
+    return tyn_calus(T, mu, prep.args[0], Vb, prep.args[2], Pb)
+
+
+def _evaluate_hayduk_minhas(prep: Prepared, T: FloatOrArray, mu: FloatOrArray) -> FloatOrArray:
+    if prep.form == "aqueous":
+        return hayduk_minhas_aqueous(T, mu, prep.args[0])
+    if prep.form == "n-paraffin":
+        return hayduk_minhas_paraffin(T, mu, prep.args[0])
+    Vb, Pb = _alcohol_scaled(prep.args, mu)
+    return hayduk_minhas(T, mu, Vb, prep.args[2], Pb)
+
+
+def _evaluate_stokes_einstein(prep: Prepared, T: FloatOrArray, mu: FloatOrArray) -> FloatOrArray:
+    return stokes_einstein(T, mu, prep.args[0])
+
+
+_LIQUID_T: Final = (263.0, 373.0)
+
+#: The liquid-phase methods, in the order they are tried when the default does not apply.
+LIQUID_METHODS: Final[Mapping[str, DiffusivityMethod]] = MappingProxyType(
+    {
+        r.name: r
+        for r in (
+            DiffusivityMethod(
+                name="wilke-chang",
+                phase="liquid",
+                title="Wilke & Chang (1955)",
+                function=wilke_chang,
+                constants=("Vb", "molar_mass"),
+                accuracy_pct=13.0,
+                accuracy="about 10-15 % average absolute error on some 250 systems; larger for "
+                "water as solute and viscous solvents (Poling et al. 2001, Section 11-9, from memory)",
+                reference="Wilke & Chang (1955), AIChE J. 1, 264; https://doi.org/10.1002/aic.690010222",
+                scope="dilute non-electrolyte solutes in water and organic solvents below about 20 mPa s",
+                T_range=_LIQUID_T,
+                P_max=None,
+                prepare=_prepare_wilke_chang,
+                evaluate=_evaluate_wilke_chang,
+            ),
+            DiffusivityMethod(
+                name="hayduk-minhas",
+                phase="liquid",
+                title="Hayduk & Minhas (1982): aqueous, n-paraffin and general forms",
+                function=hayduk_minhas,
+                constants=("Vb", "parachor"),
+                accuracy_pct=10.0,
+                accuracy="about 10 % average absolute error, 5-10 % in n-paraffins (Poling et al. "
+                "2001, Section 11-9, from memory)",
+                reference="Hayduk & Minhas (1982), Can. J. Chem. Eng. 60, 295; "
+                "https://doi.org/10.1002/cjce.5450600213",
+                scope="water (aqueous form), n-alkanes C5-C32 (paraffin form), other non-aqueous "
+                "solvents (general form, needs parachors)",
+                T_range=_LIQUID_T,
+                P_max=None,
+                prepare=_prepare_hayduk_minhas,
+                evaluate=_evaluate_hayduk_minhas,
+            ),
+            DiffusivityMethod(
+                name="tyn-calus",
+                phase="liquid",
+                title="Tyn & Calus (1975)",
+                function=tyn_calus,
+                constants=("Vb", "parachor"),
+                accuracy_pct=10.0,
+                accuracy="about 10 % average absolute error, with the water, acid and alcohol rules "
+                "(Poling et al. 2001, Section 11-9, from memory)",
+                reference="Tyn & Calus (1975), J. Chem. Eng. Data 20, 106; https://doi.org/10.1021/je60064a006",
+                scope="solutes in organic solvents below about 20 mPa s; needs both parachors",
+                T_range=_LIQUID_T,
+                P_max=None,
+                prepare=_prepare_tyn_calus,
+                evaluate=_evaluate_tyn_calus,
+            ),
+            DiffusivityMethod(
+                name="stokes-einstein",
+                phase="liquid",
+                title="Stokes-Einstein",
+                function=stokes_einstein,
+                constants=("Vb",),
+                accuracy_pct=20.0,
+                accuracy="for spheres much larger than the solvent molecules (particles, "
+                "macromolecules); under-predicts small molecules, often by a factor of two "
+                "(Poling et al. 2001, Section 11-9, from memory)",
+                reference="Einstein (1905), Ann. Phys. 17, 549; https://doi.org/10.1002/andp.19053220806",
+                scope="large spherical solutes and particles (radius above about 1 nm)",
+                T_range=_LIQUID_T,
+                P_max=None,
+                prepare=_prepare_stokes_einstein,
+                evaluate=_evaluate_stokes_einstein,
+            ),
+        )
+    }
+)
+
+
+@guard(check_output=False)
+def liquid_default(solvent: str | Species) -> str:
+    """Return the default liquid method for a solvent, by published recommendation.
+
+    Parameters
+    ----------
+    solvent : str or Species
+        The solvent [-] (name, CAS number, formula or :class:`~masstransfer.Species`).
+
+    Returns
+    -------
+    str
+        The name of the default method's record in :data:`LIQUID_METHODS`.
+
+    Notes
+    -----
+    Water: Hayduk-Minhas's aqueous form; n-paraffins: its paraffin form; other organic
+    solvents: Tyn-Calus (Poling, Prausnitz & O'Connell 2001, Section 11-10 recommendations,
+    from memory).  When the default's constants are missing (a parachor), the dispatcher uses
+    the next record that applies and notes the choice.
+
+    References
+    ----------
+    Poling, B. E., Prausnitz, J. M., & O'Connell, J. P. (2001). *The Properties of Gases and
+    Liquids*, 5th ed., Section 11-10.
+
+    Examples
+    --------
+    >>> liquid_default("water"), liquid_default("n-heptane"), liquid_default("ethanol")
+    ('hayduk-minhas', 'hayduk-minhas', 'tyn-calus')
+
+    """
+    solvent = species(solvent)
+    cls = classify(solvent)
+    if SpeciesClass.WATER in cls or SpeciesClass.N_PARAFFIN in cls:
+        return "hayduk-minhas"
+    return "tyn-calus"
+
+
+@dataclass(frozen=True, slots=True)
+class _ReadyLiquid:
+    record: DiffusivityMethod
+    prepared: Prepared
+    limits: PhaseLimits
+    solute: str
+    solvent: Species
+    cautions: tuple[str, ...]
+    notes: tuple[str, ...]
+
+
+_READY: dict[tuple[object, object, object], _ReadyLiquid] = {}
+
+
+def ready_liquid(solute: str | Species, solvent: str | Species, method: str | None) -> _ReadyLiquid:
+    """Return the cached preparation :func:`liquid_diffusivity` uses (for the report and the CLI)."""
+    key = (method, solute, solvent)
+    try:
+        return _READY[key]
+    except (KeyError, TypeError):
+        pass
+    from ._gas import prepare_pair
+
+    a, b = species(solute), species(solvent)
+    if method is not None:
+        normalise_method(method, LIQUID_METHODS)
+    rec, prep, cautions, notes = prepare_pair(LIQUID_METHODS, liquid_default(b), method, a, b)
+    r = _ReadyLiquid(
+        record=rec,
+        prepared=prep,
+        limits=phase_limits(b),
+        solute=a.name,
+        solvent=b,
+        cautions=tuple(f"{rec.name} for {a.name} in {b.name}: {c}" for c in cautions),
+        notes=(*notes, *prep.notes),
+    )
+    if len(_READY) > 4096:
+        _READY.clear()
+    _READY[key] = r
+    return r
 
 
 @guard
 def liquid_diffusivity_inputs(
-    solute: str | Species, solvent: str | Species, method: str = "wilke-chang"
+    solute: str | Species, solvent: str | Species, method: str | None = None
 ) -> LiquidDiffusivityInputs:
     """Resolve the constants a liquid method needs, applying the special cases.
 
@@ -539,19 +850,19 @@ def liquid_diffusivity_inputs(
         Diffusing species.
     solvent : str or Species
         Solvent.
-    method : str
-        One of :data:`LIQUID_METHODS`.
+    method : str, optional
+        One of :data:`LIQUID_METHODS`; None for the solvent's default.
 
     Returns
     -------
     LiquidDiffusivityInputs
         The molar volumes, parachors and association factor used, and the
-        rules applied (see :func:`liquid_diffusivity`).
+        rules applied (see :func:`masstransfer.liquid_diffusivity`).
 
     Notes
     -----
-    Molar volumes come from ``thermo`` at the normal boiling point, or Le
-    Bas volumes; parachors from :func:`masstransfer.substances.parachor`.
+    Molar volumes come from ``thermo`` at the normal boiling point, tabulated values for small
+    molecules, or Le Bas volumes; parachors from :func:`masstransfer.substances.parachor`.
 
     References
     ----------
@@ -560,44 +871,21 @@ def liquid_diffusivity_inputs(
 
     Examples
     --------
-    >>> liquid_diffusivity_inputs("water", "ethanol", "tyn-calus").notes[0]
-    'water as solute: treated as a dimer (V_A and parachor doubled)'
+    >>> liquid_diffusivity_inputs("water", "ethanol", "tyn-calus").notes[0]  # doctest: +ELLIPSIS
+    'water as solute: treated as a dimer, V_A 18.9 -> 37.8 cm^3/mol and parachor ...'
 
     """
-    m = normalise_method(method, LIQUID_METHODS)
-    a, b = species(solute), species(solvent)
-    return _inputs(a, b, m)
-
-
-@functools.lru_cache(maxsize=512)
-def _inputs(a: Species, b: Species, m: str) -> LiquidDiffusivityInputs:
-    """Apply the special-case rules once per (solute, solvent, method)."""
-    notes: list[str] = []
-    Va = a.require("Vb", m)
-    phi = data.WILKE_CHANG_ASSOCIATION.get(b.CAS or "", 1.0)
-    if m == "wilke-chang":
-        if a.CAS == _WATER and b.CAS != _WATER:
-            Va = 37.4e-6
-            notes.append("water as solute: V_A = 37.4 cm^3/mol")
-        return LiquidDiffusivityInputs(Va, None, None, None, phi, "wilke-chang", tuple(notes))
-    if m == "stokes-einstein":
-        return LiquidDiffusivityInputs(Va, None, None, None, phi, "stokes-einstein", ())
-    if m == "hayduk-minhas" and b.CAS == _WATER:
-        return LiquidDiffusivityInputs(Va, None, None, None, phi, "aqueous", ())
-    if m == "hayduk-minhas" and _is_n_paraffin(b):
-        return LiquidDiffusivityInputs(Va, None, None, None, phi, "n-paraffin", ())
-    from ..substances._properties import parachor
-
-    Vb = b.require("Vb", m)
-    Pa, Pb = parachor(a), parachor(b)
-    if a.CAS == _WATER:
-        Va, Pa = 2 * Va, 2 * Pa
-        notes.append("water as solute: treated as a dimer (V_A and parachor doubled)")
-    elif _is_acid(a) and (b.CAS or "") not in _NON_DIMERISING_ACID_SOLVENTS:
-        Va, Pa = 2 * Va, 2 * Pa
-        notes.append("organic acid solute: treated as a dimer (V_A and parachor doubled)")
-    form = "general" if m == "hayduk-minhas" else "tyn-calus"
-    return LiquidDiffusivityInputs(Va, Vb, Pa, Pb, phi, form, tuple(notes))
+    r = ready_liquid(solute, solvent, method)
+    p = r.prepared
+    phi = data.WILKE_CHANG_ASSOCIATION.get(r.solvent.CAS or "", 1.0)
+    if r.record.name == "wilke-chang":
+        return LiquidDiffusivityInputs(p.args[1], None, None, None, phi, p.form, r.notes)
+    if p.form in ("aqueous", "n-paraffin", "stokes-einstein"):
+        V = p.constants["solute"]["Vb (as used)"].value
+        assert V is not None
+        return LiquidDiffusivityInputs(V, None, None, None, phi, p.form, r.notes)
+    Va, Vb, Pa, Pb, _ = p.args
+    return LiquidDiffusivityInputs(Va, Vb, Pa, Pb, phi, p.form, r.notes)
 
 
 @overload
@@ -605,8 +893,9 @@ def liquid_diffusivity(
     solute: str | Species,
     solvent: str | Species,
     T: float,
-    method: str = ...,
+    method: str | None = ...,
     *,
+    P: float = ...,
     mu_solvent: float | None = ...,
     phi: float | None = ...,
     radius: float | None = ...,
@@ -616,8 +905,9 @@ def liquid_diffusivity(
     solute: str | Species,
     solvent: str | Species,
     T: FloatArray,
-    method: str = ...,
+    method: str | None = ...,
     *,
+    P: ArrayLike = ...,
     mu_solvent: ArrayLike | None = ...,
     phi: float | None = ...,
     radius: float | None = ...,
@@ -627,8 +917,9 @@ def liquid_diffusivity(
     solute: str | Species,
     solvent: str | Species,
     T: ArrayLike,
-    method: str = ...,
+    method: str | None = ...,
     *,
+    P: ArrayLike = ...,
     mu_solvent: ArrayLike | None = ...,
     phi: float | None = ...,
     radius: float | None = ...,
@@ -638,8 +929,9 @@ def liquid_diffusivity(
     solute: str | Species,
     solvent: str | Species,
     T: ArrayLike,
-    method: str = "wilke-chang",
+    method: str | None = None,
     *,
+    P: ArrayLike = 101325.0,
     mu_solvent: ArrayLike | None = None,
     phi: float | None = None,
     radius: float | None = None,
@@ -654,13 +946,15 @@ def liquid_diffusivity(
         Solvent, e.g. ``"water"``.
     T : float or array_like
         Temperature [K]; the solvent must be liquid there.
-    method : {'wilke-chang', 'hayduk-minhas', 'tyn-calus', 'stokes-einstein'}
-        Estimation method (see :data:`LIQUID_METHODS`).  ``'hayduk-minhas'``
-        picks the aqueous form for water, the n-paraffin form for normal
-        alkane solvents and the general form otherwise.
+    method : {None, 'wilke-chang', 'hayduk-minhas', 'tyn-calus', 'stokes-einstein'}
+        Estimation method (see :data:`LIQUID_METHODS`); None picks the published
+        recommendation for the solvent (:func:`liquid_default`).  ``'hayduk-minhas'`` uses
+        the aqueous form for water, the n-paraffin form for normal alkane solvents and the
+        general form otherwise.
+    P : float or array_like
+        Pressure [Pa], used only to check that the solvent is liquid (not boiling) at T.
     mu_solvent : float or array_like, optional
-        Solvent viscosity [Pa s]; from :func:`masstransfer.liquid_model`
-        when omitted.
+        Solvent viscosity [Pa s]; from :func:`masstransfer.liquid_model` when omitted.
     phi : float, optional
         Wilke-Chang association factor [-]; overrides the tabulated value.
     radius : float, optional
@@ -675,29 +969,31 @@ def liquid_diffusivity(
     Raises
     ------
     OutOfRangeError
-        If the solvent is not liquid at T (and no viscosity is given).
+        If the solvent is frozen, boiling at P, or supercritical at T.
     MissingConstantError
         If a species lacks a constant the method needs.
 
     Notes
     -----
-    Special cases applied (Poling, Prausnitz & O'Connell 2001, Section
-    11-9, from memory):
+    Special rules (each recorded, with the value it changed, in the notes of
+    :func:`masstransfer.diffusivity_report`; Poling, Prausnitz & O'Connell 2001, Section 11-9,
+    from memory):
 
-    * Wilke-Chang, water as the solute in an organic solvent: V_A is taken
-      as 37.4 cm^3/mol.
-    * Tyn-Calus and Hayduk-Minhas (general form), water as the solute: it
-      is treated as a dimer, V_A and its parachor doubled.
-    * The same for an organic acid as the solute, unless the solvent is
-      water, methanol or a butanol.
-    * The same two methods, a non-polar solute in a monohydroxy alcohol:
-      V_B and the solvent parachor are multiplied by :math:`8\\eta_B` (cP).
-    * None of the methods is meant for viscous solvents (above about
-      20 mPa s); an :class:`~masstransfer.errors.EnvelopeWarning` is issued.
+    * Wilke-Chang, water as the solute in an organic solvent: the value is divided by 2.3
+      (Olander 1961).
+    * Tyn-Calus and Hayduk-Minhas (general form), water as the solute: treated as a dimer,
+      V_A and its parachor doubled; the same for an organic acid as the solute unless the
+      solvent is water, methanol or a butanol.
+    * The same two methods, a non-polar solute in a monohydroxy alcohol: V_B and the solvent
+      parachor are multiplied by :math:`8\\eta_B` (cP).  A solute whose dipole moment is
+      unknown is not assumed non-polar; the rule is then not applied and a note says so.
+    * Small molecules (H2, O2, N2, CO2, H2O, NH3, ...) use their tabulated molar volumes.
+    * None of the methods is meant for viscous solvents (above about 20 mPa s); an
+      :class:`~masstransfer.errors.EnvelopeWarning` is issued.
 
-    Typical errors: 10-20 % (Wilke-Chang), about 10 % (Hayduk-Minhas,
-    Tyn-Calus).  Results are estimates; check designs that affect safety
-    against measured data and licensed engineering practice.
+    Stated accuracy: about 10 % (Hayduk-Minhas, Tyn-Calus), 10-15 % (Wilke-Chang).  Results
+    are estimates; check designs that affect safety against measured data and licensed
+    engineering practice.
 
     References
     ----------
@@ -707,42 +1003,34 @@ def liquid_diffusivity(
     Examples
     --------
     >>> round(liquid_diffusivity("ethylbenzene", "water", 293.15) * 1e9, 2)
-    0.77
+    0.7
 
     """
-    m = normalise_method(method, LIQUID_METHODS)
     Tv = check_positive("T", T)
-    inp = liquid_diffusivity_inputs(solute, solvent, m)
+    Pv = check_positive("P", P)
+    r = ready_liquid(solute, solvent, method)
+    check_shapes(T=Tv, P=Pv)
+    check_liquid(r.limits, Tv, Pv, r.solute)
     if mu_solvent is None:
         from ..substances._properties import liquid_model
 
-        mu: FloatOrArray = liquid_model(solvent).viscosity(Tv)
+        mu: FloatOrArray = liquid_model(r.solvent).viscosity(Tv)
     else:
         mu = check_positive("mu_solvent", mu_solvent)
     check_shapes(T=Tv, mu_solvent=mu)
-    if m == "wilke-chang":
-        b = species(solvent)
-        f = inp.phi if phi is None else phi
-        return wilke_chang(Tv, mu, b.molar_mass, inp.V_solute, f)
-    if m == "stokes-einstein":
-        r = radius
-        if r is None:
-            r = (3.0 * inp.V_solute / (4.0 * math.pi * AVOGADRO)) ** (1.0 / 3.0)
-        return stokes_einstein(Tv, mu, r)
-    if inp.form == "aqueous":
-        return hayduk_minhas_aqueous(Tv, mu, inp.V_solute)
-    if inp.form == "n-paraffin":
-        return hayduk_minhas_paraffin(Tv, mu, inp.V_solute)
-    assert inp.V_solvent is not None
-    assert inp.parachor_solute is not None
-    assert inp.parachor_solvent is not None
-    Vb: FloatOrArray = inp.V_solvent
-    Pb: FloatOrArray = inp.parachor_solvent
-    a, b = species(solute), species(solvent)
-    if _is_nonpolar(a) and _is_monohydroxy_alcohol(b):
-        factor = 8.0 * np.asarray(mu) * 1000.0
-        Vb = finish(Vb * factor)
-        Pb = finish(Pb * factor)
-    if inp.form == "general":
-        return hayduk_minhas(Tv, mu, Vb, inp.parachor_solute, Pb)
-    return tyn_calus(Tv, mu, inp.V_solute, Vb, inp.parachor_solute, Pb)
+    lo, hi = r.record.T_range
+    if (Tv < lo or Tv > hi) if isinstance(Tv, float) else bool(np.any((Tv < lo) | (Tv > hi))):
+        warn_caller(
+            f"{r.record.name}: T outside {lo:g}-{hi:g} K, the range the method is stated for",
+            EnvelopeWarning,
+        )
+    for c in r.cautions:
+        warn_caller(c, EnvelopeWarning)
+    prep = r.prepared
+    if phi is not None and r.record.name == "wilke-chang":
+        prep = Prepared(
+            (*prep.args[:2], check_positive("phi", phi), prep.args[3]), prep.constants, prep.notes
+        )
+    if radius is not None and r.record.name == "stokes-einstein":
+        prep = Prepared((check_positive("radius", radius),), prep.constants, prep.notes, form=prep.form)
+    return r.record.evaluate(prep, Tv, mu)  # type: ignore[no-any-return]

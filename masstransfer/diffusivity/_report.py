@@ -2,29 +2,23 @@
 
 from __future__ import annotations
 
-import warnings
 from collections.abc import Mapping
 from dataclasses import dataclass
 from typing import Literal
 
+import numpy as np
+
 from .._frozen import FrozenMapping, FrozenResult
 from .._typing import ArrayLike, FloatOrArray
 from .._uncertainty import stated_uncertainty
-from .._validation import check_positive, guard
+from .._validation import check_positive, collect_warnings, guard
 from ..errors import InputValueError
 from ..substances._species import Species, species
-from ._common import normalise_method
-from ._gas import GAS_METHODS, fuller_volume, gas_diffusivity
-from ._liquid import LIQUID_METHODS, liquid_diffusivity, liquid_diffusivity_inputs
+from ._gas import gas_diffusivity, ready_gas
+from ._liquid import liquid_diffusivity, ready_liquid
+from ._phase import medium_state, phase_limits
 
-__all__ = ["DiffusivityReport", "diffusivity_report"]
-
-_GAS_CONSTANTS = {
-    "fuller": ("molar_mass", "fuller_volume"),
-    "chapman-enskog": ("molar_mass", "sigma", "epsilon_k"),
-    "wilke-lee": ("molar_mass", "sigma", "epsilon_k", "Tb", "Vb"),
-    "brokaw": ("molar_mass", "Tb", "Vb", "dipole"),
-}
+__all__ = ["DiffusivityReport", "diffusivity_report", "infer_phase"]
 
 
 @dataclass(frozen=True, eq=False)
@@ -42,11 +36,16 @@ class DiffusivityReport(FrozenResult):
     P : float or numpy.ndarray or None
         Pressure [Pa] (gas phase).
     accuracy : str
-        The typical error the method's sources report.
+        The typical error the method's sources report, with the source.
+    accuracy_pct : float
+        That average absolute deviation as a number [%], for a calculation note.
+    reference : str
+        The method's primary reference.
     constants : mapping
         For each species, the constants the method used, as (value, source).
     notes : tuple of str
-        Special-case rules applied (liquids).
+        Every special rule applied, with the value it changed, and how the method and phase
+        were chosen.
     warnings : tuple of str
         Envelope warnings raised by the computation.
     solute_identity, medium_identity : str
@@ -67,6 +66,8 @@ class DiffusivityReport(FrozenResult):
     T: FloatOrArray
     P: FloatOrArray | None
     accuracy: str
+    accuracy_pct: float
+    reference: str
     constants: Mapping[str, Mapping[str, tuple[float | None, str]]]
     notes: tuple[str, ...]
     warnings: tuple[str, ...]
@@ -85,7 +86,7 @@ class DiffusivityReport(FrozenResult):
 
         References
         ----------
-        See the method's entry in ``GAS_METHODS`` or ``LIQUID_METHODS``.
+        The method's record in ``GAS_METHODS`` or ``LIQUID_METHODS`` (its ``reference``).
 
         Examples
         --------
@@ -93,13 +94,12 @@ class DiffusivityReport(FrozenResult):
         True
 
         """
-        import numpy as np
-
         v = np.atleast_1d(np.asarray(self.value, dtype=float))
         shown = f"{v[0]:.4g} m^2/s" if v.size == 1 else f"{v.min():.4g} to {v.max():.4g} m^2/s"
         lines = [
             f"D({self.solute} in {self.medium}, {self.phase}) = {shown}",
-            f"method: {self.accuracy}",
+            f"method: {self.method} (stated accuracy {self.accuracy_pct:g} %: {self.accuracy})",
+            f"reference: {self.reference}",
             *(
                 f"{who}: {ident}"
                 for who, ident in (("solute", self.solute_identity), ("medium", self.medium_identity))
@@ -121,19 +121,21 @@ class DiffusivityReport(FrozenResult):
         return "\n".join(lines)
 
 
-def _constants(sp: Species, names: tuple[str, ...]) -> dict[str, tuple[float | None, str]]:
-    out: dict[str, tuple[float | None, str]] = {}
-    for n in names:
-        if n == "fuller_volume":
-            src = sp.sources.get("fuller_volume", "Fuller et al. (1969) atomic and ring increments")
-            out[n] = (fuller_volume(sp), src)
-        else:
-            v = getattr(sp, n)
-            out[n] = (
-                None if v is None else float(v),
-                sp.sources.get(n, "user" if v is not None else "absent"),
-            )
-    return out
+def infer_phase(medium: str | Species, T: ArrayLike, P: ArrayLike = 101325.0) -> str:
+    """'gas' or 'liquid': the state of ``medium`` at every (T, P), or raise if it is mixed or unknown."""
+    b = species(medium)
+    state = medium_state(phase_limits(b), check_positive("T", T), check_positive("P", P))
+    if state in ("gas", "liquid"):
+        return state
+    why = (
+        "lacks a boiling point or critical point"
+        if state == "unknown"
+        else "is near its saturation line, or changes phase over the temperatures given"
+    )
+    raise InputValueError(
+        f"the phase of {b.name!r} at the given T and P cannot be inferred: it {why}; "
+        "state it with phase='gas' or phase='liquid'"
+    )
 
 
 @guard
@@ -143,40 +145,40 @@ def diffusivity_report(
     T: ArrayLike,
     P: ArrayLike = 101325.0,
     *,
-    phase: Literal["gas", "liquid"] = "gas",
+    phase: Literal["gas", "liquid"] | None = None,
     method: str | None = None,
 ) -> DiffusivityReport:
-    """Compute a diffusivity and record the method, accuracy, constants and warnings behind it.
+    """Compute a diffusivity and record the method, accuracy, constants, rules and warnings behind it.
 
     Parameters
     ----------
     solute : str or Species
         Diffusing species.
     medium : str or Species
-        Carrier gas or solvent.
+        The gas or solvent it diffuses in.
     T : float or array_like
         Temperature [K].
     P : float or array_like
-        Pressure [Pa] (gas phase only).
-    phase : {'gas', 'liquid'}
-        Phase of the medium.
+        Pressure [Pa].
+    phase : {None, 'gas', 'liquid'}
+        Phase of the medium; None infers it from the medium's state at T and P (noted).
     method : str, optional
-        Method name; ``'fuller'`` or ``'wilke-chang'`` by default.
+        Method name; by default the published recommendation for the pair (see
+        :func:`masstransfer.diffusivity.available_methods`).
 
     Returns
     -------
     DiffusivityReport
-        The value with its method, stated accuracy, the constants used with
-        their sources, special-case notes and warnings.
+        The value with its method, stated accuracy and reference, the constants used with
+        their sources, every special rule applied (with the value it changed) and warnings.
 
     Notes
     -----
-    Same numbers as :func:`gas_diffusivity` and :func:`liquid_diffusivity`;
-    the report is what a calculation note needs to defend them.  Its
-    ``relative_uncertainty`` is the method's stated average absolute
-    deviation taken as a standard uncertainty (times sqrt(pi/2), normal
-    errors; Geary 1935); a stated bound would be divided by sqrt(3) (uniform;
-    JCGM 100:2008, 4.3.7).
+    Same numbers as :func:`gas_diffusivity` and :func:`liquid_diffusivity`, read from the same
+    method records; the report is what a calculation note needs to defend them.  Its
+    ``relative_uncertainty`` is the method's stated average absolute deviation taken as a
+    standard uncertainty (times sqrt(pi/2), normal errors; Geary 1935); a stated bound would be
+    divided by sqrt(3) (uniform; JCGM 100:2008, 4.3.7).
 
     References
     ----------
@@ -186,52 +188,63 @@ def diffusivity_report(
     Examples
     --------
     >>> r = diffusivity_report("toluene", "air", 350.0)
-    >>> r.method, round(r.value * 1e6, 2)
-    ('fuller', 10.67)
+    >>> r.method, round(r.value * 1e6, 2), r.accuracy_pct
+    ('fuller', 10.67, 5.0)
 
     """
-    if phase not in ("gas", "liquid"):
-        raise InputValueError(f"phase={phase!r} must be 'gas' or 'liquid'")
     a, b = species(solute), species(medium)
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
-    notes: tuple[str, ...]
-    P_used: FloatOrArray | None
-    with warnings.catch_warnings(record=True) as caught:
-        warnings.simplefilter("always")
+    notes: list[str] = []
+    viscosity: dict[str, tuple[float | None, str]] = {}
+    if phase is None:
+        phase = infer_phase(b, Tv, Pv)  # type: ignore[assignment]
+        notes.append(
+            f"phase inferred: {b.name} is a {'vapour' if phase == 'gas' else 'liquid'} at the given T and P"
+        )
+    if phase not in ("gas", "liquid"):
+        raise InputValueError(f"phase={phase!r} must be 'gas' or 'liquid' (or None to infer it)")
+    with collect_warnings() as caught:
         if phase == "gas":
-            m = normalise_method(method or "fuller", GAS_METHODS)
-            value = gas_diffusivity(a, b, Tv, Pv, m)
-            names = _GAS_CONSTANTS[m]
-            consts = {"solute": _constants(a, names), "medium": _constants(b, names)}
-            accuracy, notes, P_used = GAS_METHODS[m], (), Pv
+            r = ready_gas(a, b, method)
+            value = gas_diffusivity(a, b, Tv, Pv, method)
+            rec, prep, rule_notes, P_used = r.record, r.prepared, r.notes, Pv
         else:
-            m = normalise_method(method or "wilke-chang", LIQUID_METHODS)
-            value = liquid_diffusivity(a, b, Tv, m)
-            inp = liquid_diffusivity_inputs(a, b, m)
-            consts = {
-                "solute": {"Vb (as used)": (inp.V_solute, a.sources.get("Vb", "user"))},
-                "medium": {
-                    "molar_mass": (b.molar_mass, b.sources.get("molar_mass", "user")),
-                    "viscosity": (None, "thermo model via masstransfer.substances"),
-                },
+            rl = ready_liquid(a, b, method)
+            value = liquid_diffusivity(a, b, Tv, method, P=Pv)
+            rec, prep, rule_notes, P_used = rl.record, rl.prepared, rl.notes, None
+            from ..substances._properties import liquid_model
+
+            mu = np.atleast_1d(np.asarray(liquid_model(b).viscosity(Tv), dtype=float))
+            viscosity = {"viscosity at the first T": (float(mu[0]), "masstransfer.liquid_model (thermo)")}
+            if len(prep.args) == 5 and prep.args[4]:
+                f = 8.0 * mu * 1000.0
+                shown = f"{f[0]:.3g}" if f.size == 1 else f"{f.min():.3g} to {f.max():.3g}"
+                rule_notes = (*rule_notes, f"alcohol-solvent factor 8 eta_B = {shown} at the given T")
+    consts = {
+        role: FrozenMapping(
+            {
+                **{k: (c.value, c.source) for k, c in cs.items()},
+                **(viscosity if role == "medium" and phase == "liquid" else {}),
             }
-            if m == "wilke-chang":
-                consts["medium"]["association factor"] = (inp.phi, "Wilke & Chang (1955)")
-            accuracy, notes, P_used = LIQUID_METHODS[m], tuple(inp.notes), None
+        )
+        for role, cs in prep.constants.items()
+    }
     return DiffusivityReport(
         value=value,
         solute=a.name,
         medium=b.name,
         phase=phase,
-        method=m,
+        method=rec.name,
         T=Tv,
         P=P_used,
-        accuracy=accuracy,
+        accuracy=rec.accuracy,
+        accuracy_pct=rec.accuracy_pct,
+        reference=rec.reference,
         constants=FrozenMapping(consts),
-        notes=tuple(notes),
-        warnings=tuple(str(w.message) for w in caught),
+        notes=(*notes, *rule_notes),
+        warnings=tuple(dict.fromkeys(msg for msg, _ in caught)),
+        relative_uncertainty=stated_uncertainty(rec),
         solute_identity=a.identity,
         medium_identity=b.identity,
-        relative_uncertainty=stated_uncertainty(accuracy),
     )

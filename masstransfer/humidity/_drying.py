@@ -16,7 +16,7 @@ from typing import Any
 import numpy as np
 
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard
+from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, scalar
 from ..errors import InputTypeError, InputValueError, UnknownMethodError
 from ._evaporation import EvaporationResult
 from ._state import whole_number
@@ -64,19 +64,19 @@ class DryingResult:
     method: str
 
 
-def _release(shape: str, tau: FloatArray) -> FloatArray:
+def _release(shape: str, tau: FloatArray, biot: float | None) -> FloatArray:
     from ..bodies._transient import fractional_release
 
-    return np.asarray(fractional_release(shape, tau, 1.0, 1.0), dtype=float)
+    return np.asarray(fractional_release(shape, tau, 1.0, 1.0, biot), dtype=float)
 
 
-def _tau_for_fraction(shape: str, fraction: FloatArray) -> FloatArray:
+def _tau_for_fraction(shape: str, fraction: FloatArray, biot: float | None) -> FloatArray:
     """Dimensionless time D t / a^2 at which the released fraction reaches ``fraction``."""
     lo = np.full_like(fraction, -14.0)
     hi = np.full_like(fraction, 4.0)
     for _ in range(_ITERATIONS):
         mid = 0.5 * (lo + hi)
-        short = _release(shape, 10.0**mid) < fraction
+        short = _release(shape, 10.0**mid, biot) < fraction
         lo = np.where(short, mid, lo)
         hi = np.where(short, hi, mid)
     return np.asarray(10.0 ** (0.5 * (lo + hi)))
@@ -94,6 +94,7 @@ def drying_time(
     X_critical: ArrayLike,
     X_final: ArrayLike,
     X_equilibrium: ArrayLike = 0.0,
+    biot: float | None = None,
     points: int = 60,
 ) -> DryingResult:
     """Time to dry a wet body from its initial to a final moisture content.
@@ -131,6 +132,10 @@ def drying_time(
         Final moisture content wanted, above ``X_equilibrium`` [kg/kg].
     X_equilibrium : float or array_like
         Equilibrium moisture content with the drying gas [kg/kg].
+    biot : float, optional
+        Mass Biot number of the falling-rate period, :math:`k\\,a/(K D)` [-] (k the external
+        coefficient, K the partition between body and gas); None for a surface at equilibrium.
+        A finite value keeps the rate finite at the start of the falling-rate period.
     points : int
         Number of points on the drying curve [-].
 
@@ -177,6 +182,7 @@ def drying_time(
     if shape not in _VOLUME_PER_AREA:
         raise UnknownMethodError(f"shape={shape!r} is not one of 'slab', 'cylinder', 'sphere'")
     n_points = whole_number("points", points, 2, 100_000)
+    bi = None if biot is None else scalar("biot", check_positive("biot", biot))
     rate = check_positive("mass_flux", mass_flux, "pass the constant drying rate above zero [kg/(m^2 s)]")
     a = check_positive("size", size)
     rho = check_positive("dry_density", dry_density)
@@ -212,7 +218,7 @@ def drying_time(
     X_end_falling = np.maximum(arr["Xf"], arr["Xe"])
     fraction = (X_start - np.minimum(X_end_falling, X_start)) / (X_start - arr["Xe"])
     scale = arr["a"] ** 2 / arr["D"]  # s per unit of D t / a^2
-    t_f = np.where(fraction > 0, _tau_for_fraction(shape, np.asarray(fraction, dtype=float)), 0.0) * scale
+    t_f = np.where(fraction > 0, _tau_for_fraction(shape, np.asarray(fraction, dtype=float), bi), 0.0) * scale
     # constant-rate period ends above the final content only when X_final < X_critical
     t_c = np.where(arr["Xf"] >= arr["Xc"], solid_per_area * (arr["X0"] - arr["Xf"]) / arr["r"], t_c)
     t_f = np.where(arr["Xf"] >= arr["Xc"], 0.0, t_f)
@@ -223,7 +229,7 @@ def drying_time(
     const_X = arr["X0"][..., None] - arr["r"][..., None] * t_curve / solid_per_area[..., None]
     in_falling = t_curve > t_c[..., None]
     tau = np.where(in_falling, (t_curve - t_c[..., None]) / scale[..., None], 0.0)
-    falling_X = X_start[..., None] - (X_start - arr["Xe"])[..., None] * _release(shape, tau)
+    falling_X = X_start[..., None] - (X_start - arr["Xe"])[..., None] * _release(shape, tau, bi)
     X_curve = np.where(in_falling, falling_X, const_X)
     return DryingResult(
         t_constant=finish(t_c),
@@ -235,6 +241,8 @@ def drying_time(
         shape=shape,
         method=(
             "constant-rate period at the given surface rate; falling-rate period by diffusion "
-            f"in a {shape} with the surface at equilibrium (Crank's series), uniform start"
+            f"in a {shape} (Crank's series), "
+            + ("surface at equilibrium" if bi is None else f"surface resistance with Biot number {bi:g}")
+            + ", uniform start"
         ),
     )

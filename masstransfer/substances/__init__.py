@@ -18,13 +18,14 @@ from ._properties import (
     parachor,
     quayle_parachor,
 )
-from ._species import le_bas_volume
+from ._species import Origin, le_bas_volume
 
 __all__ = [
     "INTERPOLATION_RTOL",
     "KINK_RTOL",
     "LIQUID_TR_MAX",
     "PARACHOR_CGS_PER_SI",
+    "Origin",
     "PropertyCurve",
     "henry_constant",
     "le_bas_volume",

@@ -62,10 +62,10 @@ INTERPOLATION_RTOL = 1e-7
 #: Relative deviation accepted, and recorded, for the narrowest pieces: tabulated and spline
 #: models have kinks at their knots, where no polynomial piece reaches INTERPOLATION_RTOL.
 KINK_RTOL = 1e-5
-#: Upper reduced temperature T/Tc of every liquid curve except the vapour pressure.  Published
-#: liquid-volume, heat-capacity and enthalpy-of-vaporisation forms have a singular slope at the
-#: critical point; stopping at 0.95 Tc keeps the interpolants exact and covers every use of a
-#: saturated liquid at moderate pressure.
+#: Upper reduced temperature T/Tc of the liquid volume, heat capacity and enthalpy of
+#: vaporisation curves.  Their published forms have a singular slope at the critical point;
+#: stopping at 0.95 Tc keeps the interpolants exact.  Viscosity, conductivity and vapour
+#: pressure run to the model's own limit (at most Tc).
 LIQUID_TR_MAX = 0.95
 #: Temperature bounds of gas curves [K], whatever range a correlation claims.
 GAS_T_BOUNDS = (10.0, 5000.0)
@@ -421,7 +421,6 @@ class LiquidModel:
     cp_molar: PropertyCurve
     psat: PropertyCurve | None = None
     hvap: PropertyCurve | None = None
-    sigma: PropertyCurve | None = None
 
     @property
     def T_min(self) -> float:
@@ -467,8 +466,8 @@ class LiquidModel:
 
     @guard
     def surface_tension(self, T: ArrayLike) -> FloatOrArray:
-        """Surface tension against its vapour or air [N/m] at ``T`` [K]."""
-        return self._need(self.sigma, "surface tension")(T)
+        """Surface tension against its vapour or air [N/m] at ``T`` [K] (built on first use)."""
+        return self._need(_surface_tension(self.species), "surface tension")(T)
 
     def _need(self, curve: PropertyCurve | None, what: str) -> PropertyCurve:
         if curve is None:
@@ -642,7 +641,7 @@ def _liquid_model(sp: Species) -> LiquidModel:
         return LiquidModel(species=sp, **cached)
     with loading(), thermo_models():
         model = _build_liquid_model(sp)
-    names = ("molar_volume", "mu", "k", "cp_molar", "psat", "hvap", "sigma")
+    names = ("molar_volume", "mu", "k", "cp_molar", "psat", "hvap")
     store_curves("liquid", key, {n: getattr(model, n) for n in names})
     return model
 
@@ -657,7 +656,6 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
         EnthalpyVaporization,
         HeatCapacityGas,
         HeatCapacityLiquid,
-        SurfaceTension,
         ThermalConductivityLiquid,
         VaporPressure,
         ViscosityLiquid,
@@ -691,30 +689,44 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
     )
     vp = VaporPressure(CASRN=kw["CASRN"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, omega=sp.omega)
     hv = EnthalpyVaporization(CASRN=kw["CASRN"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, omega=sp.omega)
-    st = SurfaceTension(
-        CASRN=kw["CASRN"], MW=kw["MW"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc, omega=sp.omega
-    )
     name = f"liquid {sp.name}"
     anchor = _liquid_core(sp)
     return LiquidModel(
         species=sp,
         molar_volume=_thermo_curve(vl, f"molar volume of {name}", "m^3/mol", T_low, T_high, anchor),
-        mu=_thermo_curve(mu, f"viscosity of {name}", "Pa s", T_low, T_high, anchor),
-        k=_thermo_curve(k, f"thermal conductivity of {name}", "W/(m K)", T_low, T_high, anchor),
+        mu=_thermo_curve(mu, f"viscosity of {name}", "Pa s", T_low, T_crit, anchor),
+        k=_thermo_curve(k, f"thermal conductivity of {name}", "W/(m K)", T_low, T_crit, anchor),
         cp_molar=_thermo_curve(cp, f"heat capacity of {name}", "J/(mol K)", T_low, T_high, anchor),
         psat=_optional_curve(vp, f"vapour pressure of {name}", "Pa", T_low, T_crit, anchor),
         hvap=_optional_curve(hv, f"enthalpy of vaporisation of {name}", "J/mol", T_low, T_high, anchor),
-        sigma=_surface_tension_curve(st, name, T_low, T_crit, anchor),
     )
 
 
-def _surface_tension_curve(
-    prop: Any, name: str, T_low: float, T_crit: float, anchor: tuple[float, float]
-) -> PropertyCurve | None:
-    """Surface tension up to 0.9 Tc (it vanishes at Tc, where its logarithm cannot be interpolated)."""
-    top = T_crit if not math.isfinite(T_crit) else T_low + 0.9 * (T_crit - T_low)
-    with np.errstate(over="ignore", under="ignore", invalid="ignore", divide="ignore"):
-        return _optional_curve(prop, f"surface tension of {name}", "N/m", T_low, top, anchor)
+@functools.lru_cache(maxsize=64)
+def _surface_tension(sp: Species) -> PropertyCurve | None:
+    """Surface tension up to 0.9 Tc (it vanishes at Tc, where its logarithm cannot be interpolated).
+
+    Built on first use only: the liquid models most callers need do not load its tables.
+    """
+    if not sp.CAS:
+        return None
+    from thermo import SurfaceTension
+
+    kw = _thermo_kwargs(sp)
+    T_low = sp.Tm if sp.Tm is not None else 0.0
+    T_high = sp.Tc if sp.Tc is not None else math.inf
+    top = T_high if not math.isfinite(T_high) else T_low + 0.9 * (T_high - T_low)
+    with (
+        loading(),
+        thermo_models(),
+        np.errstate(over="ignore", under="ignore", invalid="ignore", divide="ignore"),
+    ):
+        st = SurfaceTension(
+            CASRN=kw["CASRN"], MW=kw["MW"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc, omega=sp.omega
+        )
+        return _optional_curve(
+            st, f"surface tension of liquid {sp.name}", "N/m", T_low, top, _liquid_core(sp)
+        )
 
 
 def _optional_curve(

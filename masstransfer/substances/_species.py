@@ -16,6 +16,7 @@ from __future__ import annotations
 
 import dataclasses
 import difflib
+import enum
 import functools
 import math
 import re
@@ -37,7 +38,7 @@ from . import _names
 from ._databases import loading, thermo_models
 from ._structure import Molecule, parse_smiles
 
-__all__ = ["FrozenMap", "Species", "le_bas_volume", "species"]
+__all__ = ["FrozenMap", "Origin", "Species", "le_bas_volume", "species"]
 
 _K = TypeVar("_K")
 _V = TypeVar("_V")
@@ -105,6 +106,19 @@ _FLOAT_FIELDS = (
     "fuller_volume",
     "parachor",
 )
+_CONSTANT_FIELDS = (*_FLOAT_FIELDS, "omega", "dipole")
+
+
+class Origin(enum.Enum):
+    """Where a constant of a :class:`Species` came from.
+
+    Methods decide by this typed field, never by the free text of ``Species.sources``.
+    """
+
+    DATABASE = "database"  #: a data-table or fitted-model value from chemicals/thermo
+    TABULATED = "tabulated"  #: a published table of this very constant (e.g. Svehla's LJ values)
+    ESTIMATED = "estimated"  #: computed from other constants by a correlation or group method
+    USER = "user"  #: given by the caller
 
 
 @dataclass(frozen=True)
@@ -153,7 +167,11 @@ class Species:
         Parachor [N^0.25 m^2.75/mol]; multiply by 5.623413e6 for the
         tabulated cm-g-s form.  Computed from ``thermo`` when omitted.
     sources : mapping of str to str, optional
-        Where each constant came from (filled in by :func:`species`).
+        Where each constant came from, in words (filled in by :func:`species`).
+    origins : mapping of str to Origin, optional
+        Where each constant came from, typed; a constant given without one is
+        :attr:`Origin.USER`.  Part of equality, so cached results never mix
+        a tabulated constant with an equal user-supplied one.
 
     Examples
     --------
@@ -182,6 +200,7 @@ class Species:
     fuller_volume: float | None = None
     parachor: float | None = None
     sources: Mapping[str, str] = field(default_factory=FrozenMap, compare=False)
+    origins: Mapping[str, Origin] = field(default_factory=FrozenMap)
 
     def __post_init__(self) -> None:
         if not isinstance(self.name, str):
@@ -253,9 +272,14 @@ class Species:
             try:
                 object.__setattr__(self, "Vb", le_bas_volume(atoms, readable))
                 sources["Vb"] = "Le Bas additive volumes, estimated from structure"
+                if "Vb" not in self.origins:
+                    object.__setattr__(self, "origins", {**self.origins, "Vb": Origin.ESTIMATED})
             except (MissingConstantError, InputValueError):
                 pass
         object.__setattr__(self, "sources", FrozenMap(sources))
+        given = dict(self.origins)
+        origins = {n: given.get(n, Origin.USER) for n in _CONSTANT_FIELDS if getattr(self, n) is not None}
+        object.__setattr__(self, "origins", FrozenMap(origins))
 
     def __eq__(self, other: object) -> bool:
         if self is other:
@@ -303,16 +327,18 @@ class Species:
             raise MissingConstantError(
                 f"species {self.name!r} has no {name}, which the {method} method needs; "
                 f"use another method, or supply it: "
-                f"dataclasses.replace(masstransfer.species({self.name!r}), {name}=...)"
+                f"masstransfer.species({self.name!r}).replace({name}=...)"
             )
         return float(value)
 
     def replace(self, **changes: Any) -> Species:
         """Return a copy with some constants changed (marked as user-supplied)."""
         sources = dict(self.sources)
+        origins = dict(self.origins)
         for key in changes:
             sources[key] = "user"
-        return dataclasses.replace(self, sources=sources, **changes)
+            origins[key] = Origin.USER
+        return dataclasses.replace(self, sources=sources, origins=origins, **changes)
 
 
 # A database species is created with its identity only and reads its other constants on first
@@ -679,7 +705,11 @@ def _plausible(query: str, meta: Any) -> bool:
 
 #: Constants read in the first stage of a database species (``chemicals`` tables only); any
 #: other field not known at creation (the liquid volume, the sources) completes the record.
-_STAGE_A = frozenset({"Tb", "Tm", "Tc", "Pc", "Vc", "omega", "sigma", "epsilon_k", "dipole", "parachor"})
+_STAGE_A = frozenset(
+    {"Tb", "Tm", "Tc", "Pc", "Vc", "omega", "sigma", "epsilon_k", "dipole", "parachor", "sources", "origins"}
+)
+#: Mappings that the first stage fills without the liquid volume; the second stage replaces them.
+_RESTATED = ("sources", "origins")
 
 
 def _lazy_species(meta: _Meta) -> Species:
@@ -719,7 +749,7 @@ def _complete(sp: Species, *, stage_a: bool) -> None:
         full = _from_chemicals(meta, with_vb=not stage_a)
         names = _STAGE_A if stage_a else [f.name for f in dataclasses.fields(Species)]
         for name in names:
-            if name not in d:
+            if name not in d or (not stage_a and name in _RESTATED):
                 object.__setattr__(sp, name, getattr(full, name))
         if all(f.name in d for f in dataclasses.fields(Species)):
             del d["_pending"]
@@ -747,6 +777,7 @@ def _air() -> Species:
             **dict.fromkeys(("molar_mass", "Tb", "Tc", "Pc", "omega", "sigma", "epsilon_k", "Vb"), src),
             "fuller_volume": "Fuller et al. (1969) special-molecule volume",
         },
+        origins=dict.fromkeys(_CONSTANT_FIELDS, Origin.TABULATED),
     )
 
 
@@ -795,12 +826,10 @@ def _from_chemicals(meta: _Meta, with_vb: bool = True) -> Species:
     except Exception:
         dipole = None
     if dipole is not None:
-        src["dipole"] = "chemicals"
-        if dipole == 0.0:
-            dipole = None  # stored as None; polar methods treat None as 0
-            src["dipole"] = "chemicals (zero)"
+        src["dipole"] = "chemicals"  # zero is kept as zero: None means unknown
 
-    eps, sig_a = _lennard_jones(cas, Tc, Pc, omega, src)
+    org: dict[str, Origin] = {}
+    eps, sig_a = _lennard_jones(cas, Tc, Pc, omega, src, org)
     sigma = None if sig_a is None else sig_a * 1e-10
 
     formula = meta.formula
@@ -814,12 +843,14 @@ def _from_chemicals(meta: _Meta, with_vb: bool = True) -> Species:
         try:
             Vb = le_bas_volume(atoms, smiles if smiles and _molecule(smiles) is not None else None)
             src["Vb"] = "Le Bas additive volumes"
+            org["Vb"] = Origin.ESTIMATED
         except (MissingConstantError, InputValueError):
             Vb = None
 
     fuller_v = data.FULLER_SPECIAL_VOLUMES.get(cas)
     if fuller_v is not None:
         src["fuller_volume"] = "Fuller et al. (1969) special-molecule volume"
+        org["fuller_volume"] = Origin.TABULATED
 
     return Species(
         name=meta.name,
@@ -840,6 +871,7 @@ def _from_chemicals(meta: _Meta, with_vb: bool = True) -> Species:
         Vb=Vb,
         fuller_volume=fuller_v,
         sources=src,
+        origins={**dict.fromkeys(src, Origin.DATABASE), **org},
     )
 
 
@@ -849,7 +881,12 @@ _LJ_SIG_CSP = "Tee, Gotoh, and Stewart CSP with Tc, Pc, omega (1966)"
 
 
 def _lennard_jones(
-    cas: str, Tc: float | None, Pc: float | None, omega: float | None, src: dict[str, str]
+    cas: str,
+    Tc: float | None,
+    Pc: float | None,
+    omega: float | None,
+    src: dict[str, str],
+    org: dict[str, Origin] | None = None,
 ) -> tuple[float | None, float | None]:
     """Lennard-Jones (epsilon/k [K], sigma [angstrom]) for Chapman-Enskog use.
 
@@ -869,6 +906,8 @@ def _lennard_jones(
         eps = sig = None
     if eps is not None and sig is not None:
         src["epsilon_k"] = src["sigma"] = "chemicals: " + _LJ_TABLE + " (Svehla 1962)"
+        if org is not None:
+            org["epsilon_k"] = org["sigma"] = Origin.TABULATED
         return eps, sig
     if Tc is None or Pc is None or omega is None:
         return None, None
@@ -880,6 +919,8 @@ def _lennard_jones(
     if eps is None or sig is None:
         return None, None
     src["epsilon_k"] = src["sigma"] = "chemicals: estimated, " + _LJ_SIG_CSP
+    if org is not None:
+        org["epsilon_k"] = org["sigma"] = Origin.ESTIMATED
     return eps, sig
 
 

@@ -14,7 +14,6 @@ groups used, and the warnings raised.
 from __future__ import annotations
 
 import math
-import warnings
 from collections.abc import Callable, Mapping
 from dataclasses import dataclass
 from typing import Any, Literal, overload
@@ -24,7 +23,15 @@ import numpy as np
 from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._uncertainty import combine, relative_input, stated_uncertainty
-from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, warn_caller
+from .._validation import (
+    check_nonnegative,
+    check_positive,
+    check_shapes,
+    collect_warnings,
+    finish,
+    guard,
+    warn_caller,
+)
 from ..constants import R_GAS
 from ..errors import EnvelopeWarning, InputValueError
 from ..substances._species import Species, species
@@ -667,6 +674,7 @@ def mass_transfer_from_heat(
     mu: Override = None,
     D: Override = None,
     h_uncertainty: ArrayLike = 0.0,
+    D_uncertainty: ArrayLike | None = None,
 ) -> TransferCoefficients:
     """Mass-transfer coefficients for a species from a known h, resolving properties.
 
@@ -688,8 +696,9 @@ def mass_transfer_from_heat(
     phase : {'gas', 'liquid'}
         Phase of the carrier.
     diffusivity_method : str, optional
-        Method for the diffusivity (default: ``'fuller'`` for gases,
-        ``'wilke-chang'`` for liquids).
+        Method for the diffusivity (default: the pair's published recommendation, see
+        :func:`masstransfer.diffusivity.available_methods`); the result's ``method`` names it
+        with its stated accuracy.
     exponent : float
         Analogy exponent n [-] (2/3 for Chilton-Colburn).
     rho : float or callable, optional
@@ -706,6 +715,9 @@ def mass_transfer_from_heat(
     h_uncertainty : float or array_like
         Relative standard uncertainty of ``h`` [-] (0.10 for 10 %, one
         standard deviation); 0 by default.
+    D_uncertainty : float or array_like, optional
+        Relative standard uncertainty of the diffusivity [-]; by default the
+        diffusivity method's stated accuracy, and none for a ``D`` you supply.
 
     Returns
     -------
@@ -744,9 +756,7 @@ def mass_transfer_from_heat(
     'mixture(air 0.97, water 0.03)'
 
     """
-    from ..diffusivity._common import normalise_method
-    from ..diffusivity._gas import GAS_METHODS
-    from ..diffusivity._liquid import LIQUID_METHODS, liquid_diffusivity
+    from ..diffusivity._liquid import liquid_diffusivity, ready_liquid
     from ..substances._properties import liquid_model
 
     if phase not in ("gas", "liquid"):
@@ -755,7 +765,10 @@ def mass_transfer_from_heat(
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
     u_h = relative_input("h_uncertainty", h_uncertainty)
-    check_shapes(h=hv, T=Tv, P=Pv, h_uncertainty=u_h)
+    u_D_given = None if D_uncertainty is None else relative_input("D_uncertainty", D_uncertainty)
+    check_shapes(
+        h=hv, T=Tv, P=Pv, h_uncertainty=u_h, **({} if u_D_given is None else {"D_uncertainty": u_D_given})
+    )
     a = species(solute)
     if phase == "liquid" and is_composition(carrier):
         raise InputValueError(
@@ -767,8 +780,8 @@ def mass_transfer_from_heat(
     k_v: FloatOrArray
     mu_v: FloatOrArray
     D_v: FloatOrArray
-    with warnings.catch_warnings(record=True) as caught:
-        warnings.simplefilter("always")
+    u_D: FloatOrArray | None
+    with collect_warnings() as caught:
         if phase == "gas":
             side = gas_side(
                 a,
@@ -788,7 +801,7 @@ def mass_transfer_from_heat(
                 side.thermal_conductivity(Tv),
                 side.viscosity(Tv),
             )
-            method = side.diffusivity_method
+            method, u_D = side.diffusivity_method, side.diffusivity_uncertainty
             D_v = side.diffusivity(Tv, Pv)
             M_carrier = side.molar_mass
         else:
@@ -811,14 +824,16 @@ def mass_transfer_from_heat(
             cp_v = value("cp", lambda: liquid_model(b).heat_capacity)
             k_v = value("k", lambda: liquid_model(b).thermal_conductivity)
             mu_v = value("mu", lambda: liquid_model(b).viscosity)
-            method = diffusivity_method or "wilke-chang"
             if over["D"] is None:
-                D_v = liquid_diffusivity(a, b, Tv, method=method)
+                record = ready_liquid(a, b, diffusivity_method).record  # the solvent's default when None
+                method = f"{record.name} (stated accuracy about {record.accuracy_pct:g} %)"
+                D_v = liquid_diffusivity(a, b, Tv, method=record.name, P=Pv)
+                u_D = stated_uncertainty(record)
             else:
                 D_v = over["D"](Tv)
-                method = "user-supplied"
-    for w in caught:
-        warn_caller(str(w.message), w.category)
+                method, u_D = "user-supplied", None
+    for message, category in caught:
+        warn_caller(message, category)
     r, c, kk, m, d = (np.asarray(x, dtype=float) for x in (rho_v, cp_v, k_v, mu_v, D_v))
     Pr = c * m / kk
     Sc = m / (r * d)
@@ -834,8 +849,8 @@ def mass_transfer_from_heat(
     else:
         k_G = k_y = None
         k_x = finish(k_c * r / M_carrier)
-    methods = GAS_METHODS if phase == "gas" else LIQUID_METHODS
-    u_D = stated_uncertainty(methods[normalise_method(method, methods, "diffusivity_method")])
+    if u_D_given is not None:  # the user's D_uncertainty replaces the method's stated accuracy
+        u_D = u_D_given
     n_text = "2/3" if math.isclose(exponent, _TWO_THIRDS) else f"{exponent:g}"
     return TransferCoefficients(
         h=finish(np.asarray(hv, dtype=float)),
@@ -857,7 +872,7 @@ def mass_transfer_from_heat(
         Sc=finish(Sc),
         Le=finish(Le),
         method=f"Chilton-Colburn analogy (exponent {n_text}); diffusivity by {method}",
-        warnings=tuple(str(w.message) for w in caught),
+        warnings=tuple(dict.fromkeys(message for message, _ in caught)),
         solute_identity=a.identity,
         carrier_identity=_carrier_identity(carrier),
         user_supplied=supplied,

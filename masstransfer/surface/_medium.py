@@ -132,7 +132,10 @@ class GasSide:
     user_supplied : tuple of str
         Names of the properties the user supplied.
     diffusivity_method : str
-        How D is obtained.
+        The method behind D and its stated accuracy, or ``"user-supplied"``.
+    diffusivity_uncertainty : float or None
+        Relative standard uncertainty of D from the method's stated accuracy [-]; None for a
+        diffusivity the user supplied.
 
     """
 
@@ -141,6 +144,7 @@ class GasSide:
     molar_mass: float
     user_supplied: tuple[str, ...]
     diffusivity_method: str
+    diffusivity_uncertainty: float | None
     _rho: Callable[[FloatOrArray, FloatOrArray], FloatOrArray]
     _cp: Callable[[FloatOrArray], FloatOrArray]
     _k: Callable[[FloatOrArray], FloatOrArray]
@@ -192,11 +196,12 @@ def gas_side(
     A property the user supplies is never looked up, so a medium or solute missing from the
     databases works once every property it would need is given.
     """
-    from ..diffusivity._gas import blanc, gas_diffusivity
+    from .._uncertainty import stated_uncertainty
+    from ..diffusivity._gas import binary_in_mixture, blanc, gas_diffusivity, ready_gas
 
     a = species(solute)
-    method = diffusivity_method or "fuller"
-    if not isinstance(method, str):
+    method = diffusivity_method  # None: each binary's published default (the method records)
+    if method is not None and not isinstance(method, str):
         raise InputTypeError(f"diffusivity_method={method!r} must be a method name (a string)")
     over = {
         "rho": property_override("rho", rho, "kg/m^3"),
@@ -258,9 +263,12 @@ def gas_side(
         )
 
     def D_mix(T: FloatOrArray, P: FloatOrArray) -> FloatOrArray:
-        if len(others) == 1:
+        if len(others) == 1 and len(comp) == 1:
             return gas_diffusivity(a, others[0][0], T, P, method=method)
-        Ds = [np.asarray(gas_diffusivity(a, sp, T, P, method=method)) for sp, _ in others]
+        # each component a vapour at its partial pressure (water at 3 % in humid air)
+        Ds = [np.asarray(binary_in_mixture(a, sp, T, P, y, method)) for sp, y in others]
+        if len(others) == 1:
+            return Ds[0] if Ds[0].ndim else float(Ds[0])
         stacked = np.stack(np.broadcast_arrays(*Ds), axis=-1)
         return blanc(stacked, [y for _, y in others])
 
@@ -272,13 +280,23 @@ def gas_side(
 
     rho_fn = over["rho"]
     D_fn = over["D"]
-    d_method = f"{method} binaries combined by Blanc's law" if len(others) > 1 else method
+    if D_fn is None:
+        records = [ready_gas(a, sp, method).record for sp, _ in others]
+        names = "/".join(dict.fromkeys(r.name for r in records))
+        pct = max(r.accuracy_pct for r in records)
+        d_method = f"{names} (stated accuracy about {pct:g} %)"
+        if len(others) > 1:
+            d_method = f"{names} binaries combined by Blanc's law (stated accuracy about {pct:g} %)"
+        u_D = max((u for r in records if (u := stated_uncertainty(r)) is not None), default=None)
+    else:
+        d_method, u_D = "user-supplied", None
     return GasSide(
         solute=a,
         label=label,
         molar_mass=M,
         user_supplied=supplied,
-        diffusivity_method="user-supplied" if D_fn is not None else d_method,
+        diffusivity_method=d_method,
+        diffusivity_uncertainty=u_D,
         _rho=rho_ideal if rho_fn is None else (lambda T, P: rho_fn(T)),
         _cp=pick("cp", cp_mass),
         _k=pick("k", k_mix),

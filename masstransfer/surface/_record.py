@@ -2,10 +2,11 @@
 
 from __future__ import annotations
 
+import inspect
 import math
 from collections.abc import Callable, Mapping
 from dataclasses import dataclass, field
-from typing import Any, Literal
+from typing import Any, Literal, NamedTuple
 
 import numpy as np
 
@@ -24,6 +25,16 @@ _STRICTLY_POSITIVE = frozenset({"Pr", "mu_ratio", "Pr_ratio", "porosity", "L_ove
 
 #: Names of the inputs in the heat form and the mass form.
 _MASS_NAME = {"Pr": "Sc", "Nu": "Sh"}
+
+
+class _Plan(NamedTuple):
+    """The scalar fast path of one record in one form (heat or mass), declared once."""
+
+    entries: tuple[tuple[str, float | None, float, float], ...]
+    products: tuple[tuple[tuple[int, ...], float, float], ...]
+    positional: bool
+    keys: tuple[str, ...]
+    usable: bool
 
 
 @dataclass(frozen=True, eq=False)
@@ -141,9 +152,7 @@ class Correlation:
     products: Mapping[str, tuple[tuple[str, ...], tuple[float, float]]] = field(default_factory=dict)
     branches: tuple[tuple[str, float, float, Mapping[str, tuple[float, float]]], ...] = ()
     steps: tuple[tuple[str, float, float], ...] = ()
-    _plans: Mapping[str, tuple[tuple[str, str, float | None, float, float], ...]] = field(
-        init=False, repr=False, default_factory=dict
-    )
+    _plans: Mapping[str, _Plan] = field(init=False, repr=False, default_factory=dict)
 
     def __post_init__(self) -> None:
         object.__setattr__(self, "envelope", FrozenMapping(self.envelope))
@@ -164,30 +173,40 @@ class Correlation:
 
         return (correlation, (self.slug,))
 
-    def _plan(self, kind: Kind) -> tuple[tuple[str, str, float | None, float, float], ...]:
-        """Per input: (name in this form, key, default, lowest, highest) accepted without a word.
+    def _plan(self, kind: Kind) -> _Plan:
+        """Build the scalar fast path's plan for one form, once, from the declared domains.
 
-        The range is the intersection of the domain, the strictly-positive rule, the magnitude
-        limit and the envelope: a Python float inside it needs no error and no warning.
+        Per input: (name in this form, default, lowest, highest) accepted without a word, the
+        range being the intersection of the domain, the strictly-positive rule, the magnitude
+        limit and the envelope: a Python float inside it needs no error and no warning.  Then
+        the products' conditions as positions, and whether the function takes the values in
+        plan order (a positional call).
         """
-        plan = []
-        for key in (*self.inputs, *self.parameters):
+        keys = (*self.inputs, *self.parameters)
+        entries = []
+        for key in keys:
             lo, hi = self.domain.get(key, (0.0, math.inf))
             if key in _STRICTLY_POSITIVE:
                 lo = max(lo, 5e-324)
             hi = min(hi, MAGNITUDE_LIMIT)
             elo, ehi = self.envelope.get(key, (-math.inf, math.inf))
             default = self.parameters.get(key)
-            plan.append(
+            entries.append(
                 (
                     self._name(key, kind),
-                    key,
                     None if default is None else float(default),
                     max(lo, elo),
                     min(hi, ehi),
                 )
             )
-        return tuple(plan)
+        products = tuple(
+            (tuple(keys.index(n) for n in names), lo, hi) for names, (lo, hi) in self.products.values()
+        )
+        try:
+            params = list(inspect.signature(self.function).parameters)
+        except (TypeError, ValueError):  # pragma: no cover - builtins without a signature
+            params = []
+        return _Plan(tuple(entries), products, params == list(keys), keys, not self.branches)
 
     def _fast(self, kind: Kind, given: Mapping[str, Any]) -> float | None:
         """Return the value for Python-float inputs inside the envelope and domain, else None.
@@ -195,11 +214,12 @@ class Correlation:
         None sends the call down the general path, which raises or warns exactly as it always
         does; this path only ever returns what that path would return, with nothing to say.
         """
-        if self.branches:
+        plan = self._plans[kind]
+        if not plan.usable:
             return None
-        values: dict[str, float] = {}
+        values: list[float] = []
         used = 0
-        for name, key, default, lo, hi in self._plans[kind]:
+        for name, default, lo, hi in plan.entries:
             v = given.get(name)
             if v is None:
                 if default is None:
@@ -214,17 +234,21 @@ class Correlation:
                     return None
             if not lo <= v <= hi:  # NaN fails too
                 return None
-            values[key] = v
+            values.append(v)
         if used != len(given):
             return None
-        for names, (lo, hi) in self.products.values():
+        for positions, lo, hi in plan.products:
             p = 1.0
-            for n in names:
-                p *= values[n]
+            for k in positions:
+                p *= values[k]
             if not lo <= p <= hi:
                 return None
         try:
-            out = self.function(**values)
+            out = (
+                self.function(*values)
+                if plan.positional
+                else self.function(**dict(zip(plan.keys, values, strict=True)))
+            )
         except _ARITHMETIC:
             return None
         if type(out) is not float:

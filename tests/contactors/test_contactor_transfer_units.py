@@ -154,3 +154,21 @@ def test_integrator_argument_errors():
         c.column_profile(0.001, 0.01, 20.0, 36.0, 40.0, 1.2, height=2.0)
     with pytest.raises(InputValueError, match="equilibrium returned"):
         c.numerical_transfer_units(0.02, 0.001, 0.0, 1.8, lambda x: -1.0)
+
+
+@pytest.mark.parametrize("curved", [False, True], ids=["slope", "function"])
+def test_film_transfer_units_give_the_same_height_as_the_overall(curved):
+    # Z = N_G H_G = N_L H_L = N_OG H_OG for straight lines (Treybal 3rd ed., Ch. 8)
+    G, L, m, kya, kxa = 20.0, 36.0, 1.2, 50.0, 2000.0
+    eq = (lambda x: m * x) if curved else m
+    NG = c.film_transfer_units(0.02, 0.001, 0.0, L / G, eq, kxa / kya)
+    NL = c.film_transfer_units(0.02, 0.001, 0.0, L / G, eq, kxa / kya, phase="liquid")
+    HG, HL, A = G / kya, L / kxa, L / (m * G)
+    Z = c.transfer_units(0.02, 0.001, 0.0, m, A) * c.overall_gas_htu(HG, HL, A)
+    assert pytest.approx(Z, rel=1e-6) == NG * HG
+    assert pytest.approx(Z, rel=1e-6) == NL * HL
+
+
+def test_film_units_tend_to_overall_when_the_liquid_film_vanishes():
+    N = c.film_transfer_units(0.02, 0.001, 0.0, 1.8, 1.2, 1e9)
+    assert pytest.approx(c.transfer_units(0.02, 0.001, 0.0, 1.2, 1.5), rel=1e-6) == N

@@ -12,7 +12,7 @@ import masstransfer as mt
 def test_wilke_chang_ethylbenzene_in_water():
     # Poling, Prausnitz & O'Connell 5th ed., ch. 11: ethylbenzene in water at 293 K,
     # measured 0.81e-5 cm^2/s (from memory)
-    D = mt.liquid_diffusivity("ethylbenzene", "water", 293.0)
+    D = mt.liquid_diffusivity("ethylbenzene", "water", 293.0, method="wilke-chang")
     assert pytest.approx(0.81e-9, rel=0.10) == D
 
 
@@ -47,37 +47,45 @@ def test_stokes_einstein_for_a_particle():
     )
 
 
-_IDS = [f"{a}-in-{b}" for a, b, *_ in LIQUID_SYSTEMS]
-#: One-row limits are about three times each method's published average error.
-_ROW_LIMIT = {"wilke-chang": 0.55, "hayduk-minhas": 0.60, "tyn-calus": 0.45}
-_AAD_LIMIT = {"wilke-chang": 0.25, "hayduk-minhas": 0.18, "tyn-calus": 0.15}
+_IDS = [f"{a}-in-{b}-{T:g}K" for a, b, T, *_ in LIQUID_SYSTEMS]
+#: One-row limits are about three times each method's published average error (dissolved
+#: hydrogen, far below every correlation's fitting range, is the widest row).
+_ROW_LIMIT = {"wilke-chang": 0.55, "hayduk-minhas": 0.55, "tyn-calus": 0.55}
+_AAD_LIMIT = {"wilke-chang": 0.22, "hayduk-minhas": 0.16, "tyn-calus": 0.14}
 _METHODS = list(_ROW_LIMIT)
 
 
 @pytest.mark.parametrize("method", _METHODS)
-@pytest.mark.parametrize(("solute", "solvent", "T", "measured", "source"), LIQUID_SYSTEMS, ids=_IDS)
-def test_against_measured_systems(method, solute, solvent, T, measured, source):
+@pytest.mark.parametrize(("solute", "solvent", "T", "measured", "group", "source"), LIQUID_SYSTEMS, ids=_IDS)
+def test_against_measured_systems(method, solute, solvent, T, measured, group, source):
     D = mt.liquid_diffusivity(solute, solvent, T, method=method)
     assert pytest.approx(measured, rel=_ROW_LIMIT[method]) == D, source
 
 
 @pytest.mark.parametrize("method", _METHODS)
 def test_average_absolute_deviation(method):
-    dev = [abs(mt.liquid_diffusivity(a, b, T, method=method) / D - 1) for a, b, T, D, _ in LIQUID_SYSTEMS]
-    assert len(dev) >= 10
+    dev = [abs(mt.liquid_diffusivity(a, b, T, method=method) / D - 1) for a, b, T, D, *_ in LIQUID_SYSTEMS]
+    assert len(dev) >= 25
     assert np.mean(dev) < _AAD_LIMIT[method]
 
 
 def test_special_cases_are_applied_and_reported():
-    inp = mt.diffusivity.liquid_diffusivity_inputs("water", "ethanol", "wilke-chang")
-    assert inp.V_solute == pytest.approx(37.4e-6)  # Poling et al. 5th ed. Section 11-9 (from memory)
+    # Wilke-Chang, water as solute: the value divided by 2.3 (Olander 1961, as recommended in
+    # Reid, Prausnitz & Poling 4th ed. Section 11-9, from memory); not the 37.4 cm^3/mol rule
+    wc = mt.diffusivity.liquid_diffusivity_inputs("water", "ethanol", "wilke-chang")
+    assert wc.V_solute == pytest.approx(18.9e-6)  # Treybal 3rd ed. Table 2.3 (from memory)
+    assert any("2.3" in n for n in wc.notes)
+    mu = mt.liquid_model("ethanol").viscosity(298.15)
+    by_hand = mt.diffusivity.wilke_chang(298.15, mu, 0.04607, 18.9e-6, 1.5) / 2.3
+    assert mt.liquid_diffusivity("water", "ethanol", 298.15, method="wilke-chang") == pytest.approx(
+        by_hand, rel=1e-3
+    )
     tc = mt.diffusivity.liquid_diffusivity_inputs("water", "ethanol", "tyn-calus")
-    base = mt.species("water")
-    assert tc.V_solute == pytest.approx(2 * base.Vb)
+    assert tc.V_solute == pytest.approx(2 * 18.9e-6)
     acid = mt.diffusivity.liquid_diffusivity_inputs("acetic acid", "benzene", "tyn-calus")
-    assert "organic acid" in acid.notes[0]
+    assert any("organic acid" in n for n in acid.notes)
     acid_in_water = mt.diffusivity.liquid_diffusivity_inputs("acetic acid", "water", "tyn-calus")
-    assert acid_in_water.notes == ()
+    assert not any("dimer" in n for n in acid_in_water.notes)
     forms = {
         solvent: mt.diffusivity.liquid_diffusivity_inputs("benzene", solvent, "hayduk-minhas").form
         for solvent in ("water", "n-hexane", "toluene")
@@ -89,6 +97,7 @@ def test_alcohol_solvent_rule_raises_the_estimate():
     # non-polar solute in a monohydroxy alcohol: V_B and P_B scaled by 8*eta_B (Poling et al. 11-9)
     with_rule = mt.liquid_diffusivity("toluene", "ethanol", 298.15, method="tyn-calus")
     inp = mt.diffusivity.liquid_diffusivity_inputs("toluene", "ethanol", "tyn-calus")
+    assert any("8 eta_B" in n for n in inp.notes)
     mu = mt.liquid_model("ethanol").viscosity(298.15)
     without = mt.diffusivity.tyn_calus(
         298.15, mu, inp.V_solute, inp.V_solvent, inp.parachor_solute, inp.parachor_solvent
@@ -98,14 +107,14 @@ def test_alcohol_solvent_rule_raises_the_estimate():
 
 
 def test_caller_viscosity_overrides_property_layer():
-    a = mt.liquid_diffusivity("benzene", "water", 298.15, mu_solvent=1.0e-3)
-    b = mt.liquid_diffusivity("benzene", "water", 298.15, mu_solvent=2.0e-3)
+    a = mt.liquid_diffusivity("benzene", "water", 298.15, "wilke-chang", mu_solvent=1.0e-3)
+    b = mt.liquid_diffusivity("benzene", "water", 298.15, "wilke-chang", mu_solvent=2.0e-3)
     assert a == pytest.approx(2 * b)
 
 
 def test_viscous_solvent_warns():
     with pytest.warns(mt.errors.EnvelopeWarning, match="viscous"):
-        mt.liquid_diffusivity("benzene", "water", 298.15, mu_solvent=0.05)
+        mt.liquid_diffusivity("benzene", "water", 298.15, "wilke-chang", mu_solvent=0.05)
 
 
 _liquid_cases = st.sampled_from(

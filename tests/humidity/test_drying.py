@@ -84,3 +84,11 @@ def test_clear_errors():
         humidity.drying_time(1e-4, shape="cube", X_final=0.05, **_BASE)
     with pytest.raises(mt.errors.InputValueError, match="points"):
         humidity.drying_time(1e-4, shape="slab", X_final=0.05, points=1, **_BASE)
+
+
+def test_surface_resistance_slows_the_falling_period():
+    free = humidity.drying_time(1e-4, shape="slab", X_final=0.05, **_BASE)
+    resisted = humidity.drying_time(1e-4, shape="slab", X_final=0.05, biot=2.0, **_BASE)
+    assert resisted.t_falling > free.t_falling
+    released = mt.bodies.fractional_release("slab", resisted.t_falling, 1e-9, 0.01, biot=2.0)
+    assert released == pytest.approx((0.2 - 0.05) / 0.2, rel=1e-9)

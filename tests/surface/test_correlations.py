@@ -937,6 +937,48 @@ def _graetz_constant_wall():
     return lam**2 / 2
 
 
+@functools.lru_cache(maxsize=1)
+def _graetz_terms(count=30):
+    """Eigenvalues, coefficients and bulk weights of the Graetz problem (constant wall temperature,
+    parabolic velocity), by shooting on theta'' + theta'/r + lam^2 (1 - r^2) theta = 0 with scipy.
+
+    Graetz (1885); Shah & London (1978), Laminar Flow Forced Convection in Ducts, Section V.B.
+    """
+    from scipy.integrate import solve_ivp
+    from scipy.optimize import brentq
+
+    def shoot(lam, full=False):
+        def rhs(r, y):
+            th, dth = y[0], y[1]
+            w = r * (1 - r * r) * th
+            return [dth, -dth / r - lam**2 * (1 - r * r) * th, w, w * th]
+
+        r0 = 1e-8
+        sol = solve_ivp(
+            rhs, (r0, 1.0), [1.0, -0.5 * lam**2 * r0, 0.0, 0.0], rtol=1e-10, atol=1e-12, method="DOP853"
+        )
+        return sol.y[:, -1] if full else sol.y[0, -1]
+
+    # the n-th eigenvalue lies near 4n + 2.7 (Shah & London 1978, from memory): bracket each one
+    lams = [brentq(shoot, 4.0 * n + 1.0, 4.0 * n + 4.5, xtol=1e-12) for n in range(count)]
+    terms = []
+    for lam in lams:
+        _, _, first, second = shoot(lam, full=True)
+        terms.append((lam, first / second, first))  # lambda_n, C_n, int r (1 - r^2) theta_n dr
+    return tuple(terms)
+
+
+def _graetz_mean_nusselt(Gz):
+    """Mean Nu over a length L at constant wall temperature, Gz = Re Pr D/L: the exact series.
+
+    Bulk temperature 4 sum C_n w_n exp(-lambda_n^2 s) with s = 2/Gz; Nu_m = -ln(theta_b) / (2 s).
+    Thirty terms are exact to double precision for Gz <= 1000.
+    """
+    s = 2.0 / Gz
+    theta_b = 4.0 * sum(c * w * math.exp(-lam * lam * s) for lam, c, w in _graetz_terms())
+    return -math.log(theta_b) / (2.0 * s)
+
+
 _EXACT = [
     # (slug, inputs at an envelope edge, exact reference value, source of the reference)
     ("flat-plate-laminar-local", {"Re": 1e5, "Pr": 0.6}, lambda: _pohlhausen(0.6) * 1e5**0.5, "Pohlhausen"),
@@ -967,6 +1009,31 @@ _EXACT = [
     ),
     ("duct-laminar-constant-wall", {"Re": 2300.0, "Pr": 0.7}, _graetz_constant_wall, "Graetz eigenvalue"),
     ("duct-laminar-constant-flux", {"Re": 2300.0, "Pr": 0.7}, lambda: 48 / 11, "Incropera Eq. 8.53 (48/11)"),
+    # laminar thermal entry: the Graetz series at Gz = 1 (long tube) and Gz = 1000 (short entry)
+    (
+        "duct-entry-hausen",
+        {"Re": 2000.0, "Pr": 5.0, "L_over_D": 10.0},
+        lambda: _graetz_mean_nusselt(1000.0),
+        "Graetz series",
+    ),
+    (
+        "duct-entry-hausen",
+        {"Re": 100.0, "Pr": 1.0, "L_over_D": 100.0},
+        lambda: _graetz_mean_nusselt(1.0),
+        "Graetz series",
+    ),
+    (
+        "duct-entry-graetz-leveque",
+        {"Re": 2000.0, "Pr": 5.0, "L_over_D": 10.0},
+        lambda: _graetz_mean_nusselt(1000.0),
+        "Graetz series",
+    ),
+    (
+        "duct-entry-graetz-leveque",
+        {"Re": 100.0, "Pr": 1.0, "L_over_D": 100.0},
+        lambda: _graetz_mean_nusselt(1.0),
+        "Graetz series",
+    ),
     # Newman (1966) J. Phys. Chem. 70, 1327, three-term series (from memory); Sc = 100 is the envelope's edge
     (
         "rotating-disk-levich",
@@ -1017,6 +1084,10 @@ def test_exact_references_reproduce_the_published_constants():
     assert _pohlhausen(1.0) == pytest.approx(0.33206, rel=1e-4)
     assert _pohlhausen(1e4) / 1e4 ** (1 / 3) == pytest.approx(0.3387, rel=2e-3)
     assert _graetz_constant_wall() == pytest.approx(3.6568, rel=1e-4)  # Shah & London 1978 (from memory)
+    # first Graetz eigenvalues 2.7044, 6.6790, 10.6734 (Shah & London 1978, from memory); the series
+    # tends to 3.66 far downstream (Incropera Eq. 8.55)
+    assert [t[0] for t in _graetz_terms()[:3]] == pytest.approx([2.7044, 6.6790, 10.6734], abs=1e-4)
+    assert _graetz_mean_nusselt(0.05) == pytest.approx(_graetz_constant_wall(), rel=1e-3)
 
 
 # --- the scalar fast path changes nothing --------------------------------------------------------

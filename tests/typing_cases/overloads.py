@@ -8,7 +8,7 @@ import numpy as np
 import numpy.typing as npt
 
 import masstransfer as mt
-from masstransfer import bodies
+from masstransfer import bodies, contactors
 
 if TYPE_CHECKING:
     from typing_extensions import assert_type
@@ -17,6 +17,12 @@ if TYPE_CHECKING:
 def cases() -> None:
     """Never run; only type-checked."""
     T = np.linspace(300.0, 400.0, 5)
+    assert_type(contactors.hatta_number(10.0, 500.0, 1.8e-9, 1e-4), float)
+    assert_type(contactors.hatta_number(T, 500.0, 1.8e-9, 1e-4), npt.NDArray[np.float64])
+    assert_type(contactors.enhancement_factor(5.0, 10.0), float)
+    assert_type(contactors.enhancement_factor(T, 10.0), npt.NDArray[np.float64])
+    assert_type(contactors.transfer_units(0.02, 0.001, 0.0, 1.2, 1.5), float)
+    assert_type(contactors.transfer_units(0.02, 0.001, 0.0, 1.2, T), npt.NDArray[np.float64])
     assert_type(mt.gas_diffusivity("water", "air", 300.0), float)
     assert_type(mt.gas_diffusivity("water", "air", 300.0, 2e5), float)
     assert_type(mt.gas_diffusivity("water", "air", T), npt.NDArray[np.float64])
