@@ -94,6 +94,7 @@ def run(args: argparse.Namespace) -> str:
             {
                 "solute": report.solute,
                 "medium": report.medium,
+                "resolved": _resolved(args.solute, args.medium),
                 "phase": report.phase,
                 "phase_inferred": inferred,
                 "method": report.method,
@@ -113,6 +114,8 @@ def run(args: argparse.Namespace) -> str:
     how = "inferred from the medium's state at T and P" if inferred else "as given"
     lines = [
         f"Diffusivity of {report.solute} in {report.medium} ({where})",
+        f"solute: {report.solute_identity}",
+        f"medium: {report.medium_identity}",
         f"phase: {report.phase} ({how})",
         f"method: {report.method}; stated accuracy {report.accuracy_pct:g} % ({report.accuracy})",
     ]
@@ -136,3 +139,15 @@ def run(args: argparse.Namespace) -> str:
         lines += [f"caution: {w}" for w in report.warnings]
         lines.append("Estimates; check safety-relevant designs against measured data.")
     return "\n".join(lines)
+
+
+def _resolved(solute: str, medium: str) -> dict[str, dict[str, Any]]:
+    """Describe what the names resolved to, for the JSON output."""
+    from .substances._species import species
+
+    out = {}
+    for who, name in (("solute", solute), ("medium", medium)):
+        sp = species(name)
+        out[who] = {"query": name, "name": sp.name, "CAS": sp.CAS, "formula": sp.formula,
+                    "molar_mass_kg_per_mol": sp.molar_mass}  # fmt: skip
+    return out

@@ -18,6 +18,9 @@ __all__ = [
     "FULLER_SPECIAL_VOLUMES",
     "LE_BAS_ATOMIC_VOLUMES",
     "LE_BAS_RING_INCREMENTS",
+    "QUAYLE_PARACHOR_ATOMS",
+    "QUAYLE_PARACHOR_BONDS",
+    "QUAYLE_PARACHOR_RINGS",
     "SMALL_MOLECULE_VB",
     "WILKE_CHANG_ASSOCIATION",
 ]
@@ -161,6 +164,38 @@ AIR: Final = MappingProxyType(
         "composition": (("7727-37-9", 0.7812), ("7782-44-7", 0.2096), ("7440-37-1", 0.0092)),
     }
 )
+
+# --- Parachor structural contributions ---------------------------------------
+# Quayle, O. R. (1953), Chem. Rev. 53, 439-589, as tabulated in Poling, Prausnitz &
+# O'Connell, The Properties of Gases and Liquids, 5th ed. (2001), Section 12-3 (from memory).
+# Unit: cm^3 g^0.25 s^-0.5 mol^-1 (the tabulated cgs form; divide by 5.623413e6 for SI).
+QUAYLE_PARACHOR_ATOMS: Final = MappingProxyType(
+    {
+        "C": 9.0,
+        "H": 15.5,
+        "O": 20.0,
+        "N": 17.5,
+        "S": 49.1,
+        "P": 40.5,
+        "F": 26.1,
+        "Cl": 55.2,
+        "Br": 68.0,
+        "I": 90.3,
+    }
+)
+QUAYLE_PARACHOR_BONDS: Final = MappingProxyType(
+    {
+        "double_terminal": 19.1,  # ethylenic bond at the end of a chain; also used for aromatic rings
+        "double_internal": 17.7,  # ethylenic bond in the 2,3-position
+        "triple": 40.6,
+        "semipolar": -1.6,  # S=O, P=O as written in SMILES (a semipolar bond)
+        "ester_O2": 60.0,  # both oxygens of -COO- in esters (instead of 2 x 20.0)
+        "COOH": 73.8,  # the whole carboxylic acid group
+        "NO2": 74.1,  # the whole nitro group
+    }
+)
+#: Ring-closure increments by ring size, same source.
+QUAYLE_PARACHOR_RINGS: Final = MappingProxyType({3: 12.5, 4: 6.0, 5: 3.0, 6: 0.8, 7: 4.0})
 
 # --- Packings for gas-liquid contactors ---------------------------------------
 # One row per packing: kind, nominal size [m], material, specific area a [m^2/m^3], void

@@ -14,6 +14,7 @@ from __future__ import annotations
 import argparse
 import json
 import os
+import re
 import sys
 import warnings
 from collections.abc import Sequence
@@ -170,6 +171,7 @@ def _coefficient(args: argparse.Namespace) -> str:
             {
                 "solute": res.solute,
                 "medium": res.carrier,
+                "resolved": _resolved(args.solute, args.medium),
                 "phase": res.phase,
                 "method": res.method,
                 "warnings": list(res.warnings),
@@ -196,9 +198,49 @@ def _coefficient(args: argparse.Namespace) -> str:
     foot = res.method + "."
     if res.warnings:
         foot += "\nWarnings:\n  " + "\n  ".join(res.warnings)
-    return _table(
+    return _identity_lines(args.solute, args.medium) + _table(
         f"Mass-transfer coefficients for {res.solute} in {res.carrier} ({res.phase})", header, rows, foot
     )
+
+
+def _resolved(solute: str, medium: str) -> dict[str, dict[str, Any]]:
+    """Describe what the names resolved to, for the JSON output."""
+    from .substances._species import species
+
+    out = {}
+    for who, name in (("solute", solute), ("medium", medium)):
+        sp = species(name)
+        out[who] = {"query": name, "name": sp.name, "CAS": sp.CAS, "formula": sp.formula,
+                    "molar_mass_kg_per_mol": sp.molar_mass}  # fmt: skip
+    return out
+
+
+def _identity_lines(solute: str, medium: str) -> str:
+    """One line per resolved substance, above a table."""
+    from .substances._species import species
+
+    return "".join(
+        f"{who}: {species(name).identity}\n" for who, name in (("solute", solute), ("medium", medium))
+    )
+
+
+#: Hints in library messages that name Python calls, and what the command line offers instead.
+_CLI_HINTS = (
+    (re.compile(r",? or build it by hand: masstransfer\.Species\(.*$", re.S), ""),
+    (re.compile(r"use another method, or supply it: dataclasses\.replace\(.*$", re.S),
+     "choose another --method"),
+    (re.compile(r"masstransfer\.surface\.all_correlations\(\) lists every record"),
+     "'masstransfer correlations' lists every record"),
+    (re.compile(r"\bmethod=(?=')"), "--method "),
+    (re.compile(r"\bpass T within"), "pass -T within"),
+)  # fmt: skip
+
+
+def _cli_message(message: str) -> str:
+    """Reword a library error message for the command line (options, not Python calls)."""
+    for pattern, replacement in _CLI_HINTS:
+        message = pattern.sub(replacement, message)
+    return message
 
 
 def _correlations(args: argparse.Namespace) -> str:
@@ -350,9 +392,12 @@ def main(argv: Sequence[str] | None = None) -> int:
 def _emit_error(exc: MassTransferError, as_json: bool) -> int:
     """Report a rejected input: one line on stderr, or a JSON object on stdout with ``--json``."""
     if as_json:
-        _emit(json.dumps({"error": {"type": type(exc).__name__, "message": str(exc)}}, indent=2), [])
+        _emit(
+            json.dumps({"error": {"type": type(exc).__name__, "message": _cli_message(str(exc))}}, indent=2),
+            [],
+        )
     else:
-        print(f"masstransfer: error: {exc}", file=sys.stderr)
+        print(f"masstransfer: error: {_cli_message(str(exc))}", file=sys.stderr)
     return 2
 
 

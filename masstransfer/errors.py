@@ -9,6 +9,7 @@ Messages name the argument, the offending value and how to fix it.
 from __future__ import annotations
 
 __all__ = [
+    "AmbiguousSpeciesWarning",
     "EnvelopeError",
     "EnvelopeWarning",
     "InputShapeError",
@@ -75,6 +76,10 @@ class MassTransferWarning(UserWarning):
 
 class EnvelopeWarning(MassTransferWarning):
     """An input lies outside the range over which a method was validated."""
+
+
+class AmbiguousSpeciesWarning(MassTransferWarning):
+    """A species name or formula fits several substances; the message names the one chosen."""
 
 
 class UnitError(InputTypeError):

@@ -4,9 +4,14 @@ from __future__ import annotations
 
 import os
 import sys
+import tempfile
 from pathlib import Path
 
 from hypothesis import HealthCheck, settings
+
+# property curves are cached on disk between processes; the suite starts from a cold cache of
+# its own (subprocesses inherit it), so it neither reads nor fills the user's cache
+os.environ["MASSTRANSFER_CACHE_DIR"] = tempfile.mkdtemp(prefix="masstransfer-test-cache-")
 
 # tests/ mirrors the package in subfolders; the shared validation tables live at tests/ itself
 sys.path.insert(0, str(Path(__file__).parent))

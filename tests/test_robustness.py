@@ -224,6 +224,7 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
     ("liquid_model", mt.liquid_model, {"liquid": "water"}),
     ("henry", substances.henry_constant, {"solute": "oxygen", "solvent": "water", "T": 298.0}),
     ("parachor", substances.parachor, {"liquid": "benzene"}),
+    ("quayle_parachor", substances.quayle_parachor, {"atoms": {"C": 6, "H": 6}, "smiles": "c1ccccc1"}),
     ("air_viscosity", mt.gas_model("air").viscosity, {"T": 300.0}),
     ("quantities", mt.units.quantities, {"result": mt.diffusivity_report("water", "air", 300.0)}),
     ("water_density", mt.liquid_model("water").density, {"T": 300.0}),

@@ -48,6 +48,8 @@ class DiffusivityReport(FrozenResult):
         were chosen.
     warnings : tuple of str
         Envelope warnings raised by the computation.
+    solute_identity, medium_identity : str
+        The resolved substances: name, CAS number, formula and molar mass.
     relative_uncertainty : float or None
         Relative standard uncertainty of ``value`` [-] (one standard deviation,
         as a fraction), from the method's stated accuracy: an average absolute
@@ -69,6 +71,8 @@ class DiffusivityReport(FrozenResult):
     constants: Mapping[str, Mapping[str, tuple[float | None, str]]]
     notes: tuple[str, ...]
     warnings: tuple[str, ...]
+    solute_identity: str = ""
+    medium_identity: str = ""
     relative_uncertainty: float | None = None
 
     def summary(self) -> str:
@@ -96,6 +100,11 @@ class DiffusivityReport(FrozenResult):
             f"D({self.solute} in {self.medium}, {self.phase}) = {shown}",
             f"method: {self.method} (stated accuracy {self.accuracy_pct:g} %: {self.accuracy})",
             f"reference: {self.reference}",
+            *(
+                f"{who}: {ident}"
+                for who, ident in (("solute", self.solute_identity), ("medium", self.medium_identity))
+                if ident
+            ),
             *(
                 []
                 if self.relative_uncertainty is None
@@ -236,4 +245,6 @@ def diffusivity_report(
         notes=(*notes, *rule_notes),
         warnings=tuple(dict.fromkeys(msg for msg, _ in caught)),
         relative_uncertainty=stated_uncertainty(rec),
+        solute_identity=a.identity,
+        medium_identity=b.identity,
     )

@@ -8,7 +8,27 @@ functions, on first use.  The entry points :func:`masstransfer.species`,
 
 from __future__ import annotations
 
-from ._properties import INTERPOLATION_RTOL, PropertyCurve, henry_constant, parachor
+from ._properties import (
+    INTERPOLATION_RTOL,
+    KINK_RTOL,
+    LIQUID_TR_MAX,
+    PARACHOR_CGS_PER_SI,
+    PropertyCurve,
+    henry_constant,
+    parachor,
+    quayle_parachor,
+)
 from ._species import Origin, le_bas_volume
 
-__all__ = ["INTERPOLATION_RTOL", "Origin", "PropertyCurve", "henry_constant", "le_bas_volume", "parachor"]
+__all__ = [
+    "INTERPOLATION_RTOL",
+    "KINK_RTOL",
+    "LIQUID_TR_MAX",
+    "PARACHOR_CGS_PER_SI",
+    "Origin",
+    "PropertyCurve",
+    "henry_constant",
+    "le_bas_volume",
+    "parachor",
+    "quayle_parachor",
+]

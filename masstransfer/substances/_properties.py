@@ -25,9 +25,10 @@ treated as a mixture of N2, O2 and Ar (composition in
 
 from __future__ import annotations
 
+import bisect
 import functools
 import math
-from collections.abc import Callable
+from collections.abc import Callable, Mapping
 from dataclasses import dataclass
 from typing import Any
 
@@ -38,9 +39,11 @@ from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import DEBYE, R_GAS
-from ..errors import EnvelopeWarning, MissingConstantError, OutOfRangeError
-from ._databases import quiet
+from ..errors import EnvelopeWarning, InputValueError, MissingConstantError, OutOfRangeError
+from ._cache import load_curves, store_curves
+from ._databases import loading, thermo_models
 from ._species import Species, species
+from ._structure import Molecule
 
 __all__ = [
     "INTERPOLATION_RTOL",
@@ -51,15 +54,35 @@ __all__ = [
     "henry_constant",
     "liquid_model",
     "parachor",
+    "quayle_parachor",
 ]
 
-#: Largest relative deviation allowed between an interpolant and its model.
+#: Relative deviation an interpolant piece must reach against its model.
 INTERPOLATION_RTOL = 1e-7
+#: Relative deviation accepted, and recorded, for the narrowest pieces: tabulated and spline
+#: models have kinks at their knots, where no polynomial piece reaches INTERPOLATION_RTOL.
+KINK_RTOL = 1e-5
+#: Upper reduced temperature T/Tc of the liquid volume, heat capacity and enthalpy of
+#: vaporisation curves.  Their published forms have a singular slope at the critical point;
+#: stopping at 0.95 Tc keeps the interpolants exact.  Viscosity, conductivity and vapour
+#: pressure run to the model's own limit (at most Tc).
+LIQUID_TR_MAX = 0.95
+#: Temperature bounds of gas curves [K], whatever range a correlation claims.
+GAS_T_BOUNDS = (10.0, 5000.0)
+
+_NODES = (12, 24, 48)
+_MAX_DEPTH = 18
+
+
+def _readonly(a: Any) -> FloatArray:
+    out = np.array(a, dtype=float, copy=True)
+    out.flags.writeable = False
+    return out
 
 
 @dataclass(frozen=True, eq=False)
 class PropertyCurve:
-    """One temperature-dependent property as a verified Chebyshev interpolant.
+    """One temperature-dependent property as a verified piecewise Chebyshev interpolant.
 
     Parameters
     ----------
@@ -74,7 +97,19 @@ class PropertyCurve:
     T_max : float
         Highest temperature covered [K].
     coefficients : numpy.ndarray
-        Chebyshev coefficients of the (log of the) property on [T_min, T_max].
+        Chebyshev coefficients of the log of the property, one row per piece
+        (a single row, or a 1-D array, for one piece over [T_min, T_max]).
+    breaks : numpy.ndarray, optional
+        Piece boundaries [K], ``T_min`` first and ``T_max`` last; one more
+        than the rows of ``coefficients``.
+    max_error : float
+        Largest relative deviation from the model found when the curve was
+        verified (at the midpoints between the nodes of every piece) [-].
+
+    Notes
+    -----
+    The arrays are stored as read-only copies, so no caller can change a
+    curve that other calls share.
 
     """
 
@@ -84,14 +119,57 @@ class PropertyCurve:
     T_min: float
     T_max: float
     coefficients: FloatArray
+    breaks: FloatArray | None = None
+    max_error: float = 0.0
+
+    def __post_init__(self) -> None:
+        coef = np.atleast_2d(np.asarray(self.coefficients, dtype=float))
+        breaks = (
+            np.array([self.T_min, self.T_max], dtype=float)
+            if self.breaks is None
+            else np.asarray(self.breaks, dtype=float)
+        )
+        if breaks.ndim != 1 or breaks.size != coef.shape[0] + 1 or np.any(np.diff(breaks) <= 0):
+            raise InputValueError(
+                f"PropertyCurve {self.quantity!r}: breaks must rise strictly and number one more "
+                f"than the rows of coefficients (got {breaks.size} breaks for {coef.shape[0]} rows)"
+            )
+        object.__setattr__(self, "coefficients", _readonly(coef))
+        object.__setattr__(self, "breaks", _readonly(breaks))
+
+    @property
+    def pieces(self) -> int:
+        """Number of polynomial pieces [-]."""
+        return int(self.coefficients.shape[0])
 
     @guard
     def __call__(self, T: ArrayLike) -> FloatOrArray:
         """Evaluate at temperatures ``T`` [K]; returns values in :attr:`unit`."""
         Tv = check_positive("T", T)
         self.check_range(Tv)
-        x = (2.0 * Tv - (self.T_min + self.T_max)) / (self.T_max - self.T_min)
-        return finish(np.exp(_cheb.chebval(x, self.coefficients)))
+        return finish(np.exp(self._log(Tv)))
+
+    def _log(self, T: FloatOrArray) -> FloatOrArray:
+        coef = self.coefficients
+        b = self.breaks
+        assert b is not None
+        if coef.shape[0] == 1:
+            x = (2.0 * T - (b[0] + b[1])) / (b[1] - b[0])
+            return _cheb.chebval(x, coef[0])  # type: ignore[no-any-return]
+        if isinstance(T, float):
+            i = min(max(bisect.bisect_right(b.tolist(), T) - 1, 0), coef.shape[0] - 1)
+            x = (2.0 * T - (b[i] + b[i + 1])) / (b[i + 1] - b[i])
+            return float(_cheb.chebval(x, coef[i]))
+        Ta = np.asarray(T, dtype=float)
+        idx = np.clip(np.searchsorted(b, Ta, side="right") - 1, 0, coef.shape[0] - 1)
+        lo, hi = b[idx], b[idx + 1]
+        x = (2.0 * Ta - (lo + hi)) / (hi - lo)
+        # Clenshaw's recurrence with each point's own coefficients, one degree at a time
+        b1 = np.zeros_like(x)
+        b2 = np.zeros_like(x)
+        for j in range(coef.shape[1] - 1, 0, -1):
+            b1, b2 = coef[idx, j] + 2.0 * x * b1 - b2, b1
+        return coef[idx, 0] + x * b1 - b2  # type: ignore[no-any-return]
 
     def check_range(self, T: FloatOrArray) -> None:
         """Raise :class:`OutOfRangeError` if any ``T`` lies outside the curve."""
@@ -105,9 +183,37 @@ class PropertyCurve:
         if bad:
             raise OutOfRangeError(
                 f"T={shown!r} K is outside {self.T_min:.2f}-{self.T_max:.2f} K, the range of the "
-                f"{self.quantity} model ({self.source}); pass T within that range or supply the "
-                "property yourself"
+                f"{self.quantity} model ({self.source}); pass T within that range"
             )
+
+
+class _ModelFailedError(Exception):
+    """A database model could not be evaluated or interpolated (internal; never reaches users)."""
+
+
+def _sample(func: Callable[[float], float], T: FloatArray, what: str) -> FloatArray:
+    try:
+        values = np.array([func(float(t)) for t in T], dtype=float)
+    except Exception as exc:  # a database model failing is a missing model, not a user error
+        raise _ModelFailedError(f"{what} fails to evaluate ({type(exc).__name__}: {exc})") from None
+    if not np.all(np.isfinite(values)) or np.any(values <= 0.0):
+        raise _ModelFailedError(f"{what} gives non-positive or non-finite values")
+    return values
+
+
+def _fit_piece(func: Callable[[float], float], lo: float, hi: float, what: str) -> tuple[FloatArray, float]:
+    mid, half = 0.5 * (lo + hi), 0.5 * (hi - lo)
+    worst = math.inf
+    coef: FloatArray = np.zeros(1)
+    for n in _NODES:
+        x = _cheb.chebpts1(n)
+        coef = np.asarray(_cheb.chebfit(x, np.log(_sample(func, mid + half * x, what)), n - 1), dtype=float)
+        xm = np.cos(np.pi * np.arange(1, n) / n)  # between the nodes
+        exact = _sample(func, mid + half * xm, what)
+        worst = float(np.max(np.abs(np.exp(_cheb.chebval(xm, coef)) / exact - 1.0)))
+        if worst < INTERPOLATION_RTOL:
+            break
+    return coef, worst
 
 
 def _fit(
@@ -118,47 +224,116 @@ def _fit(
     T_min: float,
     T_max: float,
 ) -> PropertyCurve:
-    """Interpolate ``func`` (positive) in log space, doubling nodes until accurate."""
+    """Interpolate ``func`` (positive) in log space, splitting the range where needed.
+
+    Each piece takes 12, 24 or 48 Chebyshev nodes; a piece that does not
+    reach :data:`INTERPOLATION_RTOL` is halved, down to ``2**-18`` of the
+    range, where :data:`KINK_RTOL` is accepted (the kinks of tabulated and
+    spline models).  Where even that fails in the upper half of the range
+    (a singular slope at the top), the curve ends below the failing piece.
+    The worst deviation found is kept as ``max_error``.
+    """
+    what = f"the {quantity} model ({source})"
     if not (T_max > T_min):
-        raise OutOfRangeError(f"the {quantity} model ({source}) covers no temperature range")
-    mid = 0.5 * (T_min + T_max)
-    half = 0.5 * (T_max - T_min)
-    worst = math.inf
-    for n in (16, 32, 64, 128, 256):
-        x = _cheb.chebpts1(n)
-        values = np.array([func(mid + half * xi) for xi in x])
-        if not np.all(np.isfinite(values)) or np.any(values <= 0.0):
-            raise OutOfRangeError(
-                f"the {quantity} model ({source}) gives non-positive values within "
-                f"{T_min:.2f}-{T_max:.2f} K; supply the property yourself"
+        raise _ModelFailedError(f"{what} covers no temperature range")
+    pieces: list[tuple[float, float, FloatArray]] = []
+    worst_all = 0.0
+    todo = [(T_min, T_max, 0)]
+    while todo:
+        lo, hi, depth = todo.pop()
+        coef, worst = _fit_piece(func, lo, hi, what)
+        if worst >= INTERPOLATION_RTOL and depth < _MAX_DEPTH:
+            m = 0.5 * (lo + hi)
+            todo += [(m, hi, depth + 1), (lo, m, depth + 1)]  # left half is fitted first
+            continue
+        if worst >= KINK_RTOL:
+            if pieces and lo > 0.5 * (T_min + T_max):
+                # a singular slope at the top of the model's range (a liquid volume whose own
+                # critical point lies there): the curve stops where it is still exact
+                T_max = lo
+                break
+            raise _ModelFailedError(
+                f"{what} could not be interpolated to {KINK_RTOL:g} (reached {worst:.1e})"
             )
-        coef = _cheb.chebfit(x, np.log(values), n - 1)
-        # check at points between the nodes
-        xm = np.cos(np.pi * np.arange(1, n) / n)
-        exact = np.array([func(mid + half * xi) for xi in xm])
-        approx = np.exp(_cheb.chebval(xm, coef))
-        worst = float(np.max(np.abs(approx / exact - 1.0)))
-        if worst < INTERPOLATION_RTOL:
-            return PropertyCurve(quantity, unit, source, T_min, T_max, coef)
-    raise OutOfRangeError(
-        f"the {quantity} model ({source}) could not be interpolated to "
-        f"{INTERPOLATION_RTOL:g} (reached {worst:.1e}); supply the property yourself"
-    )
+        worst_all = max(worst_all, worst)
+        pieces.append((lo, hi, coef))
+    width = max(c.size for _, _, c in pieces)
+    rows = np.zeros((len(pieces), width))
+    for i, (_, _, c) in enumerate(pieces):
+        rows[i, : c.size] = c
+    breaks = np.array([p[0] for p in pieces] + [pieces[-1][1]])
+    return PropertyCurve(quantity, unit, source, T_min, T_max, rows, breaks, worst_all)
+
+
+#: thermo methods never used: their availability depends on an optional package, so results
+#: would differ between installations.
+_EXCLUDED_METHODS = frozenset({"COOLPROP"})
+
+
+def _ranked(prop: Any) -> list[str]:
+    """Thermo's methods for ``prop``: its own choice, then its ranking, then any others."""
+    available = set(getattr(prop, "all_methods", ())) - _EXCLUDED_METHODS
+    first = [prop.method] if prop.method in available else []
+    order = first + [m for m in type(prop).ranked_methods if m in available and m not in first]
+    return order + sorted(available - set(order), key=str)
 
 
 def _thermo_curve(
-    prop: Any, quantity: str, unit: str, scale: float, T_low: float, T_high: float
+    prop: Any,
+    quantity: str,
+    unit: str,
+    T_low: float,
+    T_high: float,
+    core: tuple[float, float],
 ) -> PropertyCurve:
-    method = prop.method
-    if method is None:
-        raise MissingConstantError(f"thermo has no model for the {quantity}; supply the property yourself")
-    lo, hi = prop.T_limits[method]
-    lo, hi = max(lo, T_low), min(hi, T_high)
+    """Fit the best of thermo's methods for ``prop`` over [T_low, T_high].
 
-    def f(T: float) -> float:
-        return float(prop.calculate(T, method)) * scale
+    thermo's own choice and then its ranking decide, among the methods whose
+    range covers the ``core`` interval (where the fluid is most often used;
+    for liquids a single reference temperature, so that a method fitted to
+    data is not passed over for a wider-ranging estimate); when none covers
+    it, the method covering most of it is taken.  A method
+    that fails to evaluate or to interpolate is skipped for the next.  The
+    curve spans the chosen method's range within [T_low, T_high].
+    """
+    methods = _ranked(prop)
+    if not methods:
+        raise MissingConstantError(f"thermo has no model for the {quantity}")
+    c_lo, c_hi = max(core[0], T_low), min(core[1], T_high)
 
-    return _fit(quantity, unit, f"thermo {type(prop).__name__}, method {method}", f, lo, hi)
+    def clipped(m: str) -> tuple[float, float]:
+        lo, hi = prop.T_limits.get(m, (0.0, math.inf))
+        return max(float(lo), T_low), min(float(hi), T_high)
+
+    def coverage(m: str) -> float:
+        lo, hi = clipped(m)
+        if c_hi <= c_lo:  # a single reference temperature
+            return float(lo <= c_lo <= hi and hi > lo)
+        return max(0.0, min(hi, c_hi) - max(lo, c_lo)) / (c_hi - c_lo)
+
+    order = sorted(methods, key=lambda m: -coverage(m))  # a stable sort keeps thermo's order
+    reasons: list[str] = []
+    for m in order:
+        lo, hi = clipped(m)
+
+        def f(T: float, m: str = m) -> float:
+            return float(prop.calculate(T, m))
+
+        try:
+            return _fit(quantity, unit, f"thermo {type(prop).__name__}, method {m}", f, lo, hi)
+        except _ModelFailedError as exc:
+            reasons.append(str(exc))
+    raise MissingConstantError(
+        f"none of thermo's models for the {quantity} can be used: " + "; ".join(reasons)
+    )
+
+
+def _liquid_core(sp: Species) -> tuple[float, float]:
+    """Return a solvent's reference temperature: 25 C, or the nearest point of its liquid range [K]."""
+    lo = (sp.Tm or 0.0) + 1.0
+    hi = (sp.Tb if sp.Tb is not None else math.inf) - 1.0
+    T_ref = min(max(298.15, lo), hi) if hi > lo else 298.15
+    return T_ref, T_ref
 
 
 def _thermo_kwargs(sp: Species) -> dict[str, Any]:
@@ -302,7 +477,7 @@ class LiquidModel:
         return curve
 
 
-@guard
+@guard(check_output=False)  # verified curves; walking the species would load it all
 def gas_model(gas: str | Species) -> GasModel:
     """Resolve the carrier-gas property models of ``gas`` (cached per species).
 
@@ -338,7 +513,7 @@ def gas_model(gas: str | Species) -> GasModel:
     return _gas_model(species(gas))
 
 
-@guard
+@guard(check_output=False)  # verified curves; walking the species would load it all
 def liquid_model(liquid: str | Species) -> LiquidModel:
     """Resolve the solvent-liquid property models of ``liquid`` (cached per species).
 
@@ -376,8 +551,19 @@ def liquid_model(liquid: str | Species) -> LiquidModel:
 
 @functools.lru_cache(maxsize=128)
 def _gas_model(sp: Species) -> GasModel:
-    with quiet():
-        return _build_gas_model(sp)
+    key = _model_key(sp)
+    cached = load_curves("gas", key)
+    if cached is not None:
+        return GasModel(species=sp, **cached)
+    with loading(), thermo_models():
+        model = _build_gas_model(sp)
+    store_curves("gas", key, {"mu": model.mu, "k": model.k, "cp_molar": model.cp_molar})
+    return model
+
+
+def _model_key(sp: Species) -> tuple[Any, ...]:
+    """Everything a model's curves depend on: the species' identity and the constants given to thermo."""
+    return (sp.CAS or sp.name, sp.molar_mass, sp.Tb, sp.Tm, sp.Tc, sp.Pc, sp.Vc, sp.omega, sp.dipole)
 
 
 def _build_gas_model(sp: Species) -> GasModel:
@@ -405,11 +591,13 @@ def _build_gas_model(sp: Species) -> GasModel:
         dipole=dip,
     )
     name = f"gaseous {sp.name}"
+    lo, hi = GAS_T_BOUNDS
+    anchor = (max(273.15, sp.Tb or 0.0), 573.15)
     return GasModel(
         species=sp,
-        mu=_thermo_curve(mu, f"viscosity of {name}", "Pa s", 1.0, 0.0, math.inf),
-        k=_thermo_curve(k, f"thermal conductivity of {name}", "W/(m K)", 1.0, 0.0, math.inf),
-        cp_molar=_thermo_curve(cp, f"heat capacity of {name}", "J/(mol K)", 1.0, 0.0, math.inf),
+        mu=_thermo_curve(mu, f"viscosity of {name}", "Pa s", lo, hi, anchor),
+        k=_thermo_curve(k, f"thermal conductivity of {name}", "W/(m K)", lo, hi, anchor),
+        cp_molar=_thermo_curve(cp, f"heat capacity of {name}", "J/(mol K)", lo, hi, anchor),
     )
 
 
@@ -434,18 +622,28 @@ def _air_model(sp: Species) -> GasModel:
     def cp(T: float) -> float:
         return sum(y * float(p.cp_molar(T)) for y, p in zip(ys, parts, strict=True))
 
-    return GasModel(
-        species=sp,
-        mu=_fit("viscosity of air", "Pa s", "Wilke rule; " + src, mu, lo, hi),
-        k=_fit("thermal conductivity of air", "W/(m K)", "Wassiljewa rule; " + src, k, lo, hi),
-        cp_molar=_fit("heat capacity of air", "J/(mol K)", "mole average; " + src, cp, lo, hi),
-    )
+    try:
+        return GasModel(
+            species=sp,
+            mu=_fit("viscosity of air", "Pa s", "Wilke rule; " + src, mu, lo, hi),
+            k=_fit("thermal conductivity of air", "W/(m K)", "Wassiljewa rule; " + src, k, lo, hi),
+            cp_molar=_fit("heat capacity of air", "J/(mol K)", "mole average; " + src, cp, lo, hi),
+        )
+    except _ModelFailedError as exc:  # pragma: no cover - the component models are verified
+        raise MissingConstantError(f"the air model cannot be built: {exc}") from None
 
 
 @functools.lru_cache(maxsize=128)
 def _liquid_model(sp: Species) -> LiquidModel:
-    with quiet():
-        return _build_liquid_model(sp)
+    key = _model_key(sp)
+    cached = load_curves("liquid", key)
+    if cached is not None:
+        return LiquidModel(species=sp, **cached)
+    with loading(), thermo_models():
+        model = _build_liquid_model(sp)
+    names = ("molar_volume", "mu", "k", "cp_molar", "psat", "hvap")
+    store_curves("liquid", key, {n: getattr(model, n) for n in names})
+    return model
 
 
 def _build_liquid_model(sp: Species) -> LiquidModel:
@@ -455,15 +653,19 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
             "pass the solvent viscosity (and other properties) yourself"
         )
     from thermo import (
+        EnthalpyVaporization,
+        HeatCapacityGas,
         HeatCapacityLiquid,
         ThermalConductivityLiquid,
+        VaporPressure,
         ViscosityLiquid,
         VolumeLiquid,
     )
 
     kw = _thermo_kwargs(sp)
     T_low = sp.Tm if sp.Tm is not None else 0.0
-    T_high = sp.Tc if sp.Tc is not None else math.inf
+    T_crit = sp.Tc if sp.Tc is not None else math.inf
+    T_high = LIQUID_TR_MAX * T_crit
     dip = None if sp.dipole is None else sp.dipole / DEBYE
     vl = VolumeLiquid(
         CASRN=kw["CASRN"],
@@ -481,21 +683,22 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
     k = ThermalConductivityLiquid(
         CASRN=kw["CASRN"], MW=kw["MW"], Tm=sp.Tm, Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, omega=sp.omega
     )
-    cp = HeatCapacityLiquid(CASRN=kw["CASRN"], MW=kw["MW"], Tc=sp.Tc, omega=sp.omega)
-    from thermo import EnthalpyVaporization, VaporPressure
-
+    cpg = HeatCapacityGas(CASRN=kw["CASRN"], MW=kw["MW"])
+    cp = HeatCapacityLiquid(
+        CASRN=kw["CASRN"], MW=kw["MW"], Tc=sp.Tc, omega=sp.omega, Cpgm=cpg.T_dependent_property
+    )
     vp = VaporPressure(CASRN=kw["CASRN"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, omega=sp.omega)
     hv = EnthalpyVaporization(CASRN=kw["CASRN"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, omega=sp.omega)
     name = f"liquid {sp.name}"
-    T_hv_high = T_high if not math.isfinite(T_high) else T_high * 0.995  # Hvap -> 0 at Tc
+    anchor = _liquid_core(sp)
     return LiquidModel(
         species=sp,
-        molar_volume=_thermo_curve(vl, f"molar volume of {name}", "m^3/mol", 1.0, T_low, T_high),
-        mu=_thermo_curve(mu, f"viscosity of {name}", "Pa s", 1.0, T_low, T_high),
-        k=_thermo_curve(k, f"thermal conductivity of {name}", "W/(m K)", 1.0, T_low, T_high),
-        cp_molar=_thermo_curve(cp, f"heat capacity of {name}", "J/(mol K)", 1.0, T_low, T_high),
-        psat=_optional_curve(vp, f"vapour pressure of {name}", "Pa", T_low, T_high),
-        hvap=_optional_curve(hv, f"enthalpy of vaporisation of {name}", "J/mol", T_low, T_hv_high),
+        molar_volume=_thermo_curve(vl, f"molar volume of {name}", "m^3/mol", T_low, T_high, anchor),
+        mu=_thermo_curve(mu, f"viscosity of {name}", "Pa s", T_low, T_crit, anchor),
+        k=_thermo_curve(k, f"thermal conductivity of {name}", "W/(m K)", T_low, T_crit, anchor),
+        cp_molar=_thermo_curve(cp, f"heat capacity of {name}", "J/(mol K)", T_low, T_high, anchor),
+        psat=_optional_curve(vp, f"vapour pressure of {name}", "Pa", T_low, T_crit, anchor),
+        hvap=_optional_curve(hv, f"enthalpy of vaporisation of {name}", "J/mol", T_low, T_high, anchor),
     )
 
 
@@ -513,19 +716,25 @@ def _surface_tension(sp: Species) -> PropertyCurve | None:
     T_low = sp.Tm if sp.Tm is not None else 0.0
     T_high = sp.Tc if sp.Tc is not None else math.inf
     top = T_high if not math.isfinite(T_high) else T_low + 0.9 * (T_high - T_low)
-    with quiet(), np.errstate(over="ignore", under="ignore", invalid="ignore", divide="ignore"):
+    with (
+        loading(),
+        thermo_models(),
+        np.errstate(over="ignore", under="ignore", invalid="ignore", divide="ignore"),
+    ):
         st = SurfaceTension(
             CASRN=kw["CASRN"], MW=kw["MW"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc, omega=sp.omega
         )
-        return _optional_curve(st, f"surface tension of liquid {sp.name}", "N/m", T_low, top)
+        return _optional_curve(
+            st, f"surface tension of liquid {sp.name}", "N/m", T_low, top, _liquid_core(sp)
+        )
 
 
-def _optional_curve(prop: Any, quantity: str, unit: str, T_low: float, T_high: float) -> PropertyCurve | None:
-    if prop.method is None:
-        return None
+def _optional_curve(
+    prop: Any, quantity: str, unit: str, T_low: float, T_high: float, anchor: tuple[float, float]
+) -> PropertyCurve | None:
     try:
-        return _thermo_curve(prop, quantity, unit, 1.0, T_low, T_high)
-    except (OutOfRangeError, MissingConstantError):
+        return _thermo_curve(prop, quantity, unit, T_low, T_high, anchor)
+    except MissingConstantError:
         return None
 
 
@@ -542,7 +751,9 @@ def parachor(liquid: str | Species) -> float:
     evaluated by ``chemicals.Parachor`` with ``thermo``'s surface-tension
     and liquid-volume models at 298.15 K, or at the normal boiling point
     for species that are not liquid at 298.15 K (the vapour density is
-    neglected).  A user-supplied ``Species.parachor`` is returned as is.
+    neglected).  A user-supplied ``Species.parachor`` is returned as is;
+    for a hand-built species, or one without surface-tension data, the
+    parachor is estimated from its structure by :func:`quayle_parachor`.
 
     Parameters
     ----------
@@ -576,18 +787,29 @@ def parachor(liquid: str | Species) -> float:
 
 @functools.lru_cache(maxsize=256)
 def _parachor(sp: Species) -> float:
-    with quiet():
+    with loading(), thermo_models():
         return _compute_parachor(sp)
 
 
 def _compute_parachor(sp: Species) -> float:
     if sp.parachor is not None:
         return sp.parachor
-    if not sp.CAS:
-        raise MissingConstantError(
-            f"species {sp.name!r} has no CAS number and no parachor; supply "
-            "Species(..., parachor=...) [N^0.25 m^2.75/mol]"
-        )
+    measured = _thermo_parachor(sp) if sp.CAS else None
+    if measured is not None:
+        return measured
+    if sp.atoms:  # a hand-built species, or one thermo lacks the data for: from structure
+        from ._species import _molecule
+
+        readable = sp.smiles if sp.smiles and _molecule(sp.smiles) is not None else None
+        return quayle_parachor(dict(sp.atoms), readable)
+    raise MissingConstantError(
+        f"species {sp.name!r} has no parachor, no surface-tension data and no formula or SMILES "
+        "to estimate one from; supply Species(..., parachor=...) [N^0.25 m^2.75/mol] or its formula"
+    )
+
+
+def _thermo_parachor(sp: Species) -> float | None:
+    """Parachor from thermo's surface tension and liquid density, or None without the data."""
     from chemicals import Parachor
     from thermo import SurfaceTension, VolumeLiquid
 
@@ -597,25 +819,143 @@ def _compute_parachor(sp: Species) -> float:
     )
     vl = VolumeLiquid(CASRN=kw["CASRN"], MW=kw["MW"], Tb=sp.Tb, Tc=sp.Tc, Pc=sp.Pc, Vc=sp.Vc, omega=sp.omega)
     if st.method is None or vl.method is None:
-        raise MissingConstantError(
-            f"thermo has no surface tension or liquid density for {sp.name!r}, so its parachor "
-            "is unknown; supply Species(..., parachor=...) [N^0.25 m^2.75/mol]"
-        )
+        return None
     lo1, hi1 = st.T_limits[st.method]
     lo2, hi2 = vl.T_limits[vl.method]
     candidates = [_PARACHOR_T] + ([sp.Tb] if sp.Tb is not None else [])
     candidates.append(0.5 * (max(lo1, lo2) + min(hi1, hi2)))
     for T in candidates:
         if (sp.Tm is None or sp.Tm < T) and max(lo1, lo2) <= T <= min(hi1, hi2):
-            sigma = float(st.calculate(T, st.method))
-            rho = sp.molar_mass / float(vl.calculate(T, vl.method))
-            value = float(Parachor(sp.molar_mass * 1000.0, rho, 0.0, sigma))
+            try:
+                sigma = float(st.calculate(T, st.method))
+                rho = sp.molar_mass / float(vl.calculate(T, vl.method))
+                value = float(Parachor(sp.molar_mass * 1000.0, rho, 0.0, sigma))
+            except Exception:  # a database model failing is missing data, not a user error
+                continue
             if math.isfinite(value) and value > 0:
                 return value
-    raise MissingConstantError(
-        f"no temperature found at which thermo models both the surface tension and density of "
-        f"{sp.name!r}; supply Species(..., parachor=...) [N^0.25 m^2.75/mol]"
-    )
+    return None
+
+
+#: Tabulated cgs parachor [cm^3 g^0.25 s^-0.5 mol^-1] per SI parachor [N^0.25 m^2.75/mol].
+PARACHOR_CGS_PER_SI = 5.623413e6
+
+
+@guard
+def quayle_parachor(atoms: Mapping[str, int], smiles: str | None = None) -> float:
+    """Parachor estimated from structure by Quayle's group contributions.
+
+    .. math:: \\mathcal{P} = \\sum_i n_i P_i + \\sum_{\\mathrm{bonds}} P_b + \\sum_{\\mathrm{rings}} P_r
+
+    Parameters
+    ----------
+    atoms : mapping of str to int
+        Atom counts [-], hydrogens included, e.g. ``{"C": 6, "H": 6}``.
+    smiles : str, optional
+        SMILES string; when given, double and triple bonds, ester, acid and
+        nitro groups and ring closures get their increments.  Without it,
+        each degree of unsaturation of the formula counts as one internal
+        double bond.
+
+    Returns
+    -------
+    float
+        Parachor [N^0.25 m^2.75/mol] (multiply by :data:`PARACHOR_CGS_PER_SI`
+        for the tabulated cgs form).
+
+    Raises
+    ------
+    MissingConstantError
+        If an element has no published increment.
+
+    Notes
+    -----
+    Quayle's increments reproduce measured parachors of ordinary organic
+    liquids to about 2 % (Poling et al. 2001, Section 12-3).  Branching
+    corrections are not applied (they change the value by under 1 %);
+    aromatic rings are counted as their Kekule double bonds.
+
+    References
+    ----------
+    Quayle, O. R. (1953). The parachors of organic compounds. *Chem. Rev.*
+    53, 439-589. https://doi.org/10.1021/cr60166a003
+
+    Poling, B. E., Prausnitz, J. M., & O'Connell, J. P. (2001). *The
+    Properties of Gases and Liquids*, 5th ed., Section 12-3.
+
+    Examples
+    --------
+    >>> round(quayle_parachor({"C": 6, "H": 6}, "c1ccccc1") * PARACHOR_CGS_PER_SI, 1)
+    205.1
+
+    """
+    from ._species import check_structure
+
+    mol = check_structure(atoms, smiles)
+    inc = data.QUAYLE_PARACHOR_ATOMS
+    bond = data.QUAYLE_PARACHOR_BONDS
+    total = 0.0
+    for el, n in atoms.items():
+        if el not in inc:
+            raise MissingConstantError(
+                f"Quayle's parachor method has no increment for element {el!r}; supply "
+                "Species(..., parachor=...) [N^0.25 m^2.75/mol]"
+            )
+        total += n * inc[el]
+    if mol is None:
+        halogens = sum(atoms.get(x, 0) for x in ("F", "Cl", "Br", "I"))
+        unsaturation = atoms.get("C", 0) - (atoms.get("H", 0) + halogens) / 2 + atoms.get("N", 0) / 2 + 1
+        total += max(0.0, unsaturation) * bond["double_internal"]
+        return total / PARACHOR_CGS_PER_SI
+    total += _structure_parachor(mol)
+    return total / PARACHOR_CGS_PER_SI
+
+
+def _structure_parachor(mol: Molecule) -> float:
+    """Bond, group and ring increments of Quayle's method for one molecule (cgs units)."""
+    bond = data.QUAYLE_PARACHOR_BONDS
+    el = mol.elements
+    total = 0.0
+    handled: set[tuple[int, int]] = set()
+    for i, e in enumerate(el):
+        nbrs = mol.neighbours(i)
+        if e == "C":
+            dbl_o = [j for j, o in nbrs if el[j] == "O" and o == 2.0]
+            single_o = [j for j, o in nbrs if el[j] == "O" and o == 1.0]
+            if dbl_o and single_o:
+                oh = [j for j in single_o if len(mol.neighbours(j)) == 1]
+                if oh:  # -COOH: the group value replaces C + 2 O + H
+                    total += bond["COOH"] - 9.0 - 2 * 20.0 - 15.5
+                else:  # ester -COO-: both oxygens as one increment
+                    total += bond["ester_O2"] - 2 * 20.0
+                handled.add(tuple(sorted((i, dbl_o[0]))))  # type: ignore[arg-type]
+        if e == "N":
+            oxy = [j for j, _ in nbrs if el[j] == "O"]
+            if len(oxy) == 2:  # nitro: the group value replaces N + 2 O
+                total += bond["NO2"] - 17.5 - 2 * 20.0
+                for j in oxy:
+                    handled.add(tuple(sorted((i, j))))  # type: ignore[arg-type]
+    aromatic_bonds = 0
+    in_aromatic_ring = {x for ring in mol.rings if ring.aromatic for x in ring.atoms}
+    for (a, b), order in mol.bonds.items():
+        if (a, b) in handled:
+            continue
+        pair = {el[a], el[b]}
+        if order == 1.5:
+            aromatic_bonds += 1
+        elif order == 2.0:
+            if pair & {"S", "P"} and "O" in pair:
+                total += bond["semipolar"]
+            else:
+                terminal = any(mol.hydrogens(x) >= 2 or len(mol.neighbours(x)) == 1 for x in (a, b))
+                aromatic = a in in_aromatic_ring and b in in_aromatic_ring  # Kekule form
+                total += bond["double_terminal"] if terminal or aromatic else bond["double_internal"]
+        elif order >= 3.0:
+            total += bond["triple"]
+    total += (aromatic_bonds // 2) * bond["double_terminal"]
+    for ring in mol.rings:
+        total += data.QUAYLE_PARACHOR_RINGS.get(ring.size, 0.0)
+    return total
 
 
 _HENRY_TABLES = ("Sander T dep", "ChemSep Henry", "Sander Const")
@@ -704,7 +1044,7 @@ def _henry_coefficients(a: Species, b: Species) -> tuple[float, ...]:
         raise MissingConstantError(
             f"no Henry's-law data without CAS numbers ({a.name!r} in {b.name!r}); pass the constant yourself"
         )
-    with quiet():
+    with loading():
         from thermo.interaction_parameters import IPDB
 
         for table in _HENRY_TABLES:

@@ -15,22 +15,75 @@ they are imported on first use, so ``import masstransfer`` stays light.
 from __future__ import annotations
 
 import dataclasses
+import difflib
 import enum
 import functools
 import math
 import re
-from collections.abc import Mapping
+from collections.abc import Iterator, Mapping
 from dataclasses import dataclass, field
-from typing import Any
+from typing import TYPE_CHECKING, Any, NamedTuple, TypeVar
 
 from .. import _tables as data
-from .._validation import guard
+from .._validation import guard, warn_caller
 from ..constants import DEBYE
-from ..errors import InputTypeError, InputValueError, MissingConstantError, UnknownSpeciesError
-from ._databases import quiet
+from ..errors import (
+    AmbiguousSpeciesWarning,
+    InputTypeError,
+    InputValueError,
+    MissingConstantError,
+    UnknownSpeciesError,
+)
+from . import _names
+from ._databases import loading, thermo_models
 from ._structure import Molecule, parse_smiles
 
-__all__ = ["Origin", "Species", "le_bas_volume", "species"]
+__all__ = ["FrozenMap", "Origin", "Species", "le_bas_volume", "species"]
+
+_K = TypeVar("_K")
+_V = TypeVar("_V")
+
+
+class FrozenMap(Mapping[_K, _V]):
+    """A read-only, hashable, picklable mapping (the atoms and sources of a :class:`Species`)."""
+
+    __slots__ = ("_data", "_hash")
+    _data: dict[_K, _V]
+    _hash: int | None
+
+    def __init__(self, data: Mapping[_K, _V] | None = None) -> None:
+        object.__setattr__(self, "_data", dict(data or {}))
+        object.__setattr__(self, "_hash", None)
+
+    def __getitem__(self, key: _K) -> _V:
+        return self._data[key]
+
+    def __iter__(self) -> Iterator[_K]:
+        return iter(self._data)
+
+    def __len__(self) -> int:
+        return len(self._data)
+
+    def __setattr__(self, name: str, value: Any) -> None:
+        raise AttributeError(f"{type(self).__name__} is read-only")
+
+    def __hash__(self) -> int:
+        h = self._hash
+        if h is None:
+            h = hash(frozenset(self._data.items()))
+            object.__setattr__(self, "_hash", h)
+        return int(h)
+
+    def __eq__(self, other: object) -> bool:
+        if isinstance(other, Mapping):
+            return bool(self._data == dict(other))
+        return NotImplemented
+
+    def __repr__(self) -> str:
+        return repr(self._data)
+
+    def __reduce__(self) -> tuple[Any, ...]:
+        return (type(self), (self._data,))
 
 
 _CAS_PATTERN = re.compile(r"\d{2,7}-\d{2}-\d")
@@ -133,7 +186,7 @@ class Species:
     CAS: str | None = None
     formula: str | None = None
     smiles: str | None = None
-    atoms: Mapping[str, int] = field(default_factory=dict, compare=False, hash=False)
+    atoms: Mapping[str, int] = field(default_factory=FrozenMap)
     Tb: float | None = None
     Tm: float | None = None
     Tc: float | None = None
@@ -146,8 +199,8 @@ class Species:
     Vb: float | None = None
     fuller_volume: float | None = None
     parachor: float | None = None
-    sources: Mapping[str, str] = field(default_factory=dict, compare=False, hash=False)
-    origins: Mapping[str, Origin] = field(default_factory=dict, hash=False)
+    sources: Mapping[str, str] = field(default_factory=FrozenMap, compare=False)
+    origins: Mapping[str, Origin] = field(default_factory=FrozenMap)
 
     def __post_init__(self) -> None:
         if not isinstance(self.name, str):
@@ -200,19 +253,65 @@ class Species:
                 f"Species {self.name!r}: sigma={self.sigma!r} m is implausible; "
                 "the collision diameter is in metres (multiply angstrom by 1e-10)"
             )
-        if not self.atoms and self.formula:
-            from chemicals.elements import simple_formula_parser
-
+        if self.atoms is None or not isinstance(self.atoms, Mapping):
+            raise InputTypeError(
+                f"Species {self.name!r}: atoms={self.atoms!r} must be a mapping of element to count"
+            )
+        atoms = dict(self.atoms)
+        if not atoms and self.formula:
+            atoms = _formula_atoms(self.formula)
+        if not atoms and self.smiles:
+            mol = _molecule(self.smiles)
+            atoms = mol.atom_counts() if mol is not None else {}
+        sources = dict(self.sources)
+        object.__setattr__(self, "atoms", FrozenMap(atoms))
+        if self.formula is None and atoms:
+            object.__setattr__(self, "formula", _hill(atoms))
+        if self.Vb is None and atoms:  # a hand-built species from a formula or SMILES
+            readable = self.smiles if self.smiles and _molecule(self.smiles) is not None else None
             try:
-                counts = simple_formula_parser(self.formula)
-            except Exception:
-                counts = {}
-            object.__setattr__(self, "atoms", dict(counts))
-        object.__setattr__(self, "atoms", dict(self.atoms))
-        object.__setattr__(self, "sources", dict(self.sources))
+                object.__setattr__(self, "Vb", le_bas_volume(atoms, readable))
+                sources["Vb"] = "Le Bas additive volumes, estimated from structure"
+                if "Vb" not in self.origins:
+                    object.__setattr__(self, "origins", {**self.origins, "Vb": Origin.ESTIMATED})
+            except (MissingConstantError, InputValueError):
+                pass
+        object.__setattr__(self, "sources", FrozenMap(sources))
         given = dict(self.origins)
         origins = {n: given.get(n, Origin.USER) for n in _CONSTANT_FIELDS if getattr(self, n) is not None}
-        object.__setattr__(self, "origins", origins)
+        object.__setattr__(self, "origins", FrozenMap(origins))
+
+    def __eq__(self, other: object) -> bool:
+        if self is other:
+            return True
+        if type(other) is not type(self):
+            return NotImplemented
+        return all(
+            getattr(self, f.name) == getattr(other, f.name) for f in dataclasses.fields(self) if f.compare
+        )
+
+    def __hash__(self) -> int:
+        # identity fields only: known without reading any database, and equal for equal species
+        return hash((self.name, self.molar_mass, self.CAS, self.formula, self.smiles, self.atoms))
+
+    if not TYPE_CHECKING:
+
+        def __getattr__(self, name: str) -> Any:
+            # constants of a database species are read on first use (see _lazy_species)
+            d = object.__getattribute__(self, "__dict__")
+            if "_pending" not in d or name.startswith("__"):
+                raise AttributeError(name)
+            _complete(self, stage_a=name in _STAGE_A)
+            if name in d:
+                return d[name]
+            raise AttributeError(name)
+
+    @property
+    def identity(self) -> str:
+        """Name, CAS number, formula and molar mass in one line, for tables and reports."""
+        cas = f"CAS {self.CAS}" if self.CAS else "no CAS number"
+        formula = self.formula or "formula not given"
+        return f"{self.name} ({cas}, {formula}, {self.molar_mass * 1000.0:.2f} g/mol)"
 
     @property
     def molecule(self) -> Molecule | None:
@@ -240,6 +339,62 @@ class Species:
             sources[key] = "user"
             origins[key] = Origin.USER
         return dataclasses.replace(self, sources=sources, origins=origins, **changes)
+
+
+# A database species is created with its identity only and reads its other constants on first
+# use (``__getattr__``).  That needs every field absent from the class itself: the defaults live
+# on in the dataclass fields and the generated ``__init__``.
+for _f in dataclasses.fields(Species):
+    if _f.name in Species.__dict__:
+        delattr(Species, _f.name)
+
+
+def check_structure(atoms: Any, smiles: Any) -> Molecule | None:
+    """Validate atom counts and an optional SMILES string; return the molecule read from it."""
+    from chemicals.elements import periodic_table
+
+    if not isinstance(atoms, Mapping):
+        raise InputTypeError(
+            f"atoms={atoms!r} is a {type(atoms).__name__}; pass a mapping of element to count, "
+            "e.g. {'C': 2, 'H': 6, 'O': 1}"
+        )
+    for el, n in atoms.items():
+        if not isinstance(el, str) or isinstance(n, bool) or not isinstance(n, int):
+            raise InputTypeError(
+                f"atoms={dict(atoms)!r}: each entry must be an element symbol (str) and a whole "
+                f"count (int); got {el!r}: {n!r}"
+            )
+        if el not in periodic_table or n < 0:
+            raise InputValueError(
+                f"atoms={dict(atoms)!r}: {el!r}: {n!r} is not an element symbol with a count of zero or more"
+            )
+    if smiles is None:
+        return None
+    if not isinstance(smiles, str):
+        raise InputTypeError(f"smiles={smiles!r} is a {type(smiles).__name__}; pass a SMILES string or None")
+    mol = _molecule(smiles) if smiles.strip() else None
+    if mol is None or not mol.elements:
+        raise InputValueError(
+            f"smiles={smiles!r} could not be read; pass a plain SMILES string (atoms, bonds, "
+            "branches and ring closures) or omit it"
+        )
+    return mol
+
+
+def _formula_atoms(formula: str) -> dict[str, int]:
+    from chemicals.elements import simple_formula_parser
+
+    try:
+        return {str(k): int(v) for k, v in simple_formula_parser(formula).items()}
+    except Exception:  # an unreadable formula leaves the atoms unknown
+        return {}
+
+
+def _hill(atoms: Mapping[str, int]) -> str:
+    """Hill formula: C, then H, then the other elements alphabetically."""
+    order = [e for e in ("C", "H") if e in atoms and "C" in atoms]
+    order += sorted(e for e in atoms if e not in order)
+    return "".join(f"{e}{atoms[e] if atoms[e] != 1 else ''}" for e in order)
 
 
 @functools.lru_cache(maxsize=256)
@@ -289,7 +444,7 @@ def le_bas_volume(atoms: Mapping[str, int], smiles: str | None = None) -> float:
 
     """
     table = data.LE_BAS_ATOMIC_VOLUMES
-    mol = _molecule(smiles) if smiles else None
+    mol = check_structure(atoms, smiles)
     total = 0.0
     classed: dict[str, int] = {}
     if mol is not None:
@@ -360,7 +515,7 @@ def _chain_length(mol: Molecule, start: int, exclude: int) -> int:
     return len(seen) - 1
 
 
-@guard
+@guard(check_output=False)  # a Species validates its own constants; reading them all would load
 def species(identifier: str | Species) -> Species:
     """Resolve a species by name, CAS number or formula (cached).
 
@@ -419,29 +574,185 @@ def species(identifier: str | Species) -> Species:
             "'toluene' or a CAS number such as '108-88-3', or build it by hand: "
             "masstransfer.Species(name=..., molar_mass=..., ...)"
         )
-    return _resolve(text)
+    known_bad = _UNKNOWN.get(text)
+    if known_bad is not None:  # remembered for the life of the process: a repeat costs nothing
+        raise UnknownSpeciesError(known_bad)
+    try:
+        sp = _resolve(text)
+    except UnknownSpeciesError as exc:
+        if len(_UNKNOWN) >= _UNKNOWN_LIMIT:
+            _UNKNOWN.pop(next(iter(_UNKNOWN)))
+        _UNKNOWN[text] = str(exc)
+        raise
+    alternatives = _names.AMBIGUOUS.get(text.lower())
+    if alternatives is not None:
+        others = ", ".join(f"{n} ({c})" for n, c in alternatives if c != sp.CAS)
+        warn_caller(
+            f"species {text!r} names several substances; it was resolved to {sp.identity}. "
+            f"Others it may mean: {others}. Pass the name or CAS number of the one you mean",
+            AmbiguousSpeciesWarning,
+        )
+    return sp
+
+
+#: Identifiers found to be unknown, with their message (bounded; oldest forgotten first).
+_UNKNOWN: dict[str, str] = {}
+_UNKNOWN_LIMIT = 4096
+
+
+def suggestions(text: str, n: int = 4) -> list[str]:
+    """Everyday names and plant abbreviations close to ``text`` (for error messages)."""
+    vocabulary = {name.lower(): name for name in _names.COMMON_NAMES}
+    vocabulary.update({key.lower(): key for key in _names.ALIASES})
+    hits = difflib.get_close_matches(text.lower(), list(vocabulary), n=n, cutoff=0.75)
+    return [vocabulary[h] for h in hits]
+
+
+def _unknown(text: str, why: str) -> UnknownSpeciesError:
+    close = suggestions(text)
+    hint = f"did you mean {', '.join(repr(c) for c in close)}? " if close else ""
+    return UnknownSpeciesError(
+        f"species {text!r} {why}; {hint}check the spelling, pass a CAS number such as '108-88-3', "
+        "or build it by hand: masstransfer.Species(name=..., molar_mass=... [kg/mol], formula=... "
+        "or smiles=..., and the constants your method needs)"
+    )
 
 
 @functools.lru_cache(maxsize=1024)
 def _resolve(key: str) -> Species:
     if key.lower() in _AIR_NAMES:
         return _air()
-    with quiet():
-        return _lookup(key)
+    alias = _names.ALIASES.get(key.upper())
+    m = _names.CAS_PREFIX.match(key)
+    query = alias or (m.group(1) if m else key)
+    with loading():
+        return _lookup(query, original=key)
 
 
-def _lookup(key: str) -> Species:
+_FORMULA = re.compile(r"(?:[A-Z][a-z]?\d*)+")
+_PLAIN = re.compile(r"[^a-z0-9]")
+
+
+def _norm(text: str) -> str:
+    return _PLAIN.sub("", text.lower())
+
+
+class _Meta(NamedTuple):
+    """What identifies a database species, kept for reading its constants later."""
+
+    CAS: str
+    MW: float
+    formula: str | None
+    smiles: str | None
+    name: str
+
+
+def _lookup(key: str, original: str | None = None) -> Species:
     from chemicals.identifiers import search_chemical
 
-    try:
-        meta = search_chemical(key)
-    except Exception:
-        raise UnknownSpeciesError(
-            f"species {key!r} is not known to the chemicals database; check the spelling or "
-            "pass a CAS number, or build it by hand: masstransfer.Species(name=..., "
-            "molar_mass=... [kg/mol], Tb=..., Vb=..., ...) with the constants your method needs"
-        ) from None
-    return _from_chemicals(meta)
+    shown = original or key
+    meta = None
+    for query in dict.fromkeys((key, key.lower())):  # "N-methyl-2-pyrrolidone" is found lower-cased
+        try:
+            candidate = search_chemical(query)
+        except Exception:
+            continue
+        if _plausible(key, candidate):
+            meta = candidate
+            break
+        if meta is None:
+            meta = candidate  # kept to name it in the error
+    if meta is None:
+        raise _unknown(shown, "is not known to the chemicals database")
+    if not _plausible(key, meta):
+        raise _unknown(
+            shown,
+            f"matched only {meta.common_name!r} (CAS {meta.CASs}, {meta.formula}), whose names do "
+            "not include it, so it was not used",
+        )
+    return _lazy_species(
+        _Meta(
+            CAS=str(meta.CASs),
+            MW=float(meta.MW),
+            formula=meta.formula or None,
+            smiles=meta.smiles or None,
+            name=str(meta.common_name or meta.CASs),
+        )
+    )
+
+
+def _plausible(query: str, meta: Any) -> bool:
+    """Whether a database hit is what the query names: its CAS, formula, or one of its names."""
+    if _CAS_PATTERN.fullmatch(query):
+        return str(meta.CASs) == query
+    lowered = query.lower()
+    if lowered.startswith(("inchi=", "inchikey=", "pubchem=", "smiles=")):
+        return True
+    formula = str(meta.formula or "")
+    charged = any(ch in formula for ch in "+-")
+    words = [w for w in re.split(r"[\s,()-]+", query) if sum(ch.isalpha() for ch in w) >= 2]
+    if len(words) >= 2 and (charged or len(_formula_atoms(formula)) <= 1):
+        return False  # an element, ion or radical for a multi-word name
+    if (
+        _FORMULA.fullmatch(query)
+        and _formula_atoms(query)
+        and _formula_atoms(query) == _formula_atoms(formula)
+    ):
+        return True
+    names = [meta.common_name, meta.iupac_name, *(meta.synonyms or ())]
+    return _norm(query) in {_norm(str(n)) for n in names if n}
+
+
+#: Constants read in the first stage of a database species (``chemicals`` tables only); any
+#: other field not known at creation (the liquid volume, the sources) completes the record.
+_STAGE_A = frozenset(
+    {"Tb", "Tm", "Tc", "Pc", "Vc", "omega", "sigma", "epsilon_k", "dipole", "parachor", "sources", "origins"}
+)
+#: Mappings that the first stage fills without the liquid volume; the second stage replaces them.
+_RESTATED = ("sources", "origins")
+
+
+def _lazy_species(meta: _Meta) -> Species:
+    """Create a database species whose constants are read from the databases on first use.
+
+    ``import masstransfer; gas_diffusivity("toluene", "air", 300.0)`` needs only the formula and
+    structure (Fuller); the critical constants, Lennard-Jones parameters and the liquid volume
+    at the boiling point (``thermo``'s liquid-volume data, the slowest to load) are read from the
+    databases the first time any of them is asked for.  The record behaves as an ordinary frozen
+    :class:`Species` in every other way.
+    """
+    sp = object.__new__(Species)
+    atoms = _formula_atoms(meta.formula) if meta.formula else {}
+    fuller_v = data.FULLER_SPECIAL_VOLUMES.get(meta.CAS)
+    eager: dict[str, Any] = {
+        "name": meta.name,
+        "molar_mass": meta.MW / 1000.0,
+        "CAS": meta.CAS,
+        "formula": meta.formula,
+        "smiles": meta.smiles,
+        "atoms": FrozenMap(atoms),
+        "fuller_volume": fuller_v,
+    }
+    for k, v in eager.items():
+        object.__setattr__(sp, k, v)
+    object.__setattr__(sp, "_pending", meta)
+    return sp
+
+
+def _complete(sp: Species, *, stage_a: bool) -> None:
+    """Read the remaining constants of a lazily created database species (thread-safe)."""
+    with loading():
+        d = object.__getattribute__(sp, "__dict__")
+        meta = d.get("_pending")
+        if meta is None:
+            return
+        full = _from_chemicals(meta, with_vb=not stage_a)
+        names = _STAGE_A if stage_a else [f.name for f in dataclasses.fields(Species)]
+        for name in names:
+            if name not in d or (not stage_a and name in _RESTATED):
+                object.__setattr__(sp, name, getattr(full, name))
+        if all(f.name in d for f in dataclasses.fields(Species)):
+            del d["_pending"]
 
 
 @functools.lru_cache(maxsize=1)
@@ -480,10 +791,10 @@ def _opt(value: Any) -> float | None:
     return v if math.isfinite(v) and v > 0 else None
 
 
-def _from_chemicals(meta: Any) -> Species:
+def _from_chemicals(meta: _Meta, with_vb: bool = True) -> Species:
     import chemicals
 
-    cas: str = meta.CASs
+    cas: str = meta.CAS
     src: dict[str, str] = {}
     mw = float(meta.MW) / 1000.0
     src["molar_mass"] = "chemicals"
@@ -523,22 +834,17 @@ def _from_chemicals(meta: Any) -> Species:
 
     formula = meta.formula
     smiles = meta.smiles or None
-    try:
-        from chemicals.elements import simple_formula_parser
+    atoms = _formula_atoms(formula) if formula else {}
 
-        atoms = dict(simple_formula_parser(formula)) if formula else {}
-    except Exception:
-        atoms = {}
-
-    Vb = _vb_from_thermo(cas, mw, Tb, Tc, Pc, Vc, omega, dipole)
+    Vb = _vb_from_thermo(cas, mw, Tb, Tc, Pc, Vc, omega, dipole) if with_vb else None
     if Vb is not None:
         src["Vb"] = "thermo VolumeLiquid at Tb"
-    elif atoms:
+    elif with_vb and atoms:
         try:
-            Vb = le_bas_volume(atoms, smiles)
+            Vb = le_bas_volume(atoms, smiles if smiles and _molecule(smiles) is not None else None)
             src["Vb"] = "Le Bas additive volumes"
             org["Vb"] = Origin.ESTIMATED
-        except MissingConstantError:
+        except (MissingConstantError, InputValueError):
             Vb = None
 
     fuller_v = data.FULLER_SPECIAL_VOLUMES.get(cas)
@@ -547,7 +853,7 @@ def _from_chemicals(meta: Any) -> Species:
         org["fuller_volume"] = Origin.TABULATED
 
     return Species(
-        name=str(meta.common_name or cas),
+        name=meta.name,
         molar_mass=mw,
         CAS=cas,
         formula=formula,
@@ -633,16 +939,17 @@ def _vb_from_thermo(
     try:
         from thermo import VolumeLiquid
 
-        vl = VolumeLiquid(
-            CASRN=cas,
-            MW=mw * 1000.0,
-            Tb=Tb,
-            Tc=Tc,
-            Pc=Pc,
-            Vc=Vc,
-            omega=omega,
-            dipole=None if dipole is None else dipole / DEBYE,
-        )
+        with thermo_models():
+            vl = VolumeLiquid(
+                CASRN=cas,
+                MW=mw * 1000.0,
+                Tb=Tb,
+                Tc=Tc,
+                Pc=Pc,
+                Vc=Vc,
+                omega=omega,
+                dipole=None if dipole is None else dipole / DEBYE,
+            )
         if vl.method is None:
             return None
         low, high = vl.T_limits[vl.method]

@@ -21,6 +21,11 @@ _TOKEN = re.compile(
 )
 _BOND_ORDER = {"-": 1.0, "=": 2.0, "#": 3.0, "$": 4.0, ":": 1.5, "/": 1.0, "\\": 1.0}
 _BRACKET_ELEMENT = re.compile(r"\[\d*([A-Z][a-z]?|[bcnops]|se|as)")
+_BRACKET_H = re.compile(r"H(\d*)")
+#: Usual valences of the organic subset, lowest first (implicit hydrogens fill up to the first
+#: that the bonds do not exceed); OpenSMILES specification, section 3.1.5 (common practice).
+_VALENCES = {"B": (3,), "C": (4,), "N": (3, 5), "O": (2,), "P": (3, 5), "S": (2, 4, 6),
+             "F": (1,), "Cl": (1,), "Br": (1,), "I": (1,)}  # fmt: skip
 
 
 @dataclass(frozen=True)
@@ -30,6 +35,7 @@ class Ring:
     size: int
     aromatic: bool
     hetero: bool
+    atoms: tuple[int, ...] = ()
 
 
 @dataclass(frozen=True)
@@ -40,6 +46,31 @@ class Molecule:
     aromatic_atoms: tuple[bool, ...]
     bonds: dict[tuple[int, int], float]
     rings: tuple[Ring, ...]
+    #: hydrogens written in a bracket atom (``[nH]``, ``[CH2]``); -1 where they are implicit
+    explicit_h: tuple[int, ...] = ()
+
+    def hydrogens(self, i: int) -> int:
+        """Hydrogens on atom ``i``: written in its bracket, else implied by the usual valence."""
+        if self.explicit_h and self.explicit_h[i] >= 0:
+            return self.explicit_h[i]
+        valences = _VALENCES.get(self.elements[i])
+        if valences is None:
+            return 0
+        bonded = sum(o for _, o in self.neighbours(i))  # aromatic bonds count 1.5
+        for v in valences:
+            if v >= bonded:
+                return round(v - bonded)
+        return 0
+
+    def atom_counts(self) -> dict[str, int]:
+        """Atom counts, hydrogens included (a Hill-order-free mapping)."""
+        counts: dict[str, int] = {}
+        for i, el in enumerate(self.elements):
+            counts[el] = counts.get(el, 0) + 1
+            h = self.hydrogens(i)
+            if h:
+                counts["H"] = counts.get("H", 0) + h
+        return counts
 
     def neighbours(self, i: int) -> list[tuple[int, float]]:
         """Heavy-atom neighbours of atom ``i`` with their bond orders."""
@@ -67,6 +98,7 @@ def parse_smiles(smiles: str) -> Molecule:
     """
     elements: list[str] = []
     aromatic: list[bool] = []
+    explicit_h: list[int] = []
     bonds: dict[tuple[int, int], float] = {}
     closures: list[tuple[int, int]] = []
     open_rings: dict[str, tuple[int, float | None]] = {}
@@ -85,8 +117,11 @@ def parse_smiles(smiles: str) -> Molecule:
                 if em is None:
                     raise ValueError(f"cannot read bracket atom {bracket!r} in {smiles!r}")
                 sym = em.group(1)
+                hm = _BRACKET_H.search(bracket[em.end() :].split("+")[0].split("-")[0])
+                explicit_h.append(0 if hm is None else int(hm.group(1) or 1))
             else:
                 sym = organic or "*"
+                explicit_h.append(-1)
             is_arom = sym.islower()
             elements.append(sym.capitalize() if is_arom else sym)
             aromatic.append(is_arom)
@@ -125,7 +160,7 @@ def parse_smiles(smiles: str) -> Molecule:
     if pos != len(smiles) or open_rings or stack:
         raise ValueError(f"incomplete SMILES {smiles!r}")
     rings = tuple(_ring_for(a, b, elements, aromatic, bonds) for a, b in closures)
-    return Molecule(tuple(elements), tuple(aromatic), bonds, rings)
+    return Molecule(tuple(elements), tuple(aromatic), bonds, rings, tuple(explicit_h))
 
 
 def _ring_for(
@@ -165,4 +200,4 @@ def _ring_for(
     is_aromatic = all(aromatic[i] for i in atoms) or (
         (size == 6 and n_double >= 3) or (size == 5 and hetero and n_double >= 2)
     )
-    return Ring(size=size, aromatic=is_aromatic, hetero=hetero)
+    return Ring(size=size, aromatic=is_aromatic, hetero=hetero, atoms=tuple(sorted(atoms)))

@@ -614,6 +614,8 @@ class TransferCoefficients(FrozenResult):
         The analogy and the diffusivity method used.
     warnings : tuple of str
         Every warning raised on the way.
+    solute_identity, carrier_identity : str
+        The resolved substances: name, CAS number, formula and molar mass.
     user_supplied : tuple of str
         Names of the properties the user supplied (``"rho"``, ``"D"``, ...); the
         others came from the databases.
@@ -645,8 +647,17 @@ class TransferCoefficients(FrozenResult):
     Le: FloatOrArray
     method: str
     warnings: tuple[str, ...]
+    solute_identity: str = ""
+    carrier_identity: str = ""
     user_supplied: tuple[str, ...] = ()
     relative_uncertainty: FloatOrArray | None = None
+
+
+def _carrier_identity(carrier: Any) -> str:
+    """Describe the resolved carrier: one species, or each component of a composition with its fraction."""
+    if is_composition(carrier):
+        return "; ".join(f"{species(n).identity}: {float(y):g}" for n, y in carrier.items())
+    return species(carrier).identity
 
 
 @guard
@@ -886,6 +897,8 @@ def mass_transfer_from_heat(
         Le=finish(Le),
         method=f"Chilton-Colburn analogy (exponent {n_text}); diffusivity by {method}",
         warnings=tuple(dict.fromkeys(message for message, _ in caught)),
+        solute_identity=a.identity,
+        carrier_identity=_carrier_identity(carrier),
         user_supplied=supplied,
         relative_uncertainty=combine((1.0, u_h if np.any(u_h) else None), (exponent, u_D)),
     )

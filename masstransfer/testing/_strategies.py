@@ -20,6 +20,7 @@ solvents liquid at the drawn temperature.
 
 from __future__ import annotations
 
+import functools
 import math
 from dataclasses import dataclass
 from typing import TYPE_CHECKING, Any, Final
@@ -172,7 +173,24 @@ def gas_states(*, arrays: bool = False, max_size: int = 20) -> st.SearchStrategy
     >>> test_positive()
 
     """
+    _warm_gas()
     return _gas_state(arrays, max_size)
+
+
+@functools.lru_cache(maxsize=1)
+def _warm_gas() -> None:
+    """Read every drawn species' constants and carrier models before any draw.
+
+    Species constants are read on first use; doing it here keeps one-off database loads out
+    of the user's test bodies (and out of any deadline they set).
+    """
+    from ..substances._properties import gas_model
+    from ..substances._species import species
+
+    for name in dict.fromkeys((*GAS_SOLUTES, *GAS_CARRIERS)):
+        _ = species(name).sources  # completes the record
+    for carrier in GAS_CARRIERS:
+        gas_model(carrier)
 
 
 def _liquid_ranges() -> dict[str, tuple[float, float]]:
@@ -180,6 +198,8 @@ def _liquid_ranges() -> dict[str, tuple[float, float]]:
     from ..substances._properties import liquid_model
     from ..substances._species import species
 
+    for solute in LIQUID_SOLUTES:  # every constant read now, not inside the user's test body
+        _ = species(solute).sources
     ranges = {}
     for solvent in SOLVENTS:
         model, sp = liquid_model(solvent), species(solvent)

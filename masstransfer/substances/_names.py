@@ -1,0 +1,120 @@
+"""Names people use for substances that the databases do not resolve, or resolve to one of several.
+
+Plant abbreviations, generic names and formulas shared by several compounds.  None of these
+is a published table: every row is common practice in process plants and laboratories, and
+every target is given by CAS number so that the database decides nothing.
+"""
+
+from __future__ import annotations
+
+import re
+from types import MappingProxyType
+from typing import Final
+
+__all__ = ["ALIASES", "AMBIGUOUS", "CAS_PREFIX", "COMMON_NAMES"]
+
+#: Plant abbreviations (upper-cased key) -> CAS number.  Every row: common practice.
+ALIASES: Final = MappingProxyType(
+    {
+        "IPA": "67-63-0",  # isopropanol (isopropyl alcohol); common practice
+        "DCM": "75-09-2",  # dichloromethane; common practice
+        "THF": "109-99-9",  # tetrahydrofuran; common practice
+        "DMF": "68-12-2",  # N,N-dimethylformamide; common practice
+        "DMSO": "67-68-5",  # dimethyl sulfoxide; common practice
+        "MEK": "78-93-3",  # methyl ethyl ketone (2-butanone); common practice
+        "MIBK": "108-10-1",  # methyl isobutyl ketone; common practice
+        "NMP": "872-50-4",  # N-methyl-2-pyrrolidone; common practice
+        "DMAC": "127-19-5",  # N,N-dimethylacetamide; common practice
+        "MTBE": "1634-04-4",  # methyl tert-butyl ether; common practice
+        "ETOAC": "141-78-6",  # ethyl acetate; common practice
+        "IPAC": "108-21-4",  # isopropyl acetate; common practice
+        "BUOAC": "123-86-4",  # n-butyl acetate; common practice
+        "MEOH": "67-56-1",  # methanol; common practice
+        "ETOH": "64-17-5",  # ethanol; common practice
+        "MECN": "75-05-8",  # acetonitrile; common practice
+        "ACN": "75-05-8",  # acetonitrile; common practice
+        "MEG": "107-21-1",  # (mono)ethylene glycol; common practice
+        "MPG": "57-55-6",  # (mono)propylene glycol; common practice
+        "DEG": "111-46-6",  # diethylene glycol; common practice
+        "MEA": "141-43-5",  # monoethanolamine; common practice
+        "DMC": "616-38-6",  # dimethyl carbonate; common practice
+        "PERC": "127-18-4",  # tetrachloroethylene (perchloroethylene); common practice
+        "CTC": "56-23-5",  # carbon tetrachloride; common practice
+    }
+)
+
+#: "CAS 67-64-1", "CAS: 67-64-1", "CAS-No. 67-64-1", "CAS RN 67-64-1": the number alone resolves.
+CAS_PREFIX: Final = re.compile(
+    r"^\s*CAS(?:\s*-?\s*(?:No\.?|RN|number))?\s*[:#]?\s*(\d{2,7}-\d{2}-\d)\s*$", re.I
+)
+
+#: Generic names and formulas the databases resolve to one of several substances
+#: (lower-cased key) -> the (name, CAS) of the common members.  Common practice.
+AMBIGUOUS: Final = MappingProxyType(
+    {
+        "xylene": (("o-xylene", "95-47-6"), ("m-xylene", "108-38-3"), ("p-xylene", "106-42-3"),
+                   ("mixed xylenes", "1330-20-7")),
+        "xylenes": (("o-xylene", "95-47-6"), ("m-xylene", "108-38-3"), ("p-xylene", "106-42-3"),
+                    ("mixed xylenes", "1330-20-7")),
+        "butanol": (("1-butanol", "71-36-3"), ("2-butanol", "78-92-2"), ("isobutanol", "78-83-1"),
+                    ("tert-butanol", "75-65-0")),
+        "propanol": (("1-propanol", "71-23-8"), ("isopropanol", "67-63-0")),
+        "pentanol": (("1-pentanol", "71-41-0"), ("isoamyl alcohol", "123-51-3")),
+        "amyl alcohol": (("1-pentanol", "71-41-0"), ("isoamyl alcohol", "123-51-3")),
+        "cresol": (("o-cresol", "95-48-7"), ("m-cresol", "108-39-4"), ("p-cresol", "106-44-5")),
+        "dichlorobenzene": (("1,2-dichlorobenzene", "95-50-1"), ("1,3-dichlorobenzene", "541-73-1"),
+                            ("1,4-dichlorobenzene", "106-46-7")),
+        "dichloroethane": (("1,2-dichloroethane", "107-06-2"), ("1,1-dichloroethane", "75-34-3")),
+        "trichloroethane": (("1,1,1-trichloroethane", "71-55-6"), ("1,1,2-trichloroethane", "79-00-5")),
+        "butene": (("1-butene", "106-98-9"), ("cis-2-butene", "590-18-1"), ("trans-2-butene", "624-64-6"),
+                   ("isobutene", "115-11-7")),
+        "c2h6o": (("ethanol", "64-17-5"), ("dimethyl ether", "115-10-6")),
+        "c3h8o": (("1-propanol", "71-23-8"), ("isopropanol", "67-63-0"),
+                  ("methyl ethyl ether", "540-67-0")),
+        "c4h10o": (("1-butanol", "71-36-3"), ("2-butanol", "78-92-2"), ("isobutanol", "78-83-1"),
+                   ("tert-butanol", "75-65-0"), ("diethyl ether", "60-29-7")),
+        "c8h10": (("o-xylene", "95-47-6"), ("m-xylene", "108-38-3"), ("p-xylene", "106-42-3"),
+                  ("ethylbenzene", "100-41-4")),
+        "c3h6o": (("acetone", "67-64-1"), ("propanal", "123-38-6"), ("propylene oxide", "75-56-9"),
+                  ("allyl alcohol", "107-18-6")),
+        "c4h8o": (("methyl ethyl ketone", "78-93-3"), ("tetrahydrofuran", "109-99-9"),
+                  ("butanal", "123-72-8")),
+        "c4h8o2": (("ethyl acetate", "141-78-6"), ("1,4-dioxane", "123-91-1"), ("butyric acid", "107-92-6"),
+                   ("methyl propionate", "554-12-1")),
+        "c3h6o2": (("propionic acid", "79-09-4"), ("methyl acetate", "79-20-9"),
+                   ("ethyl formate", "109-94-4")),
+        "c2h4o2": (("acetic acid", "64-19-7"), ("methyl formate", "107-31-3")),
+        "c7h8o": (("anisole", "100-66-3"), ("benzyl alcohol", "100-51-6"), ("o-cresol", "95-48-7"),
+                  ("m-cresol", "108-39-4"), ("p-cresol", "106-44-5")),
+        "c6h12": (("cyclohexane", "110-82-7"), ("1-hexene", "592-41-6"), ("methylcyclopentane", "96-37-7")),
+        "c5h12": (("n-pentane", "109-66-0"), ("isopentane", "78-78-4"), ("neopentane", "463-82-1")),
+        "c6h14": (("n-hexane", "110-54-3"), ("2-methylpentane", "107-83-5"), ("3-methylpentane", "96-14-0")),
+        "c4h10": (("n-butane", "106-97-8"), ("isobutane", "75-28-5")),
+        "c3h6": (("propylene", "115-07-1"), ("cyclopropane", "75-19-4")),
+        "c2h4cl2": (("1,2-dichloroethane", "107-06-2"), ("1,1-dichloroethane", "75-34-3")),
+        "c9h12": (("cumene", "98-82-8"), ("n-propylbenzene", "103-65-1"), ("mesitylene", "108-67-8")),
+    }
+)  # fmt: skip
+
+#: Everyday names offered as close-match suggestions for a name that is not found.
+COMMON_NAMES: Final = (
+    "air", "nitrogen", "oxygen", "argon", "helium", "hydrogen", "carbon dioxide", "carbon monoxide",
+    "methane", "ethane", "propane", "butane", "ethylene", "propylene", "acetylene", "ammonia",
+    "sulfur dioxide", "hydrogen sulfide", "chlorine", "water", "steam", "nitrous oxide",
+    "methanol", "ethanol", "1-propanol", "isopropanol", "1-butanol", "2-butanol", "isobutanol",
+    "tert-butanol", "1-pentanol", "1-hexanol", "1-octanol", "2-ethylhexanol", "cyclohexanol",
+    "benzyl alcohol", "acetone", "methyl ethyl ketone", "methyl isobutyl ketone", "cyclohexanone",
+    "acetophenone", "methyl acetate", "ethyl acetate", "isopropyl acetate", "butyl acetate",
+    "ethyl formate", "methyl methacrylate", "vinyl acetate", "diethyl ether", "tetrahydrofuran",
+    "1,4-dioxane", "methyl tert-butyl ether", "diisopropyl ether", "anisole", "dichloromethane",
+    "chloroform", "carbon tetrachloride", "1,2-dichloroethane", "trichloroethylene",
+    "tetrachloroethylene", "chlorobenzene", "benzene", "toluene", "o-xylene", "m-xylene", "p-xylene",
+    "ethylbenzene", "styrene", "cumene", "nitrobenzene", "naphthalene", "n-pentane", "n-hexane",
+    "n-heptane", "n-octane", "isooctane", "cyclohexane", "methylcyclohexane", "n-decane",
+    "N,N-dimethylformamide", "N,N-dimethylacetamide", "N-methyl-2-pyrrolidone", "formamide",
+    "dimethyl sulfoxide", "sulfolane", "ethylene glycol", "propylene glycol", "diethylene glycol",
+    "glycerol", "triethylamine", "diethylamine", "aniline", "pyridine", "ethanolamine", "morpholine",
+    "acetic acid", "formic acid", "propionic acid", "acetonitrile", "propionitrile",
+    "propylene carbonate", "dimethyl carbonate", "diethyl carbonate", "carbon disulfide", "phenol",
+    "hydrogen peroxide", "ozone", "formaldehyde", "acetaldehyde", "vinyl chloride",
+)  # fmt: skip

@@ -1,0 +1,195 @@
+"""Names resolve to the substance they name, visibly, or fail with candidates."""
+
+from __future__ import annotations
+
+import copy
+import pickle
+import subprocess
+import sys
+
+import pytest
+
+import masstransfer as mt
+from masstransfer.errors import AmbiguousSpeciesWarning, UnknownSpeciesError
+
+
+@pytest.mark.parametrize(
+    ("query", "cas"),
+    [
+        # plant abbreviations: common practice
+        ("IPA", "67-63-0"),
+        ("DCM", "75-09-2"),
+        ("THF", "109-99-9"),
+        ("DMF", "68-12-2"),
+        ("DMSO", "67-68-5"),
+        ("MEK", "78-93-3"),
+        ("MIBK", "108-10-1"),
+        ("NMP", "872-50-4"),
+        ("ipa", "67-63-0"),
+        ("CAS 67-64-1", "67-64-1"),
+        ("CAS-No. 67-64-1", "67-64-1"),
+        # full names, including one the database finds only lower-cased
+        ("N-methyl-2-pyrrolidone", "872-50-4"),
+        ("Toluene", "108-88-3"),
+        ("steam", "7732-18-5"),
+        ("CO2", "124-38-9"),
+    ],
+)
+def test_names_abbreviations_and_cas_prefix_resolve(query, cas):
+    assert cas == mt.species(query).CAS
+
+
+def test_implausible_match_raises_with_candidates():
+    # the database's own first match for this misspelt organic name is an ion or unrelated entry
+    with pytest.raises(UnknownSpeciesError) as info:
+        mt.species("N-methyl-2-pyrolidone")
+    assert "N-methyl-2-pyrrolidone" in str(info.value)  # close match offered
+
+
+def test_misspelling_gets_a_suggestion():
+    with pytest.raises(UnknownSpeciesError, match="did you mean 'toluene'"):
+        mt.species("tolune")
+
+
+def test_unknown_name_is_remembered():
+    from masstransfer.substances import _species
+
+    with pytest.raises(UnknownSpeciesError):
+        mt.species("definitely-not-a-substance-qq")
+    assert "definitely-not-a-substance-qq" in _species._UNKNOWN
+    with pytest.raises(UnknownSpeciesError):
+        mt.species("definitely-not-a-substance-qq")
+
+
+@pytest.mark.parametrize(
+    ("query", "others"),
+    [("xylene", ("m-xylene", "p-xylene")), ("C2H6O", ("ethanol",)), ("butanol", ("2-butanol",))],
+)
+def test_ambiguous_name_or_formula_warns_naming_choice_and_alternatives(query, others):
+    with pytest.warns(AmbiguousSpeciesWarning) as rec:
+        sp = mt.species(query)
+    message = str(rec[0].message)
+    assert sp.name in message
+    assert sp.CAS in message
+    for other in others:
+        assert other in message
+
+
+def test_identity_line():
+    assert mt.species("acetone").identity == "acetone (CAS 67-64-1, C3H6O, 58.08 g/mol)"
+    s = mt.Species(name="resin monomer (invented)", molar_mass=0.1, formula="C5H8O2")
+    assert s.identity == "resin monomer (invented) (no CAS number, C5H8O2, 100.00 g/mol)"
+
+
+def test_results_and_report_show_identity():
+    r = mt.mass_transfer_from_heat(30.0, "IPA", "air", 300.0)
+    assert r.solute_identity.startswith("isopropanol (CAS 67-63-0, C3H8O, 60.10 g/mol")
+    assert r.carrier_identity.startswith("air (")
+    rep = mt.diffusivity_report("MEK", "air", 300.0)
+    assert "CAS 78-93-3" in rep.solute_identity
+    assert "solute: 2-butanone (CAS 78-93-3, C4H8O" in rep.summary()
+
+
+def test_cli_shows_identity_in_table_and_json(capsys):
+    import json
+
+    from masstransfer.cli import main
+
+    assert main(["diffusivity", "NMP", "air", "-T", "300"]) == 0
+    out = capsys.readouterr().out
+    assert "solute: 1-methyl-2-pyrrolidinone (CAS 872-50-4, C5H9NO, 99.13 g/mol)" in out
+    assert main(["diffusivity", "NMP", "air", "-T", "300", "--json"]) == 0
+    data = json.loads(capsys.readouterr().out)
+    assert data["resolved"]["solute"]["CAS"] == "872-50-4"
+    assert data["resolved"]["solute"]["formula"] == "C5H9NO"
+    assert data["resolved"]["solute"]["molar_mass_kg_per_mol"] == pytest.approx(0.09913, rel=1e-3)
+
+
+def test_cli_errors_name_options_not_python_calls(capsys):
+    from masstransfer.cli import main
+
+    assert main(["diffusivity", "tolune", "air", "-T", "300"]) == 2
+    err = capsys.readouterr().err
+    assert "did you mean 'toluene'" in err
+    assert "masstransfer.Species(" not in err
+    assert main(["diffusivity", "toluene", "air", "-T", "300", "--method", "fulller"]) == 2
+    err = capsys.readouterr().err
+    assert "--method" in err
+    assert "method=" not in err
+
+
+# --- immutability, equality, pickling ----------------------------------------------------
+
+
+def test_species_mappings_are_read_only_and_equality_covers_atoms():
+    tol = mt.species("toluene")
+    with pytest.raises(TypeError):
+        tol.atoms["C"] = 70  # type: ignore[index]
+    with pytest.raises(TypeError):
+        tol.sources["Vb"] = "x"  # type: ignore[index]
+    a = mt.Species(name="x (invented)", molar_mass=0.1, atoms={"C": 2, "H": 6, "O": 1})
+    b = mt.Species(name="x (invented)", molar_mass=0.1, atoms={"C": 2, "H": 6, "O": 2})
+    assert a != b
+    assert a == mt.Species(name="x (invented)", molar_mass=0.1, atoms={"C": 2, "H": 6, "O": 1})
+    assert hash(a) == hash(mt.Species(name="x (invented)", molar_mass=0.1, atoms={"O": 1, "C": 2, "H": 6}))
+
+
+def test_database_species_pickles_and_copies():
+    ben = mt.species("benzene")
+    for other in (pickle.loads(pickle.dumps(ben)), copy.deepcopy(ben), copy.copy(ben)):
+        assert other == ben
+        assert hash(other) == hash(ben)
+        assert other.Tc == ben.Tc
+        assert other.Vb == ben.Vb
+
+
+def test_constants_are_read_on_first_use_only():
+    code = (
+        "import sys, masstransfer as mt\n"
+        "mt.gas_diffusivity('toluene', 'air', 300.0)\n"
+        "print('thermo' in sys.modules, 'Vb' in mt.species('toluene').__dict__)\n"
+        "print(mt.species('toluene').Vb > 1e-4, 'thermo' in sys.modules)\n"
+    )
+    out = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, check=True)
+    # a Fuller gas value needs only the structure and chemicals' tables: thermo's liquid-volume
+    # data are read when the volume is first asked for
+    assert out.stdout.split() == ["False", "False", "True", "True"]
+
+
+def test_first_loads_from_many_threads_agree_with_a_serial_run():
+    code = (
+        "import concurrent.futures as cf, masstransfer as mt\n"
+        "names = ['ethanol', 'benzene', 'toluene', 'acetone'] * 4\n"
+        "def work(n):\n"
+        "    D = mt.gas_diffusivity(n, 'air', 300.0)\n"
+        "    return (mt.liquid_model(n).viscosity(300.0), mt.species(n).Vb, D)\n"
+        "with cf.ThreadPoolExecutor(16) as ex:\n"
+        "    par = list(ex.map(work, names))\n"
+        "print(par == [work(n) for n in names])\n"
+    )
+    out = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, check=True)
+    assert out.stdout.strip() == "True"
+
+
+# --- hand-built species ------------------------------------------------------------------
+
+
+def test_hand_built_species_from_smiles_alone_gets_atoms_formula_and_volumes():
+    # n-butyl acetate written by hand; Le Bas increments (Reid, Prausnitz & Sherwood 3rd ed.
+    # Table 3-8, from memory): 6 C + 12 H + carbonyl O + higher-ester O
+    s = mt.Species(name="solvent B (invented)", molar_mass=0.11616, smiles="CCCCOC(C)=O")
+    assert dict(s.atoms) == {"C": 6, "H": 12, "O": 2}
+    assert s.formula == "C6H12O2"
+    assert s.Vb == pytest.approx((6 * 14.8 + 12 * 3.7 + 7.4 + 11.0) * 1e-6)
+    assert "Le Bas" in s.sources["Vb"]
+    # Fuller volumes, Poling et al. 5th ed. Table 11-1 (from memory): 6 C + 12 H + 2 O
+    assert mt.diffusivity.fuller_volume(s) == pytest.approx(6 * 15.9 + 12 * 2.31 + 2 * 6.11)
+
+
+def test_hand_built_species_works_with_every_liquid_method():
+    s = mt.Species(name="solvent B (invented)", molar_mass=0.11616, smiles="CCCCOC(C)=O", Tb=399.0)
+    for method in ("wilke-chang", "hayduk-minhas", "tyn-calus"):
+        D = mt.liquid_diffusivity(s, "water", 298.15, method=method)
+        assert 1e-10 < D < 5e-9
+    D = mt.liquid_diffusivity(s, "toluene", 298.15, method="tyn-calus")
+    assert 1e-10 < D < 1e-8
