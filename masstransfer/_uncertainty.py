@@ -1,4 +1,4 @@
-"""Relative standard uncertainties: from a method's stated accuracy, and through a chain.
+r"""Relative standard uncertainties: from a method's stated accuracy, and through a chain.
 
 A method's source states its accuracy in one of two ways, and each becomes a relative standard
 uncertainty u (one standard deviation, as a fraction of the value):
@@ -14,8 +14,8 @@ uncertainty u (one standard deviation, as a fraction of the value):
 
 A method stating no number has no uncertainty (None), never a guessed one.
 
-Through a chain of power laws, :math:`y = c \\prod x_i^{a_i}`, the linearised relative standard
-uncertainty of y is :math:`u_y = \\sqrt{\\sum (a_i u_i)^2}` for independent inputs (JCGM
+Through a chain of power laws, :math:`y = c \prod x_i^{a_i}`, the linearised relative standard
+uncertainty of y is :math:`u_y = \sqrt{\sum (a_i u_i)^2}` for independent inputs (JCGM
 100:2008, Eq. (10) with relative sensitivities (from memory)).
 """
 

@@ -1,9 +1,9 @@
-"""Permeation through films, walls and laminates: steady fluxes, units, time lag, packaging.
+r"""Permeation through films, walls and laminates: steady fluxes, units, time lag, packaging.
 
 A layer is given by its thickness and either its diffusivity D and
-solubility S (Henry-type, :math:`c = S\\,p`) or its permeability
-:math:`\\mathcal{P} = D S`.  Layers in series add resistances like thermal
-resistances: :math:`R_i = L_i/\\mathcal{P}_i` per unit area, and a fluid film
+solubility S (Henry-type, :math:`c = S\,p`) or its permeability
+:math:`\mathcal{P} = D S`.  Layers in series add resistances like thermal
+resistances: :math:`R_i = L_i/\mathcal{P}_i` per unit area, and a fluid film
 with coefficient k_c adds :math:`RT/k_c` on a partial-pressure basis.
 
 SI internally: permeability in mol/(m s Pa), permeance (thickness
@@ -236,7 +236,7 @@ def convert_flux(value: ArrayLike, from_unit: str, to_unit: str = "mol/(m2 s)") 
 
 @guard
 def permeability(D: ArrayLike, S: ArrayLike) -> FloatOrArray:
-    """Permeability from diffusivity and solubility, :math:`\\mathcal{P} = D S`.
+    r"""Permeability from diffusivity and solubility, :math:`\mathcal{P} = D S`.
 
     Parameters
     ----------
@@ -379,12 +379,12 @@ def steady_flux(
     k_low: float | None = None,
     T: float = 298.15,
 ) -> BarrierResult:
-    """Steady flux through layers in series, with optional fluid films on either side.
+    r"""Steady flux through layers in series, with optional fluid films on either side.
 
     .. math::
 
-        N = \\frac{p_{high} - p_{low}}{\\frac{RT}{k_{high}} + \\sum_i \\frac{L_i}{\\mathcal{P}_i}
-            + \\frac{RT}{k_{low}}}
+        N = \frac{p_{high} - p_{low}}{\frac{RT}{k_{high}} + \sum_i \frac{L_i}{\mathcal{P}_i}
+            + \frac{RT}{k_{low}}}
 
     Parameters
     ----------
@@ -470,7 +470,7 @@ def time_lag(thickness: FloatArray, D: ArrayLike) -> FloatArray: ...
 def time_lag(thickness: ArrayLike, D: ArrayLike) -> FloatOrArray: ...
 @guard
 def time_lag(thickness: ArrayLike, D: ArrayLike) -> FloatOrArray:
-    """Time lag of a membrane, :math:`\\theta = L^2/(6D)`.
+    r"""Time lag of a membrane, :math:`\theta = L^2/(6D)`.
 
     Parameters
     ----------
@@ -509,7 +509,7 @@ def time_lag(thickness: ArrayLike, D: ArrayLike) -> FloatOrArray:
 
 @guard
 def diffusivity_from_time_lag(thickness: float, lag: float, lag_stderr: float = 0.0) -> tuple[float, float]:
-    """Diffusivity from a measured time lag, :math:`D = L^2/(6\\theta)`, with its standard error.
+    r"""Diffusivity from a measured time lag, :math:`D = L^2/(6\theta)`, with its standard error.
 
     Parameters
     ----------
@@ -545,16 +545,16 @@ def diffusivity_from_time_lag(thickness: float, lag: float, lag_stderr: float = 
 
 @guard
 def permeation_curve(t: ArrayLike, thickness: float, D: float, c_upstream: float = 1.0) -> FloatOrArray:
-    """Cumulative amount permeated per unit area through an initially empty membrane.
+    r"""Cumulative amount permeated per unit area through an initially empty membrane.
 
     .. math::
 
-        \\frac{Q_t}{L c_1} = \\frac{Dt}{L^2} - \\frac{1}{6}
-        - \\frac{2}{\\pi^2}\\sum_{n\\ge1}\\frac{(-1)^n}{n^2}e^{-Dn^2\\pi^2t/L^2}
+        \frac{Q_t}{L c_1} = \frac{Dt}{L^2} - \frac{1}{6}
+        - \frac{2}{\pi^2}\sum_{n\ge1}\frac{(-1)^n}{n^2}e^{-Dn^2\pi^2t/L^2}
 
     with the short-time form
-    :math:`4\\sqrt{\\tau}\\sum_{m\\ge0}\\operatorname{ierfc}\\frac{2m+1}{2\\sqrt\\tau}`
-    (:math:`\\tau = Dt/L^2`) below :math:`\\tau` = 0.1.
+    :math:`4\sqrt{\tau}\sum_{m\ge0}\operatorname{ierfc}\frac{2m+1}{2\sqrt\tau}`
+    (:math:`\tau = Dt/L^2`) below :math:`\tau` = 0.1.
 
     Parameters
     ----------

@@ -1,9 +1,9 @@
-"""Transient diffusion: uptake and release by slabs, cylinders and spheres; semi-infinite media.
+r"""Transient diffusion: uptake and release by slabs, cylinders and spheres; semi-infinite media.
 
 The solutions are those of Crank, *The Mathematics of Diffusion*, 2nd ed.
 (1975), for constant D, an initially uniform body and a step in the
 surrounding concentration, with or without a surface (film) resistance
-expressed by the mass Biot number :math:`Bi = k\\,a/(K D)`.  Sizes: the
+expressed by the mass Biot number :math:`Bi = k\,a/(K D)`.  Sizes: the
 half-thickness for a slab exposed on both faces, the radius for a cylinder
 or sphere.
 
@@ -291,7 +291,7 @@ def fractional_uptake(
 def fractional_uptake(
     shape: str, t: ArrayLike, D: ArrayLike, size: ArrayLike, biot: ArrayLike | None = None
 ) -> FloatOrArray:
-    """Fraction of the equilibrium uptake reached after time t, :math:`M_t/M_\\infty`.
+    r"""Fraction of the equilibrium uptake reached after time t, :math:`M_t/M_\infty`.
 
     For a body initially at a uniform concentration whose surroundings step
     to a new constant concentration at t = 0.
@@ -308,14 +308,14 @@ def fractional_uptake(
     size : float or array_like
         Half-thickness (slab) or radius (cylinder, sphere) [m].
     biot : float, optional
-        Mass Biot number :math:`k\\,a/(K D)` [-] for a finite surface
+        Mass Biot number :math:`k\,a/(K D)` [-] for a finite surface
         resistance (k the external coefficient, K the partition coefficient
         body/fluid); None or inf for a surface at equilibrium.
 
     Returns
     -------
     float or numpy.ndarray
-        :math:`M_t/M_\\infty` [-], from 0 to 1.
+        :math:`M_t/M_\infty` [-], from 0 to 1.
 
     Notes
     -----
@@ -675,16 +675,16 @@ def semi_infinite_concentration(
     c_initial: ArrayLike = 0.0,
     k: ArrayLike | None = None,
 ) -> FloatOrArray:
-    """Concentration in a semi-infinite medium after a step at its surface.
+    r"""Concentration in a semi-infinite medium after a step at its surface.
 
     Constant surface concentration:
 
-    .. math:: \\frac{c - c_i}{c_s - c_i} = \\operatorname{erfc}\\frac{x}{2\\sqrt{Dt}}
+    .. math:: \frac{c - c_i}{c_s - c_i} = \operatorname{erfc}\frac{x}{2\sqrt{Dt}}
 
     with a surface resistance (external coefficient k, h = k/D):
 
-    .. math:: \\frac{c - c_i}{c_s - c_i} = \\operatorname{erfc}\\eta
-        - e^{hx + h^2Dt}\\operatorname{erfc}\\left(\\eta + h\\sqrt{Dt}\\right)
+    .. math:: \frac{c - c_i}{c_s - c_i} = \operatorname{erfc}\eta
+        - e^{hx + h^2Dt}\operatorname{erfc}\left(\eta + h\sqrt{Dt}\right)
 
     Parameters
     ----------
@@ -711,9 +711,9 @@ def semi_infinite_concentration(
     Notes
     -----
     The product in the resistance form is evaluated as
-    :math:`e^{-\\eta^2}\\operatorname{erfcx}(\\eta + h\\sqrt{Dt})`, which
+    :math:`e^{-\eta^2}\operatorname{erfcx}(\eta + h\sqrt{Dt})`, which
     cannot overflow.  Also serves for carburising, drying skins and any
-    body much thicker than its penetration depth :math:`\\sqrt{Dt}`.
+    body much thicker than its penetration depth :math:`\sqrt{Dt}`.
 
     References
     ----------
@@ -759,14 +759,14 @@ def semi_infinite_uptake(
     c_initial: ArrayLike = 0.0,
     k: ArrayLike | None = None,
 ) -> FloatOrArray:
-    """Amount taken up per unit area by a semi-infinite medium.
+    r"""Amount taken up per unit area by a semi-infinite medium.
 
-    .. math:: M_t = 2(c_s - c_i)\\sqrt{Dt/\\pi}
+    .. math:: M_t = 2(c_s - c_i)\sqrt{Dt/\pi}
 
     or, with a surface resistance (h = k/D),
 
-    .. math:: M_t = \\frac{c_s - c_i}{h}\\left[e^{h^2Dt}\\operatorname{erfc}(h\\sqrt{Dt})
-        - 1 + 2h\\sqrt{Dt/\\pi}\\right]
+    .. math:: M_t = \frac{c_s - c_i}{h}\left[e^{h^2Dt}\operatorname{erfc}(h\sqrt{Dt})
+        - 1 + 2h\sqrt{Dt/\pi}\right]
 
     Parameters
     ----------
@@ -817,7 +817,7 @@ def semi_infinite_uptake(
 
 @guard
 def half_time(shape: str, D: ArrayLike, size: ArrayLike) -> FloatOrArray:
-    """Time at which half the equilibrium uptake is reached (surface at equilibrium).
+    r"""Time at which half the equilibrium uptake is reached (surface at equilibrium).
 
     Parameters
     ----------
@@ -836,7 +836,7 @@ def half_time(shape: str, D: ArrayLike, size: ArrayLike) -> FloatOrArray:
     Notes
     -----
     For a sheet of full thickness L = 2a this is the rule
-    :math:`D = 0.049\\,L^2/t_{1/2}`; the constants are found by solving
+    :math:`D = 0.049\,L^2/t_{1/2}`; the constants are found by solving
     :func:`fractional_uptake` = 1/2, not tabulated.
 
     References
@@ -896,9 +896,9 @@ def fit_diffusivity(
     size: float,
     biot: float | None = None,
 ) -> DiffusivityFit:
-    """Estimate D from a measured uptake or desorption curve.
+    r"""Estimate D from a measured uptake or desorption curve.
 
-    Least squares on :math:`M_t/M_\\infty` with ``scipy.optimize.least_squares``
+    Least squares on :math:`M_t/M_\infty` with ``scipy.optimize.least_squares``
     in ln D, starting from the half-time estimate.
 
     Parameters
@@ -908,7 +908,7 @@ def fit_diffusivity(
     t : array_like
         Times of the measurements [s].
     fraction : array_like
-        Measured :math:`M_t/M_\\infty` [-] (uptake, or fraction released).
+        Measured :math:`M_t/M_\infty` [-] (uptake, or fraction released).
     size : float
         Half-thickness (slab) or radius [m].
     biot : float, optional

@@ -69,11 +69,11 @@ def akita_yoshida_holdup(
     sigma: ArrayLike,
     electrolyte: bool = False,
 ) -> FloatOrArray:
-    """Gas hold-up of a bubble column by Akita & Yoshida (1973).
+    r"""Gas hold-up of a bubble column by Akita & Yoshida (1973).
 
     .. math::
-        \\frac{\\varepsilon_G}{(1-\\varepsilon_G)^4} = C\\,Bo^{1/8}\\,Ga^{1/12}\\,\\frac{u_G}{\\sqrt{g D_c}},
-        \\quad Bo = \\frac{g D_c^2\\rho_L}{\\sigma},\\ Ga = \\frac{g D_c^3}{\\nu_L^2}
+        \frac{\varepsilon_G}{(1-\varepsilon_G)^4} = C\,Bo^{1/8}\,Ga^{1/12}\,\frac{u_G}{\sqrt{g D_c}},
+        \quad Bo = \frac{g D_c^2\rho_L}{\sigma},\ Ga = \frac{g D_c^3}{\nu_L^2}
 
     with C = 0.20 for pure liquids and non-electrolyte solutions and 0.25 for
     electrolyte solutions; solved for the hold-up by bisection.
@@ -141,10 +141,10 @@ def akita_yoshida_kla(
     D_L: ArrayLike,
     holdup: ArrayLike | None = None,
 ) -> FloatOrArray:
-    """Volumetric liquid-side coefficient of a bubble column by Akita & Yoshida (1973).
+    r"""Volumetric liquid-side coefficient of a bubble column by Akita & Yoshida (1973).
 
     .. math::
-        \\frac{k_L a\\,D_c^2}{D_L} = 0.6\\,Sc_L^{0.5}\\,Bo^{0.62}\\,Ga^{0.31}\\,\\varepsilon_G^{1.1}
+        \frac{k_L a\,D_c^2}{D_L} = 0.6\,Sc_L^{0.5}\,Bo^{0.62}\,Ga^{0.31}\,\varepsilon_G^{1.1}
 
     Parameters
     ----------
@@ -210,11 +210,11 @@ def akita_yoshida_kla(
 
 @guard
 def vant_riet_kla(power_per_volume: ArrayLike, u_G: ArrayLike, coalescing: bool = True) -> FloatOrArray:
-    """Volumetric coefficient of an aerated stirred tank by van't Riet (1979).
+    r"""Volumetric coefficient of an aerated stirred tank by van't Riet (1979).
 
     .. math::
-        k_L a = 0.026\\,(P/V)^{0.4} u_G^{0.5}\\ \\text{(coalescing, pure water)},\\qquad
-        k_L a = 0.002\\,(P/V)^{0.7} u_G^{0.2}\\ \\text{(non-coalescing, electrolytes)}
+        k_L a = 0.026\,(P/V)^{0.4} u_G^{0.5}\ \text{(coalescing, pure water)},\qquad
+        k_L a = 0.002\,(P/V)^{0.7} u_G^{0.2}\ \text{(non-coalescing, electrolytes)}
 
     Parameters
     ----------
@@ -263,15 +263,15 @@ def vant_riet_kla(power_per_volume: ArrayLike, u_G: ArrayLike, coalescing: bool 
 def calderbank_bubble_k_L(
     bubble_diameter: ArrayLike, D_L: ArrayLike, rho_L: ArrayLike, mu_L: ArrayLike, rho_G: ArrayLike
 ) -> FloatOrArray:
-    """Liquid-side coefficient of a swarm of bubbles by Calderbank & Moo-Young (1961).
+    r"""Liquid-side coefficient of a swarm of bubbles by Calderbank & Moo-Young (1961).
 
     .. math::
-        Sh = 0.31\\,Ar^{1/3} Sc^{1/3}\\ (d_b < 2.5\\,\\mathrm{mm}),\\qquad
-        Sh = 0.42\\,Ar^{1/3} Sc^{1/2}\\ (d_b \\ge 2.5\\,\\mathrm{mm})
+        Sh = 0.31\,Ar^{1/3} Sc^{1/3}\ (d_b < 2.5\,\mathrm{mm}),\qquad
+        Sh = 0.42\,Ar^{1/3} Sc^{1/2}\ (d_b \ge 2.5\,\mathrm{mm})
 
     evaluated through the catalogue records
     ``stirred-vessel-calderbank-small-bubbles`` and ``-large-bubbles``
-    (:func:`masstransfer.surface.correlation`), with :math:`k_L = Sh\\,D_L/d_b`.
+    (:func:`masstransfer.surface.correlation`), with :math:`k_L = Sh\,D_L/d_b`.
 
     Parameters
     ----------
@@ -328,10 +328,10 @@ def calderbank_bubble_k_L(
 def sano_particle_k_L(
     epsilon: ArrayLike, particle_diameter: ArrayLike, nu_L: ArrayLike, D_L: ArrayLike
 ) -> FloatOrArray:
-    """Solid-liquid coefficient of suspended particles in a stirred tank by Sano et al. (1974).
+    r"""Solid-liquid coefficient of suspended particles in a stirred tank by Sano et al. (1974).
 
     .. math::
-        Sh = \\frac{k_L d_p}{D_L} = 2 + 0.4\\left(\\frac{\\varepsilon d_p^4}{\\nu_L^3}\\right)^{1/4} Sc^{1/3}
+        Sh = \frac{k_L d_p}{D_L} = 2 + 0.4\left(\frac{\varepsilon d_p^4}{\nu_L^3}\right)^{1/4} Sc^{1/3}
 
     Parameters
     ----------

@@ -48,12 +48,12 @@ def onda_wetted_area(
     mu_L: ArrayLike,
     rho_L: ArrayLike,
 ) -> FloatOrArray:
-    """Wetted area of a random packing by Onda, Takeuchi & Okumoto (1968).
+    r"""Wetted area of a random packing by Onda, Takeuchi & Okumoto (1968).
 
     .. math::
-        \\frac{a_w}{a} = 1 - \\exp\\left[-1.45\\left(\\frac{\\sigma_c}{\\sigma}\\right)^{0.75}
-        Re_L^{0.1} Fr_L^{-0.05} We_L^{0.2}\\right],\\quad
-        Re_L = \\frac{L}{a\\mu_L},\\ Fr_L = \\frac{L^2 a}{\\rho_L^2 g},\\ We_L = \\frac{L^2}{\\rho_L\\sigma a}
+        \frac{a_w}{a} = 1 - \exp\left[-1.45\left(\frac{\sigma_c}{\sigma}\right)^{0.75}
+        Re_L^{0.1} Fr_L^{-0.05} We_L^{0.2}\right],\quad
+        Re_L = \frac{L}{a\mu_L},\ Fr_L = \frac{L^2 a}{\rho_L^2 g},\ We_L = \frac{L^2}{\rho_L\sigma a}
 
     Parameters
     ----------
@@ -124,11 +124,11 @@ def onda_k_L(
     a: ArrayLike,
     nominal_size: ArrayLike,
 ) -> FloatOrArray:
-    """Liquid-side coefficient of a random packing by Onda, Takeuchi & Okumoto (1968).
+    r"""Liquid-side coefficient of a random packing by Onda, Takeuchi & Okumoto (1968).
 
     .. math::
-        k_L\\left(\\frac{\\rho_L}{\\mu_L g}\\right)^{1/3} = 0.0051
-        \\left(\\frac{L}{a_w\\mu_L}\\right)^{2/3} Sc_L^{-1/2} (a\\,d_p)^{0.4}
+        k_L\left(\frac{\rho_L}{\mu_L g}\right)^{1/3} = 0.0051
+        \left(\frac{L}{a_w\mu_L}\right)^{2/3} Sc_L^{-1/2} (a\,d_p)^{0.4}
 
     Parameters
     ----------
@@ -197,11 +197,11 @@ def onda_k_G(
     nominal_size: ArrayLike,
     T: ArrayLike,
 ) -> FloatOrArray:
-    """Gas-side coefficient of a random packing by Onda, Takeuchi & Okumoto (1968).
+    r"""Gas-side coefficient of a random packing by Onda, Takeuchi & Okumoto (1968).
 
     .. math::
-        \\frac{k_G R T}{a D_G} = C \\left(\\frac{G}{a\\mu_G}\\right)^{0.7} Sc_G^{1/3} (a\\,d_p)^{-2.0},
-        \\quad C = 5.23\\ (d_p \\ge 15\\,\\mathrm{mm}),\\ 2.0\\ (d_p < 15\\,\\mathrm{mm})
+        \frac{k_G R T}{a D_G} = C \left(\frac{G}{a\mu_G}\right)^{0.7} Sc_G^{1/3} (a\,d_p)^{-2.0},
+        \quad C = 5.23\ (d_p \ge 15\,\mathrm{mm}),\ 2.0\ (d_p < 15\,\mathrm{mm})
 
     Parameters
     ----------
@@ -266,12 +266,12 @@ def billet_schultes_k_L(
     mu_L: ArrayLike,
     D_L: ArrayLike,
 ) -> FloatOrArray:
-    """Liquid-side coefficient below the loading point by Billet & Schultes (1999).
+    r"""Liquid-side coefficient below the loading point by Billet & Schultes (1999).
 
     .. math::
-        k_L = C_L \\left(\\frac{g\\rho_L}{\\mu_L}\\right)^{1/6}
-        \\left(\\frac{D_L}{d_h}\\right)^{1/2}\\left(\\frac{u_L}{a}\\right)^{1/3},
-        \\quad d_h = \\frac{4\\varepsilon}{a}
+        k_L = C_L \left(\frac{g\rho_L}{\mu_L}\right)^{1/6}
+        \left(\frac{D_L}{d_h}\right)^{1/2}\left(\frac{u_L}{a}\right)^{1/3},
+        \quad d_h = \frac{4\varepsilon}{a}
 
     Parameters
     ----------
@@ -349,14 +349,14 @@ def _holdup(uL: FloatArray, A: FloatArray, Ch: FloatArray, rho: FloatArray, mu: 
 def billet_schultes_holdup(
     u_L: ArrayLike, a: ArrayLike, C_h: ArrayLike, rho_L: ArrayLike, mu_L: ArrayLike
 ) -> FloatOrArray:
-    """Liquid hold-up below the loading point by Billet & Schultes (1999).
+    r"""Liquid hold-up below the loading point by Billet & Schultes (1999).
 
     .. math::
-        h_L = \\left(12\\frac{\\mu_L a^2 u_L}{g\\rho_L}\\right)^{1/3}\\left(\\frac{a_h}{a}\\right)^{2/3},
-        \\quad \\frac{a_h}{a} = C_h Re_L^{0.15} Fr_L^{0.1}\\ (Re_L < 5),\\
-        0.85\\,C_h Re_L^{0.25} Fr_L^{0.1}\\ (Re_L \\ge 5)
+        h_L = \left(12\frac{\mu_L a^2 u_L}{g\rho_L}\right)^{1/3}\left(\frac{a_h}{a}\right)^{2/3},
+        \quad \frac{a_h}{a} = C_h Re_L^{0.15} Fr_L^{0.1}\ (Re_L < 5),\
+        0.85\,C_h Re_L^{0.25} Fr_L^{0.1}\ (Re_L \ge 5)
 
-    with :math:`Re_L = u_L\\rho_L/(a\\mu_L)` and :math:`Fr_L = u_L^2 a/g`.
+    with :math:`Re_L = u_L\rho_L/(a\mu_L)` and :math:`Fr_L = u_L^2 a/g`.
 
     Parameters
     ----------
@@ -415,11 +415,11 @@ def billet_schultes_k_G(
     mu_L: ArrayLike,
     T: ArrayLike,
 ) -> FloatOrArray:
-    """Gas-side coefficient below the loading point by Billet & Schultes (1999).
+    r"""Gas-side coefficient below the loading point by Billet & Schultes (1999).
 
     .. math::
-        k_G R T = C_V \\frac{1}{\\sqrt{\\varepsilon - h_L}}\\sqrt{\\frac{a}{d_h}}\\,D_V
-        \\left(\\frac{u_V\\rho_V}{a\\mu_V}\\right)^{3/4} Sc_V^{1/3}
+        k_G R T = C_V \frac{1}{\sqrt{\varepsilon - h_L}}\sqrt{\frac{a}{d_h}}\,D_V
+        \left(\frac{u_V\rho_V}{a\mu_V}\right)^{3/4} Sc_V^{1/3}
 
     with the hold-up :math:`h_L` of :func:`billet_schultes_holdup`.
 
@@ -513,11 +513,11 @@ def billet_schultes_area(
     mu_L: ArrayLike,
     sigma: ArrayLike,
 ) -> FloatOrArray:
-    """Effective interfacial area of a packing by Billet & Schultes (1999).
+    r"""Effective interfacial area of a packing by Billet & Schultes (1999).
 
     .. math::
-        \\frac{a_e}{a} = 1.5\\,(a d_h)^{-0.5}\\left(\\frac{u_L d_h\\rho_L}{\\mu_L}\\right)^{-0.2}
-        \\left(\\frac{u_L^2\\rho_L d_h}{\\sigma}\\right)^{0.75}\\left(\\frac{u_L^2}{g d_h}\\right)^{-0.45}
+        \frac{a_e}{a} = 1.5\,(a d_h)^{-0.5}\left(\frac{u_L d_h\rho_L}{\mu_L}\right)^{-0.2}
+        \left(\frac{u_L^2\rho_L d_h}{\sigma}\right)^{0.75}\left(\frac{u_L^2}{g d_h}\right)^{-0.45}
 
     Parameters
     ----------
@@ -582,18 +582,18 @@ def billet_schultes_loading_velocity(
     mu_L: ArrayLike,
     mu_V: ArrayLike,
 ) -> FloatOrArray:
-    """Gas velocity at the loading point by Billet & Schultes (1999), at the given flow ratio.
+    r"""Gas velocity at the loading point by Billet & Schultes (1999), at the given flow ratio.
 
     .. math::
-        u_{V,S} = C_S\\,\\Psi^{n_S}
-        \\left[\\frac{\\varepsilon}{a^{1/6}}
-        - a^{1/2}\\left(\\frac{12\\mu_L u_L}{g\\rho_L}\\right)^{1/3}\\right]
-        \\left(\\frac{12\\mu_L u_L}{g\\rho_L}\\right)^{1/6}\\sqrt{\\frac{\\rho_L}{\\rho_V}},\\quad
-        \\Psi = \\frac{L}{V}\\sqrt{\\frac{\\rho_V}{\\rho_L}}\\left(\\frac{\\mu_L}{\\mu_V}\\right)^{0.4}
+        u_{V,S} = C_S\,\Psi^{n_S}
+        \left[\frac{\varepsilon}{a^{1/6}}
+        - a^{1/2}\left(\frac{12\mu_L u_L}{g\rho_L}\right)^{1/3}\right]
+        \left(\frac{12\mu_L u_L}{g\rho_L}\right)^{1/6}\sqrt{\frac{\rho_L}{\rho_V}},\quad
+        \Psi = \frac{L}{V}\sqrt{\frac{\rho_V}{\rho_L}}\left(\frac{\mu_L}{\mu_V}\right)^{0.4}
 
     with :math:`n_S = -0.326` and :math:`C_S` of the packing where the flow
-    parameter :math:`(L/V)\\sqrt{\\rho_V/\\rho_L} \\le 0.4`, else
-    :math:`n_S = -0.723` and :math:`0.695\\,C_S(\\mu_L/\\mu_V)^{0.1588}`; L/V is
+    parameter :math:`(L/V)\sqrt{\rho_V/\rho_L} \le 0.4`, else
+    :math:`n_S = -0.723` and :math:`0.695\,C_S(\mu_L/\mu_V)^{0.1588}`; L/V is
     the mass-flow ratio.
 
     Parameters
@@ -705,12 +705,12 @@ def bravo_rocha_fair_k_L(
     mu_L: ArrayLike,
     D_L: ArrayLike,
 ) -> FloatOrArray:
-    """Liquid-side coefficient of a corrugated structured packing by Bravo, Rocha & Fair (1985).
+    r"""Liquid-side coefficient of a corrugated structured packing by Bravo, Rocha & Fair (1985).
 
     .. math::
-        k_L = 2\\sqrt{\\frac{D_L U_{Le}}{\\pi S}},\\quad
-        U_{Le} = \\frac{3\\Gamma}{2\\rho_L}\\left(\\frac{\\rho_L^2 g}{3\\mu_L\\Gamma}\\right)^{1/3},\\quad
-        \\Gamma = \\frac{\\rho_L u_L}{P},\\ P = \\frac{4S + 2B}{B h}
+        k_L = 2\sqrt{\frac{D_L U_{Le}}{\pi S}},\quad
+        U_{Le} = \frac{3\Gamma}{2\rho_L}\left(\frac{\rho_L^2 g}{3\mu_L\Gamma}\right)^{1/3},\quad
+        \Gamma = \frac{\rho_L u_L}{P},\ P = \frac{4S + 2B}{B h}
 
     Parameters
     ----------
@@ -791,11 +791,11 @@ def bravo_rocha_fair_k_G(
     mu_L: ArrayLike,
     T: ArrayLike,
 ) -> FloatOrArray:
-    """Gas-side coefficient of a corrugated structured packing by Bravo, Rocha & Fair (1985).
+    r"""Gas-side coefficient of a corrugated structured packing by Bravo, Rocha & Fair (1985).
 
     .. math::
-        \\frac{k_G R T\\, S}{D_V} = 0.0338\\,Re_V^{0.8} Sc_V^{0.333},\\quad
-        Re_V = \\frac{S\\rho_V (U_{Ve} + U_{Le})}{\\mu_V},\\ U_{Ve} = \\frac{u_V}{\\varepsilon\\sin\\theta}
+        \frac{k_G R T\, S}{D_V} = 0.0338\,Re_V^{0.8} Sc_V^{0.333},\quad
+        Re_V = \frac{S\rho_V (U_{Ve} + U_{Le})}{\mu_V},\ U_{Ve} = \frac{u_V}{\varepsilon\sin\theta}
 
     with the liquid film velocity :math:`U_{Le}` of :func:`bravo_rocha_fair_k_L`.
 

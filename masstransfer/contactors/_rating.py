@@ -126,9 +126,9 @@ def packed_column(
     sigma: ArrayLike,
     method: str = "billet-schultes",
 ) -> PackedColumnResult:
-    """Film coefficients, interfacial area and loading of a packing, numbers in.
+    r"""Film coefficients, interfacial area and loading of a packing, numbers in.
 
-    .. math:: k_L a = k_L a_e,\\qquad k_G a = k_G a_e
+    .. math:: k_L a = k_L a_e,\qquad k_G a = k_G a_e
 
     with a_e, k_L and k_G from the chosen method and the packing's constants.
 
@@ -274,9 +274,9 @@ def rate_packing(
     P: ArrayLike = 101325.0,
     method: str = "billet-schultes",
 ) -> PackedColumnResult:
-    """Rate a packing for a solute between a named gas and a named liquid.
+    r"""Rate a packing for a solute between a named gas and a named liquid.
 
-    .. math:: k_L a = k_L a_e,\\qquad k_G a = k_G a_e
+    .. math:: k_L a = k_L a_e,\qquad k_G a = k_G a_e
 
     Fetches the gas density and viscosity, the liquid density, viscosity and
     surface tension (the liquid as pure solvent) and both diffusivities
@@ -375,10 +375,10 @@ def rate_bubble_column(
     diameter: ArrayLike,
     electrolyte: bool = False,
 ) -> BubbleColumnResult:
-    """Gas hold-up and k_L a of a bubble column for a named solute and liquid (Akita & Yoshida).
+    r"""Gas hold-up and k_L a of a bubble column for a named solute and liquid (Akita & Yoshida).
 
     .. math::
-        \\frac{k_L a\\,D_c^2}{D_L} = 0.6\\,Sc_L^{0.5}\\,Bo^{0.62}\\,Ga^{0.31}\\,\\varepsilon_G^{1.1}
+        \frac{k_L a\,D_c^2}{D_L} = 0.6\,Sc_L^{0.5}\,Bo^{0.62}\,Ga^{0.31}\,\varepsilon_G^{1.1}
 
     Parameters
     ----------

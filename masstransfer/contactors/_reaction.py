@@ -47,9 +47,9 @@ def hatta_number(k2: FloatArray, c_B: ArrayLike, D_A: ArrayLike, k_L: ArrayLike)
 def hatta_number(k2: ArrayLike, c_B: ArrayLike, D_A: ArrayLike, k_L: ArrayLike) -> FloatOrArray: ...
 @guard
 def hatta_number(k2: ArrayLike, c_B: ArrayLike, D_A: ArrayLike, k_L: ArrayLike) -> FloatOrArray:
-    """Hatta number of a reaction first order in the gas A and the liquid reactant B.
+    r"""Hatta number of a reaction first order in the gas A and the liquid reactant B.
 
-    .. math:: Ha = \\frac{\\sqrt{k_2 c_B D_A}}{k_L}
+    .. math:: Ha = \frac{\sqrt{k_2 c_B D_A}}{k_L}
 
     Parameters
     ----------
@@ -109,9 +109,9 @@ def _einf(E_inf: ArrayLike) -> FloatOrArray:
 
 @guard
 def enhancement_film(hatta: ArrayLike) -> FloatOrArray:
-    """Enhancement factor of a pseudo-first-order reaction, film theory (Hatta 1932).
+    r"""Enhancement factor of a pseudo-first-order reaction, film theory (Hatta 1932).
 
-    .. math:: E = \\frac{Ha}{\\tanh Ha}
+    .. math:: E = \frac{Ha}{\tanh Ha}
 
     Parameters
     ----------
@@ -147,12 +147,12 @@ def enhancement_film(hatta: ArrayLike) -> FloatOrArray:
 
 @guard
 def enhancement_penetration(hatta: ArrayLike) -> FloatOrArray:
-    """Enhancement factor of a pseudo-first-order reaction, Higbie penetration theory.
+    r"""Enhancement factor of a pseudo-first-order reaction, Higbie penetration theory.
 
     .. math::
-        E = Ha\\left(1 + \\frac{\\pi}{8 Ha^2}\\right)
-        \\operatorname{erf}\\left(\\frac{2 Ha}{\\sqrt\\pi}\\right)
-        + \\frac{1}{2}\\exp\\left(-\\frac{4 Ha^2}{\\pi}\\right)
+        E = Ha\left(1 + \frac{\pi}{8 Ha^2}\right)
+        \operatorname{erf}\left(\frac{2 Ha}{\sqrt\pi}\right)
+        + \frac{1}{2}\exp\left(-\frac{4 Ha^2}{\pi}\right)
 
     Parameters
     ----------
@@ -194,9 +194,9 @@ def enhancement_penetration(hatta: ArrayLike) -> FloatOrArray:
 
 @guard
 def enhancement_surface_renewal(hatta: ArrayLike) -> FloatOrArray:
-    """Enhancement factor of a pseudo-first-order reaction, Danckwerts surface renewal.
+    r"""Enhancement factor of a pseudo-first-order reaction, Danckwerts surface renewal.
 
-    .. math:: E = \\sqrt{1 + Ha^2}
+    .. math:: E = \sqrt{1 + Ha^2}
 
     Parameters
     ----------
@@ -236,12 +236,12 @@ def enhancement_instantaneous(
     nu: ArrayLike = 1.0,
     theory: str = "film",
 ) -> FloatOrArray:
-    """Enhancement factor of an instantaneous reaction (the upper limit E_inf).
+    r"""Enhancement factor of an instantaneous reaction (the upper limit E_inf).
 
     .. math::
-        E_\\infty = 1 + \\frac{D_B c_B}{\\nu D_A c_{Ai}}\\ \\text{(film)},\\qquad
-        E_\\infty = \\sqrt{\\frac{D_A}{D_B}} + \\sqrt{\\frac{D_B}{D_A}}\\frac{c_B}{\\nu c_{Ai}}\\
-        \\text{(penetration)}
+        E_\infty = 1 + \frac{D_B c_B}{\nu D_A c_{Ai}}\ \text{(film)},\qquad
+        E_\infty = \sqrt{\frac{D_A}{D_B}} + \sqrt{\frac{D_B}{D_A}}\frac{c_B}{\nu c_{Ai}}\
+        \text{(penetration)}
 
     Parameters
     ----------
@@ -304,14 +304,14 @@ def enhancement_factor(hatta: FloatArray, E_inf: ArrayLike) -> FloatArray: ...
 def enhancement_factor(hatta: ArrayLike, E_inf: ArrayLike) -> FloatOrArray: ...
 @guard
 def enhancement_factor(hatta: ArrayLike, E_inf: ArrayLike) -> FloatOrArray:
-    """Enhancement factor of a second-order reaction, DeCoursey's explicit approximation.
+    r"""Enhancement factor of a second-order reaction, DeCoursey's explicit approximation.
 
     .. math::
-        E = -\\frac{Ha^2}{2(E_\\infty - 1)}
-        + \\sqrt{\\frac{Ha^4}{4(E_\\infty - 1)^2} + \\frac{E_\\infty Ha^2}{E_\\infty - 1} + 1}
+        E = -\frac{Ha^2}{2(E_\infty - 1)}
+        + \sqrt{\frac{Ha^4}{4(E_\infty - 1)^2} + \frac{E_\infty Ha^2}{E_\infty - 1} + 1}
 
-    evaluated as :math:`(2 E_\\infty u + 1)/(\\sqrt{u^2 + 2E_\\infty u + 1} + u)` with
-    :math:`u = Ha^2/(2(E_\\infty - 1))`, which is free of cancellation at large Ha.
+    evaluated as :math:`(2 E_\infty u + 1)/(\sqrt{u^2 + 2E_\infty u + 1} + u)` with
+    :math:`u = Ha^2/(2(E_\infty - 1))`, which is free of cancellation at large Ha.
 
     Parameters
     ----------
@@ -406,12 +406,12 @@ def absorption_enhancement(
     c_Ai: ArrayLike,
     nu: ArrayLike = 1.0,
 ) -> EnhancementResult:
-    """Enhancement of absorption by a second-order reaction, with the regime named.
+    r"""Enhancement of absorption by a second-order reaction, with the regime named.
 
     .. math::
-        Ha = \\frac{\\sqrt{k_2 c_B D_A}}{k_L},\\quad
-        E_\\infty = \\sqrt{\\frac{D_A}{D_B}} + \\sqrt{\\frac{D_B}{D_A}}\\frac{c_B}{\\nu c_{Ai}},\\quad
-        E = E_{\\mathrm{DeCoursey}}(Ha, E_\\infty)
+        Ha = \frac{\sqrt{k_2 c_B D_A}}{k_L},\quad
+        E_\infty = \sqrt{\frac{D_A}{D_B}} + \sqrt{\frac{D_B}{D_A}}\frac{c_B}{\nu c_{Ai}},\quad
+        E = E_{\mathrm{DeCoursey}}(Ha, E_\infty)
 
     Parameters
     ----------

@@ -76,12 +76,12 @@ def transfer_units(
 def transfer_units(
     y_in: ArrayLike, y_out: ArrayLike, x_in: ArrayLike, m: ArrayLike, A: ArrayLike
 ) -> FloatOrArray:
-    """Overall gas-phase transfer units of a dilute absorber with straight lines (Colburn).
+    r"""Overall gas-phase transfer units of a dilute absorber with straight lines (Colburn).
 
     .. math::
-        N_{OG} = \\frac{\\ln\\left[\\left(1 - \\frac{1}{A}\\right)
-        \\frac{y_{in} - m x_{in}}{y_{out} - m x_{in}} + \\frac{1}{A}\\right]}{1 - 1/A},
-        \\qquad N_{OG} = \\frac{y_{in} - y_{out}}{y_{out} - m x_{in}}\\ (A = 1)
+        N_{OG} = \frac{\ln\left[\left(1 - \frac{1}{A}\right)
+        \frac{y_{in} - m x_{in}}{y_{out} - m x_{in}} + \frac{1}{A}\right]}{1 - 1/A},
+        \qquad N_{OG} = \frac{y_{in} - y_{out}}{y_{out} - m x_{in}}\ (A = 1)
 
     Parameters
     ----------
@@ -146,11 +146,11 @@ def transfer_units(
 def stripping_transfer_units(
     x_in: ArrayLike, x_out: ArrayLike, y_in: ArrayLike, m: ArrayLike, S: ArrayLike
 ) -> FloatOrArray:
-    """Overall liquid-phase transfer units of a dilute stripper with straight lines (Colburn).
+    r"""Overall liquid-phase transfer units of a dilute stripper with straight lines (Colburn).
 
     .. math::
-        N_{OL} = \\frac{\\ln\\left[\\left(1 - \\frac{1}{S}\\right)
-        \\frac{x_{in} - y_{in}/m}{x_{out} - y_{in}/m} + \\frac{1}{S}\\right]}{1 - 1/S}
+        N_{OL} = \frac{\ln\left[\left(1 - \frac{1}{S}\right)
+        \frac{x_{in} - y_{in}/m}{x_{out} - y_{in}/m} + \frac{1}{S}\right]}{1 - 1/S}
 
     Parameters
     ----------
@@ -205,10 +205,10 @@ def stripping_transfer_units(
 
 @guard
 def transfer_unit_height(flow: ArrayLike, Ka: ArrayLike) -> FloatOrArray:
-    """Height of a transfer unit, H = flow / (K a).
+    r"""Height of a transfer unit, H = flow / (K a).
 
-    .. math:: H_{OG} = \\frac{G}{K_y a},\\quad H_{OL} = \\frac{L}{K_x a},\\quad
-        H_G = \\frac{G}{k_y a},\\quad H_L = \\frac{L}{k_x a}
+    .. math:: H_{OG} = \frac{G}{K_y a},\quad H_{OL} = \frac{L}{K_x a},\quad
+        H_G = \frac{G}{k_y a},\quad H_L = \frac{L}{k_x a}
 
     Parameters
     ----------
@@ -246,9 +246,9 @@ def transfer_unit_height(flow: ArrayLike, Ka: ArrayLike) -> FloatOrArray:
 
 @guard
 def overall_gas_htu(H_G: ArrayLike, H_L: ArrayLike, A: ArrayLike) -> FloatOrArray:
-    """Overall gas-phase HTU from the film HTUs, straight equilibrium line.
+    r"""Overall gas-phase HTU from the film HTUs, straight equilibrium line.
 
-    .. math:: H_{OG} = H_G + \\frac{H_L}{A}
+    .. math:: H_{OG} = H_G + \frac{H_L}{A}
 
     Parameters
     ----------
@@ -288,9 +288,9 @@ def overall_gas_htu(H_G: ArrayLike, H_L: ArrayLike, A: ArrayLike) -> FloatOrArra
 
 @guard
 def overall_liquid_htu(H_G: ArrayLike, H_L: ArrayLike, A: ArrayLike) -> FloatOrArray:
-    """Overall liquid-phase HTU from the film HTUs, straight equilibrium line.
+    r"""Overall liquid-phase HTU from the film HTUs, straight equilibrium line.
 
-    .. math:: H_{OL} = H_L + A\\,H_G
+    .. math:: H_{OL} = H_L + A\,H_G
 
     Parameters
     ----------
@@ -374,11 +374,11 @@ def numerical_transfer_units(
     equilibrium: float | Callable[[float], float],
     concentrated: bool = False,
 ) -> float:
-    """Overall gas-phase transfer units by quadrature, for curved equilibrium or concentrated gas.
+    r"""Overall gas-phase transfer units by quadrature, for curved equilibrium or concentrated gas.
 
     .. math::
-        N_{OG} = \\int_{y_{out}}^{y_{in}} \\frac{dy}{y - y^*}\\ \\text{(dilute)},\\qquad
-        N_{OG} = \\int_{y_{out}}^{y_{in}} \\frac{(1-y)^*_{lm}\\,dy}{(1-y)(y - y^*)}\\ \\text{(concentrated)}
+        N_{OG} = \int_{y_{out}}^{y_{in}} \frac{dy}{y - y^*}\ \text{(dilute)},\qquad
+        N_{OG} = \int_{y_{out}}^{y_{in}} \frac{(1-y)^*_{lm}\,dy}{(1-y)(y - y^*)}\ \text{(concentrated)}
 
     with the operating line :math:`x = x_{in} + (y - y_{out})/(L/G)` (dilute) or
     :math:`X = X_{in} + (Y - Y_{out})/(L'/G')` in solute-free mole ratios
@@ -488,12 +488,12 @@ def film_transfer_units(
     kxa_over_kya: float,
     phase: str = "gas",
 ) -> float:
-    """Gas-film or liquid-film transfer units of a dilute absorber, through the interface compositions.
+    r"""Gas-film or liquid-film transfer units of a dilute absorber, through the interface compositions.
 
     .. math::
-        N_G = \\int_{y_{out}}^{y_{in}} \\frac{dy}{y - y_i},\\qquad
-        N_L = \\int_{x_{in}}^{x_{out}} \\frac{dx}{x_i - x},\\qquad
-        \\frac{y - y_i}{x_i - x} = \\frac{k_x a}{k_y a},\\ y_i = y^*(x_i)
+        N_G = \int_{y_{out}}^{y_{in}} \frac{dy}{y - y_i},\qquad
+        N_L = \int_{x_{in}}^{x_{out}} \frac{dx}{x_i - x},\qquad
+        \frac{y - y_i}{x_i - x} = \frac{k_x a}{k_y a},\ y_i = y^*(x_i)
 
     along the operating line :math:`x = x_{in} + (y - y_{out})/(L/G)`.
 
@@ -657,15 +657,15 @@ def column_profile(
     concentrated: bool = False,
     points: int = 51,
 ) -> ColumnProfile:
-    """Integrate a counter-current absorber along its height: size it for y_out or rate a height.
+    r"""Integrate a counter-current absorber along its height: size it for y_out or rate a height.
 
     .. math::
-        G\\frac{dy}{ds} = L\\frac{dx}{ds} = K_y a\\,(y - y^*(x, T))\\ \\text{(dilute)},\\qquad
-        G'\\frac{dY}{ds} = L'\\frac{dX}{ds} = \\frac{K_y a\\,(y - y^*)}{(1-y)^*_{lm}}\\
-        \\text{(concentrated)}
+        G\frac{dy}{ds} = L\frac{dx}{ds} = K_y a\,(y - y^*(x, T))\ \text{(dilute)},\qquad
+        G'\frac{dY}{ds} = L'\frac{dX}{ds} = \frac{K_y a\,(y - y^*)}{(1-y)^*_{lm}}\
+        \text{(concentrated)}
 
     with s the depth below the top, and the liquid temperature from an
-    adiabatic balance :math:`T = T_{in} + \\Delta H_{abs}(X - X_{in})/c_{p,L}`.
+    adiabatic balance :math:`T = T_{in} + \Delta H_{abs}(X - X_{in})/c_{p,L}`.
 
     Parameters
     ----------

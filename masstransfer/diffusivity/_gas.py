@@ -1,4 +1,4 @@
-"""Binary diffusion coefficients in gases at low pressure.
+r"""Binary diffusion coefficients in gases at low pressure.
 
 Two layers, as everywhere in the library:
 
@@ -8,7 +8,7 @@ Two layers, as everywhere in the library:
 * names in: :func:`gas_diffusivity` and :func:`gas_diffusivity_in_mixture`
   resolve the species once (cached) and call the numeric layer.
 
-All low-pressure methods give :math:`D_{AB} \\propto 1/P`; above about
+All low-pressure methods give :math:`D_{AB} \propto 1/P`; above about
 1 MPa the product :math:`PD_{AB}` starts to fall and the methods warn.
 Estimates only: check designs that affect safety against measured data.
 """
@@ -110,13 +110,13 @@ def fuller(
     v_a: float,
     v_b: float,
 ) -> FloatOrArray:
-    """Binary gas diffusivity by the method of Fuller, Schettler and Giddings.
+    r"""Binary gas diffusivity by the method of Fuller, Schettler and Giddings.
 
     .. math::
 
-        D_{AB} = \\frac{0.00143\\,T^{1.75}}
-        {P\\,M_{AB}^{1/2}\\,\\left[(\\Sigma_v)_A^{1/3} + (\\Sigma_v)_B^{1/3}\\right]^2},
-        \\qquad M_{AB} = \\frac{2}{1/M_A + 1/M_B}
+        D_{AB} = \frac{0.00143\,T^{1.75}}
+        {P\,M_{AB}^{1/2}\,\left[(\Sigma_v)_A^{1/3} + (\Sigma_v)_B^{1/3}\right]^2},
+        \qquad M_{AB} = \frac{2}{1/M_A + 1/M_B}
 
     with :math:`D_{AB}` in cm^2/s, P in bar and M in g/mol in the source;
     this function takes and returns SI units.
@@ -192,9 +192,9 @@ def _fuller_constant(Ma: FloatOrArray, Mb: FloatOrArray, va: FloatOrArray, vb: F
 
 @guard
 def fuller_volume(sp: str | Species) -> float:
-    """Fuller diffusion volume of a species, from its formula and structure.
+    r"""Fuller diffusion volume of a species, from its formula and structure.
 
-    .. math:: \\Sigma_v = \\sum_i n_i v_i + n_{\\mathrm{rings}}\\,\\Delta v_{\\mathrm{ring}}
+    .. math:: \Sigma_v = \sum_i n_i v_i + n_{\mathrm{rings}}\,\Delta v_{\mathrm{ring}}
 
     The special-molecule volume is used where the source tabulates one
     (H2, N2, O2, air, CO2, H2O, NH3, ...).  Otherwise atomic increments for
@@ -284,26 +284,26 @@ _TSTAR_RANGE: Final = (0.3, 100.0)
 
 @guard
 def neufeld_collision_integral(T_star: ArrayLike) -> FloatOrArray:
-    """Diffusion collision integral of the Lennard-Jones 12-6 potential.
+    r"""Diffusion collision integral of the Lennard-Jones 12-6 potential.
 
     .. math::
 
-        \\Omega_D = \\frac{A}{T^{*B}} + \\frac{C}{e^{DT^*}} + \\frac{E}{e^{FT^*}}
-        + \\frac{G}{e^{HT^*}}
+        \Omega_D = \frac{A}{T^{*B}} + \frac{C}{e^{DT^*}} + \frac{E}{e^{FT^*}}
+        + \frac{G}{e^{HT^*}}
 
     Parameters
     ----------
     T_star : float or array_like
-        Reduced temperature :math:`kT/\\varepsilon_{AB}` [-].
+        Reduced temperature :math:`kT/\varepsilon_{AB}` [-].
 
     Returns
     -------
     float or numpy.ndarray
-        Collision integral :math:`\\Omega_D` [-].
+        Collision integral :math:`\Omega_D` [-].
 
     Notes
     -----
-    Fitted for :math:`0.3 \\le T^* \\le 100`; a warning is issued outside.
+    Fitted for :math:`0.3 \le T^* \le 100`; a warning is issued outside.
 
     References
     ----------
@@ -346,11 +346,11 @@ def _kinetic(
     eps: float,
     delta2: float,
 ) -> FloatOrArray:
-    """Chapman-Enskog form shared by three methods (inputs already checked).
+    r"""Chapman-Enskog form shared by three methods (inputs already checked).
 
     ``constant`` is 0.00266 (Chapman-Enskog, Brokaw) or Wilke-Lee's
     :math:`(3.03 - 0.98/M_{AB}^{1/2})10^{-3}`; ``sigma_a`` in angstrom;
-    ``delta2`` is Brokaw's polar term :math:`\\delta_{AB}^2` (0 otherwise).
+    ``delta2`` is Brokaw's polar term :math:`\delta_{AB}^2` (0 otherwise).
     """
     Ts = Tv / eps
     omega = _omega_d(Ts)
@@ -390,15 +390,15 @@ def chapman_enskog(
     sigma_ab: float,
     epsilon_ab_k: float,
 ) -> FloatOrArray:
-    """Binary gas diffusivity from Chapman-Enskog kinetic theory.
+    r"""Binary gas diffusivity from Chapman-Enskog kinetic theory.
 
     .. math::
 
-        D_{AB} = \\frac{0.00266\\,T^{3/2}}{P\\,M_{AB}^{1/2}\\,\\sigma_{AB}^2\\,\\Omega_D}
+        D_{AB} = \frac{0.00266\,T^{3/2}}{P\,M_{AB}^{1/2}\,\sigma_{AB}^2\,\Omega_D}
 
     (cm^2/s, bar, angstrom, g/mol in the source; SI here), with
-    :math:`\\Omega_D` from :func:`neufeld_collision_integral` at
-    :math:`T^* = T/(\\varepsilon_{AB}/k)`.
+    :math:`\Omega_D` from :func:`neufeld_collision_integral` at
+    :math:`T^* = T/(\varepsilon_{AB}/k)`.
 
     Parameters
     ----------
@@ -411,10 +411,10 @@ def chapman_enskog(
     M_b : float
         Molar mass of B [kg/mol].
     sigma_ab : float
-        Pair collision diameter [m], usually :math:`(\\sigma_A+\\sigma_B)/2`.
+        Pair collision diameter [m], usually :math:`(\sigma_A+\sigma_B)/2`.
     epsilon_ab_k : float
         Pair well depth over Boltzmann's constant [K], usually
-        :math:`\\sqrt{\\varepsilon_A\\varepsilon_B}/k`.
+        :math:`\sqrt{\varepsilon_A\varepsilon_B}/k`.
 
     Returns
     -------
@@ -466,12 +466,12 @@ def wilke_lee(
     sigma_ab: float,
     epsilon_ab_k: float,
 ) -> FloatOrArray:
-    """Binary gas diffusivity by the Wilke-Lee modification of Chapman-Enskog.
+    r"""Binary gas diffusivity by the Wilke-Lee modification of Chapman-Enskog.
 
     .. math::
 
-        D_{AB} = \\frac{\\left[3.03 - 0.98/M_{AB}^{1/2}\\right]10^{-3}\\,T^{3/2}}
-        {P\\,M_{AB}^{1/2}\\,\\sigma_{AB}^2\\,\\Omega_D}
+        D_{AB} = \frac{\left[3.03 - 0.98/M_{AB}^{1/2}\right]10^{-3}\,T^{3/2}}
+        {P\,M_{AB}^{1/2}\,\sigma_{AB}^2\,\Omega_D}
 
     (cm^2/s, bar, angstrom, g/mol in the source; SI here).
 
@@ -500,8 +500,8 @@ def wilke_lee(
     Wilke and Lee fitted the constant to measured data for pairs involving
     larger vapours; for a species without tabulated Lennard-Jones values
     :func:`gas_diffusivity` uses their estimates
-    :math:`\\sigma = 1.18\\,V_b^{1/3}` (angstrom, cm^3/mol) and
-    :math:`\\varepsilon/k = 1.15\\,T_b`.  Average absolute error about
+    :math:`\sigma = 1.18\,V_b^{1/3}` (angstrom, cm^3/mol) and
+    :math:`\varepsilon/k = 1.15\,T_b`.  Average absolute error about
     5-7 % (Poling et al. 2001, Table 11-2).
 
     References
@@ -562,20 +562,20 @@ def brokaw(
     dipole_a: float,
     dipole_b: float,
 ) -> FloatOrArray:
-    """Binary gas diffusivity for polar pairs by Brokaw's method.
+    r"""Binary gas diffusivity for polar pairs by Brokaw's method.
 
     Stockmayer-potential collision integral and parameters:
 
     .. math::
 
-        \\Omega_D = \\Omega_D^{\\mathrm{Neufeld}} + \\frac{0.19\\,\\delta_{AB}^2}{T^*},
-        \\quad \\delta = \\frac{1.94\\times10^3\\,\\mu_p^2}{V_b T_b},
-        \\quad \\varepsilon/k = 1.18(1 + 1.3\\delta^2)T_b,
-        \\quad \\sigma = \\left(\\frac{1.585\\,V_b}{1 + 1.3\\delta^2}\\right)^{1/3}
+        \Omega_D = \Omega_D^{\mathrm{Neufeld}} + \frac{0.19\,\delta_{AB}^2}{T^*},
+        \quad \delta = \frac{1.94\times10^3\,\mu_p^2}{V_b T_b},
+        \quad \varepsilon/k = 1.18(1 + 1.3\delta^2)T_b,
+        \quad \sigma = \left(\frac{1.585\,V_b}{1 + 1.3\delta^2}\right)^{1/3}
 
-    with geometric-mean combining rules for :math:`\\delta`,
-    :math:`\\varepsilon` and :math:`\\sigma`, then the Chapman-Enskog
-    equation (:math:`\\mu_p` in debye, :math:`V_b` in cm^3/mol, σ in
+    with geometric-mean combining rules for :math:`\delta`,
+    :math:`\varepsilon` and :math:`\sigma`, then the Chapman-Enskog
+    equation (:math:`\mu_p` in debye, :math:`V_b` in cm^3/mol, σ in
     angstrom in the source; SI here).
 
     Parameters
@@ -650,10 +650,10 @@ def brokaw(
 
 @guard(elementwise=False)  # sums over the components (last axis)
 def blanc(D_binary: ArrayLike, mole_fractions: ArrayLike) -> FloatOrArray:
-    """Diffusivity of a dilute solute in a gas mixture by Blanc's law.
+    r"""Diffusivity of a dilute solute in a gas mixture by Blanc's law.
 
-    .. math:: \\frac{1}{D_{1m}} = \\sum_{j\\ne 1} \\frac{y_j'}{D_{1j}},
-        \\qquad y_j' = y_j / \\textstyle\\sum_{k\\ne1} y_k
+    .. math:: \frac{1}{D_{1m}} = \sum_{j\ne 1} \frac{y_j'}{D_{1j}},
+        \qquad y_j' = y_j / \textstyle\sum_{k\ne1} y_k
 
     Parameters
     ----------
@@ -708,9 +708,9 @@ def rescale_gas_diffusivity(
     P: ArrayLike = 101325.0,
     exponent: float = 1.75,
 ) -> FloatOrArray:
-    """Carry a measured gas diffusivity to another temperature and pressure.
+    r"""Carry a measured gas diffusivity to another temperature and pressure.
 
-    .. math:: D(T, P) = D_{ref}\\,\\left(\\frac{T}{T_{ref}}\\right)^{n}\\,\\frac{P_{ref}}{P}
+    .. math:: D(T, P) = D_{ref}\,\left(\frac{T}{T_{ref}}\right)^{n}\,\frac{P_{ref}}{P}
 
     Parameters
     ----------

@@ -97,12 +97,12 @@ def wilke_chang(
     V_solute: float,
     phi: float = 1.0,
 ) -> FloatOrArray:
-    """Infinite-dilution liquid diffusivity by the Wilke-Chang correlation.
+    r"""Infinite-dilution liquid diffusivity by the Wilke-Chang correlation.
 
     .. math::
 
-        D_{AB}^\\circ = \\frac{7.4\\times10^{-8}\\,(\\phi M_B)^{1/2}\\,T}
-        {\\eta_B\\,V_A^{0.6}}
+        D_{AB}^\circ = \frac{7.4\times10^{-8}\,(\phi M_B)^{1/2}\,T}
+        {\eta_B\,V_A^{0.6}}
 
     (cm^2/s, g/mol, cP, cm^3/mol in the source; SI here).
 
@@ -158,12 +158,12 @@ def wilke_chang(
 
 @guard
 def hayduk_minhas_aqueous(T: ArrayLike, mu_water: ArrayLike, V_solute: float) -> FloatOrArray:
-    """Infinite-dilution diffusivity in water by Hayduk and Minhas.
+    r"""Infinite-dilution diffusivity in water by Hayduk and Minhas.
 
     .. math::
 
-        D_{AW}^\\circ = 1.25\\times10^{-8}\\,(V_A^{-0.19} - 0.292)\\,T^{1.52}\\,
-        \\eta_W^{\\varepsilon^*}, \\qquad \\varepsilon^* = 9.58/V_A - 1.12
+        D_{AW}^\circ = 1.25\times10^{-8}\,(V_A^{-0.19} - 0.292)\,T^{1.52}\,
+        \eta_W^{\varepsilon^*}, \qquad \varepsilon^* = 9.58/V_A - 1.12
 
     (cm^2/s, cm^3/mol, cP in the source; SI here).
 
@@ -219,12 +219,12 @@ def hayduk_minhas_aqueous(T: ArrayLike, mu_water: ArrayLike, V_solute: float) ->
 
 @guard
 def hayduk_minhas_paraffin(T: ArrayLike, mu_solvent: ArrayLike, V_solute: float) -> FloatOrArray:
-    """Infinite-dilution diffusivity in normal paraffins by Hayduk and Minhas.
+    r"""Infinite-dilution diffusivity in normal paraffins by Hayduk and Minhas.
 
     .. math::
 
-        D_{AB}^\\circ = 13.3\\times10^{-8}\\,T^{1.47}\\,\\eta_B^{\\varepsilon}\\,V_A^{-0.71},
-        \\qquad \\varepsilon = 10.2/V_A - 0.791
+        D_{AB}^\circ = 13.3\times10^{-8}\,T^{1.47}\,\eta_B^{\varepsilon}\,V_A^{-0.71},
+        \qquad \varepsilon = 10.2/V_A - 0.791
 
     (cm^2/s, cP, cm^3/mol in the source; SI here).
 
@@ -278,12 +278,12 @@ def hayduk_minhas(
     parachor_solute: float,
     parachor_solvent: ArrayLike,
 ) -> FloatOrArray:
-    """Infinite-dilution diffusivity in non-aqueous solvents by Hayduk and Minhas.
+    r"""Infinite-dilution diffusivity in non-aqueous solvents by Hayduk and Minhas.
 
     .. math::
 
-        D_{AB}^\\circ = 1.55\\times10^{-8}\\,T^{1.29}\\,
-        \\frac{\\mathcal{P}_B^{0.5}\\,\\mathcal{P}_A^{-0.42}}{\\eta_B^{0.92}\\,V_B^{0.23}}
+        D_{AB}^\circ = 1.55\times10^{-8}\,T^{1.29}\,
+        \frac{\mathcal{P}_B^{0.5}\,\mathcal{P}_A^{-0.42}}{\eta_B^{0.92}\,V_B^{0.23}}
 
     (cm^2/s, cP, cm^3/mol, parachors in cm^3 g^0.25 s^-0.5 mol^-1 in the
     source; SI here).
@@ -352,12 +352,12 @@ def tyn_calus(
     parachor_solute: float,
     parachor_solvent: ArrayLike,
 ) -> FloatOrArray:
-    """Infinite-dilution liquid diffusivity by the Tyn-Calus correlation.
+    r"""Infinite-dilution liquid diffusivity by the Tyn-Calus correlation.
 
     .. math::
 
-        D_{AB}^\\circ = 8.93\\times10^{-8}\\,\\left(\\frac{V_A}{V_B^2}\\right)^{1/6}
-        \\left(\\frac{\\mathcal{P}_B}{\\mathcal{P}_A}\\right)^{0.6}\\frac{T}{\\eta_B}
+        D_{AB}^\circ = 8.93\times10^{-8}\,\left(\frac{V_A}{V_B^2}\right)^{1/6}
+        \left(\frac{\mathcal{P}_B}{\mathcal{P}_A}\right)^{0.6}\frac{T}{\eta_B}
 
     (cm^2/s, cm^3/mol, cP in the source; SI here).
 
@@ -418,10 +418,10 @@ def tyn_calus(
 def stokes_einstein(
     T: ArrayLike, mu_solvent: ArrayLike, radius: ArrayLike, boundary: str = "stick"
 ) -> FloatOrArray:
-    """Diffusivity of a large sphere or particle by the Stokes-Einstein equation.
+    r"""Diffusivity of a large sphere or particle by the Stokes-Einstein equation.
 
-    .. math:: D = \\frac{k_B T}{c\\,\\pi\\,\\eta\\,r}, \\qquad c = 6
-        \\text{ (stick) or } 4 \\text{ (slip)}
+    .. math:: D = \frac{k_B T}{c\,\pi\,\eta\,r}, \qquad c = 6
+        \text{ (stick) or } 4 \text{ (slip)}
 
     Parameters
     ----------
@@ -936,7 +936,7 @@ def liquid_diffusivity(
     phi: float | None = None,
     radius: float | None = None,
 ) -> FloatOrArray:
-    """Infinite-dilution diffusivity of ``solute`` in liquid ``solvent``.
+    r"""Infinite-dilution diffusivity of ``solute`` in liquid ``solvent``.
 
     Parameters
     ----------
@@ -985,7 +985,7 @@ def liquid_diffusivity(
       V_A and its parachor doubled; the same for an organic acid as the solute unless the
       solvent is water, methanol or a butanol.
     * The same two methods, a non-polar solute in a monohydroxy alcohol: V_B and the solvent
-      parachor are multiplied by :math:`8\\eta_B` (cP).  A solute whose dipole moment is
+      parachor are multiplied by :math:`8\eta_B` (cP).  A solute whose dipole moment is
       unknown is not assumed non-polar; the rule is then not applied and a note says so.
     * Small molecules (H2, O2, N2, CO2, H2O, NH3, ...) use their tabulated molar volumes.
     * None of the methods is meant for viscous solvents (above about 20 mPa s); an

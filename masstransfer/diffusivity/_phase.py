@@ -1,11 +1,11 @@
-"""Phase checks: is the medium a vapour (gas methods) or a liquid (liquid methods) at T and P.
+r"""Phase checks: is the medium a vapour (gas methods) or a liquid (liquid methods) at T and P.
 
 The check needs only the medium's normal boiling point, critical point and melting point, so it
 costs no property model: the vapour pressure is taken from the Clausius-Clapeyron equation
 integrated through the normal boiling point and the critical point,
 
-.. math:: \\ln p^{sat} = \\ln P_c - B\\left(\\frac{1}{T} - \\frac{1}{T_c}\\right),
-    \\qquad B = \\frac{\\ln(P_c / P_{atm})}{1/T_b - 1/T_c}
+.. math:: \ln p^{sat} = \ln P_c - B\left(\frac{1}{T} - \frac{1}{T_c}\right),
+    \qquad B = \frac{\ln(P_c / P_{atm})}{1/T_b - 1/T_c}
 
 (Poling, Prausnitz & O'Connell 2001, Section 7-2, from memory), exact at both points and within
 about 30 % between the triple point and the boiling point; a state within :data:`MARGIN` of the

@@ -13,9 +13,9 @@ __all__ = ["bosanquet", "effective_diffusivity", "knudsen_diffusivity"]
 
 @guard
 def knudsen_diffusivity(T: ArrayLike, pore_diameter: ArrayLike, M: float) -> FloatOrArray:
-    """Knudsen diffusivity of a gas in a straight cylindrical pore.
+    r"""Knudsen diffusivity of a gas in a straight cylindrical pore.
 
-    .. math:: D_K = \\frac{d_p}{3}\\sqrt{\\frac{8RT}{\\pi M}}
+    .. math:: D_K = \frac{d_p}{3}\sqrt{\frac{8RT}{\pi M}}
 
     Parameters
     ----------
@@ -62,9 +62,9 @@ def knudsen_diffusivity(T: ArrayLike, pore_diameter: ArrayLike, M: float) -> Flo
 
 @guard
 def bosanquet(D_molecular: ArrayLike, D_knudsen: ArrayLike) -> FloatOrArray:
-    """Combine molecular and Knudsen diffusivities in the transition regime (Bosanquet).
+    r"""Combine molecular and Knudsen diffusivities in the transition regime (Bosanquet).
 
-    .. math:: \\frac{1}{D} = \\frac{1}{D_{AB}} + \\frac{1}{D_K}
+    .. math:: \frac{1}{D} = \frac{1}{D_{AB}} + \frac{1}{D_K}
 
     Parameters
     ----------
@@ -104,9 +104,9 @@ def bosanquet(D_molecular: ArrayLike, D_knudsen: ArrayLike) -> FloatOrArray:
 def effective_diffusivity(
     D: ArrayLike, porosity: ArrayLike, tortuosity: ArrayLike, constriction: ArrayLike = 1.0
 ) -> FloatOrArray:
-    """Effective diffusivity in a porous solid from porosity and tortuosity.
+    r"""Effective diffusivity in a porous solid from porosity and tortuosity.
 
-    .. math:: D_e = \\frac{\\varepsilon\\,\\delta}{\\tau}\\,D
+    .. math:: D_e = \frac{\varepsilon\,\delta}{\tau}\,D
 
     Parameters
     ----------

@@ -46,13 +46,13 @@ class ArrheniusFit(FrozenResult):
 def arrhenius_diffusivity(
     T: ArrayLike, D0: ArrayLike, Ea: ArrayLike, T_ref: float | None = None
 ) -> FloatOrArray:
-    """Diffusivity (or solubility, or permeability) from an Arrhenius law.
+    r"""Diffusivity (or solubility, or permeability) from an Arrhenius law.
 
     .. math::
 
-        D = D_0 \\exp\\!\\left(-\\frac{E_a}{RT}\\right)
-        \\quad\\text{or, with } T_{ref}:\\quad
-        D = D_0 \\exp\\!\\left[-\\frac{E_a}{R}\\left(\\frac{1}{T}-\\frac{1}{T_{ref}}\\right)\\right]
+        D = D_0 \exp\!\left(-\frac{E_a}{RT}\right)
+        \quad\text{or, with } T_{ref}:\quad
+        D = D_0 \exp\!\left[-\frac{E_a}{R}\left(\frac{1}{T}-\frac{1}{T_{ref}}\right)\right]
 
     Parameters
     ----------
@@ -113,9 +113,9 @@ def arrhenius_diffusivity(
 
 @guard
 def arrhenius_parameters(T: ArrayLike, D: ArrayLike) -> ArrheniusFit:
-    """Fit D0 and Ea of an Arrhenius law to measured diffusivities.
+    r"""Fit D0 and Ea of an Arrhenius law to measured diffusivities.
 
-    Least squares on :math:`\\ln D = \\ln D_0 - E_a/(RT)`.
+    Least squares on :math:`\ln D = \ln D_0 - E_a/(RT)`.
 
     Parameters
     ----------

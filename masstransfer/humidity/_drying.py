@@ -97,15 +97,15 @@ def drying_time(
     biot: float | None = None,
     points: int = 60,
 ) -> DryingResult:
-    """Time to dry a wet body from its initial to a final moisture content.
+    r"""Time to dry a wet body from its initial to a final moisture content.
 
     Constant-rate period (surface wet), then falling-rate period (diffusion inside the body,
     surface at equilibrium, uniform moisture at the start of the period):
 
     .. math::
 
-        t_c = \\frac{\\rho_s (V/A) (X_0 - X_c)}{\\dot m''}, \\qquad
-        \\frac{X_c - X}{X_c - X_e} = F\\!\\left(\\frac{D\\,(t - t_c)}{a^2}\\right)
+        t_c = \frac{\rho_s (V/A) (X_0 - X_c)}{\dot m''}, \qquad
+        \frac{X_c - X}{X_c - X_e} = F\!\left(\frac{D\,(t - t_c)}{a^2}\right)
 
     with F the fraction released by a slab, cylinder or sphere (Crank), V/A = a, a/2 or
     a/3 for a slab dried on both faces, a cylinder and a sphere of half-thickness or radius a.
@@ -133,7 +133,7 @@ def drying_time(
     X_equilibrium : float or array_like
         Equilibrium moisture content with the drying gas [kg/kg].
     biot : float, optional
-        Mass Biot number of the falling-rate period, :math:`k\\,a/(K D)` [-] (k the external
+        Mass Biot number of the falling-rate period, :math:`k\,a/(K D)` [-] (k the external
         coefficient, K the partition between body and gas); None for a surface at equilibrium.
         A finite value keeps the rate finite at the start of the falling-rate period.
     points : int

@@ -259,16 +259,16 @@ def evaporation_rate(
     mu: Override = None,
     D: Override = None,
 ) -> EvaporationResult:
-    """Evaporation rate of a liquid from a wet surface into a gas, in one call.
+    r"""Evaporation rate of a liquid from a wet surface into a gas, in one call.
 
     The surface temperature :math:`T_s` solves the steady energy balance
 
     .. math::
 
-        h^\\bullet (T - T_s) + \\varepsilon\\sigma(T_R^4 - T_s^4) + U_k (T_k - T_s)
-        = N_A M_A \\lambda(T_s),
-        \\qquad N_A = F \\ln\\frac{1 - y_{A,\\infty}}{1 - y_{A,s}},
-        \\qquad y_{A,s} = \\frac{p^{sat}(T_s)}{P}
+        h^\bullet (T - T_s) + \varepsilon\sigma(T_R^4 - T_s^4) + U_k (T_k - T_s)
+        = N_A M_A \lambda(T_s),
+        \qquad N_A = F \ln\frac{1 - y_{A,\infty}}{1 - y_{A,s}},
+        \qquad y_{A,s} = \frac{p^{sat}(T_s)}{P}
 
     with :math:`F = k_c P/(R T_f)`, k_c from h by the Chilton-Colburn analogy (or h and k_c
     from a correlation record's Nu and Sh at the same Re), gas properties at the film

@@ -36,9 +36,9 @@ HUMIDITY_KEYWORDS = ("relative_humidity", "y", "humidity_ratio", "dew_point")
 
 @guard
 def humidity_ratio_from_y(y: ArrayLike, M_vapour: ArrayLike, M_gas: ArrayLike) -> FloatOrArray:
-    """Humidity ratio (kg vapour per kg dry gas) from the vapour mole fraction.
+    r"""Humidity ratio (kg vapour per kg dry gas) from the vapour mole fraction.
 
-    .. math:: Y = \\frac{y}{1 - y}\\,\\frac{M_v}{M_g}
+    .. math:: Y = \frac{y}{1 - y}\,\frac{M_v}{M_g}
 
     Parameters
     ----------
@@ -78,9 +78,9 @@ def humidity_ratio_from_y(y: ArrayLike, M_vapour: ArrayLike, M_gas: ArrayLike) -
 
 @guard
 def y_from_humidity_ratio(humidity_ratio: ArrayLike, M_vapour: ArrayLike, M_gas: ArrayLike) -> FloatOrArray:
-    """Vapour mole fraction from the humidity ratio (kg vapour per kg dry gas).
+    r"""Vapour mole fraction from the humidity ratio (kg vapour per kg dry gas).
 
-    .. math:: y = \\frac{Y M_g / M_v}{1 + Y M_g / M_v}
+    .. math:: y = \frac{Y M_g / M_v}{1 + Y M_g / M_v}
 
     Parameters
     ----------
@@ -459,15 +459,15 @@ def humid_gas_state(
     cp_liquid: Override = None,
     cp: Override = None,
 ) -> HumidGasState:
-    """Psychrometric state of a gas holding the vapour of ``liquid``, from one humidity measure.
+    r"""Psychrometric state of a gas holding the vapour of ``liquid``, from one humidity measure.
 
     .. math::
 
-        Y = \\frac{y}{1-y}\\frac{M_v}{M_g}, \\qquad
-        H = \\int_{T_0}^{T} c_{p,g}\\,dT + Y\\left[\\lambda(T_0) + \\int_{T_0}^{T} c_{p,v}\\,dT\\right]
+        Y = \frac{y}{1-y}\frac{M_v}{M_g}, \qquad
+        H = \int_{T_0}^{T} c_{p,g}\,dT + Y\left[\lambda(T_0) + \int_{T_0}^{T} c_{p,v}\,dT\right]
 
     and the adiabatic-saturation temperature :math:`T_{as}` from
-    :math:`H(T, Y) + (Y_{as} - Y)\\,h_L(T_{as}) = H(T_{as}, Y_{as})`.
+    :math:`H(T, Y) + (Y_{as} - Y)\,h_L(T_{as}) = H(T_{as}, Y_{as})`.
 
     Parameters
     ----------

@@ -74,13 +74,13 @@ def merkel_ntu(
     liquid: str | Species = "water",
     gas: str | Species | Mapping[str, float] = "air",
 ) -> FloatOrArray:
-    """Merkel number of transfer units of a counter-flow cooling tower.
+    r"""Merkel number of transfer units of a counter-flow cooling tower.
 
     .. math::
 
-        NTU = \\frac{k_Y a V}{L} = \\int_{T_{L,out}}^{T_{L,in}}
-        \\frac{c_{p,L}\\,dT_L}{H_s(T_L) - H}, \\qquad
-        H = H_{in} + \\frac{L}{G}\\left[h_L(T_L) - h_L(T_{L,out})\\right]
+        NTU = \frac{k_Y a V}{L} = \int_{T_{L,out}}^{T_{L,in}}
+        \frac{c_{p,L}\,dT_L}{H_s(T_L) - H}, \qquad
+        H = H_{in} + \frac{L}{G}\left[h_L(T_L) - h_L(T_{L,out})\right]
 
     Parameters
     ----------
@@ -236,22 +236,22 @@ def counterflow_tower(
     lewis_factor: float | None = None,
     steps: int = 20,
 ) -> TowerProfile:
-    """Stepwise integration of a counter-flow cooling tower or humidifier along its packing.
+    r"""Stepwise integration of a counter-flow cooling tower or humidifier along its packing.
 
-    With :math:`\\tau = k_Y a z / L_{in}` the transfer units from the bottom, :math:`r = L_{in}/G`
-    and :math:`\\ell = L/L_{in}`:
+    With :math:`\tau = k_Y a z / L_{in}` the transfer units from the bottom, :math:`r = L_{in}/G`
+    and :math:`\ell = L/L_{in}`:
 
     .. math::
 
-        \\frac{dY}{d\\tau} = r\\,(Y_s - Y), \\qquad
-        \\frac{dH}{d\\tau} = r\\left[Le_f\\,c_s (T_L - T_G) + (Y_s - Y)\\,h_v(T_L)\\right],
+        \frac{dY}{d\tau} = r\,(Y_s - Y), \qquad
+        \frac{dH}{d\tau} = r\left[Le_f\,c_s (T_L - T_G) + (Y_s - Y)\,h_v(T_L)\right],
 
-        \\ell\\,c_{p,L}\\frac{dT_L}{d\\tau} = Le_f\\,c_s (T_L - T_G)
-        + (Y_s - Y)\\left[h_v(T_L) - h_L(T_L)\\right]
+        \ell\,c_{p,L}\frac{dT_L}{d\tau} = Le_f\,c_s (T_L - T_G)
+        + (Y_s - Y)\left[h_v(T_L) - h_L(T_L)\right]
 
     integrated in :math:`T_L` from the bottom (gas inlet, liquid outlet) to the top by
     fourth-order Runge-Kutta steps, the leaving liquid flow found by iteration so that
-    :math:`\\ell = 1` at the top.
+    :math:`\ell = 1` at the top.
 
     Parameters
     ----------

@@ -1,11 +1,11 @@
-"""An on-disk cache of fitted property curves, so a new process need not rebuild them.
+r"""An on-disk cache of fitted property curves, so a new process need not rebuild them.
 
 Building a gas or liquid model reads ``thermo``'s data and fits each curve, which takes
 seconds in a fresh process.  The fitted curves (coefficients, breaks, range, source) are
 stored once per model in the user's cache directory and read back by later processes.
 
 - Location: ``$MASSTRANSFER_CACHE_DIR`` if set; else ``$XDG_CACHE_HOME/masstransfer``,
-  ``%LOCALAPPDATA%\\masstransfer`` on Windows, or ``~/.cache/masstransfer``.
+  ``%LOCALAPPDATA%\masstransfer`` on Windows, or ``~/.cache/masstransfer``.
 - Versioned: one sub-directory per version of masstransfer, thermo and chemicals, and of
   this file format; a change of any starts afresh.
 - Keyed on everything that changes a curve: the model kind and every constant passed to

@@ -1,4 +1,4 @@
-"""Carrier-gas and solvent-liquid properties over arrays of temperature.
+r"""Carrier-gas and solvent-liquid properties over arrays of temperature.
 
 Each property comes from ``thermo``'s temperature-dependent model for the
 species (the method ``thermo`` ranks first).  The model is resolved once per
@@ -15,7 +15,7 @@ A temperature outside the range of the underlying model raises
 any temperature at which it is not a liquid (below its melting point or
 above its critical point).
 
-Gas density is the ideal-gas value :math:`\\rho = PM/(RT)`; gas viscosity,
+Gas density is the ideal-gas value :math:`\rho = PM/(RT)`; gas viscosity,
 thermal conductivity and heat capacity are the low-pressure values.  They
 suit carrier gases up to a few bar away from their critical point.  Air is
 treated as a mixture of N2, O2 and Ar (composition in
@@ -744,9 +744,9 @@ _PARACHOR_T = 298.15
 
 @guard
 def parachor(liquid: str | Species) -> float:
-    """Parachor of a species from its surface tension and liquid density.
+    r"""Parachor of a species from its surface tension and liquid density.
 
-    .. math:: \\mathcal{P} = \\frac{\\sigma^{1/4} M}{\\rho_L - \\rho_V}
+    .. math:: \mathcal{P} = \frac{\sigma^{1/4} M}{\rho_L - \rho_V}
 
     evaluated by ``chemicals.Parachor`` with ``thermo``'s surface-tension
     and liquid-volume models at 298.15 K, or at the normal boiling point
@@ -843,9 +843,9 @@ PARACHOR_CGS_PER_SI = 5.623413e6
 
 @guard
 def quayle_parachor(atoms: Mapping[str, int], smiles: str | None = None) -> float:
-    """Parachor estimated from structure by Quayle's group contributions.
+    r"""Parachor estimated from structure by Quayle's group contributions.
 
-    .. math:: \\mathcal{P} = \\sum_i n_i P_i + \\sum_{\\mathrm{bonds}} P_b + \\sum_{\\mathrm{rings}} P_r
+    .. math:: \mathcal{P} = \sum_i n_i P_i + \sum_{\mathrm{bonds}} P_b + \sum_{\mathrm{rings}} P_r
 
     Parameters
     ----------
@@ -963,9 +963,9 @@ _HENRY_TABLES = ("Sander T dep", "ChemSep Henry", "Sander Const")
 
 @guard
 def henry_constant(solute: str | Species, solvent: str | Species, T: ArrayLike) -> FloatOrArray:
-    """Henry's-law constant of a dilute gas in a solvent, :math:`p_A = H\\,x_A`.
+    r"""Henry's-law constant of a dilute gas in a solvent, :math:`p_A = H\,x_A`.
 
-    .. math:: H = \\exp\\left(A + \\frac{B}{T} + C\\ln T + DT + \\frac{E}{T^2} + FT^2\\right)
+    .. math:: H = \exp\left(A + \frac{B}{T} + C\ln T + DT + \frac{E}{T^2} + FT^2\right)
 
     with the coefficients of the first of the ``thermo`` interaction-parameter
     tables that holds the pair: Sander's temperature-dependent compilation,

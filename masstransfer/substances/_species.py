@@ -407,9 +407,9 @@ def _molecule(smiles: str) -> Molecule | None:
 
 @guard
 def le_bas_volume(atoms: Mapping[str, int], smiles: str | None = None) -> float:
-    """Molar volume at the normal boiling point by the Le Bas additive method.
+    r"""Molar volume at the normal boiling point by the Le Bas additive method.
 
-    .. math:: V_b = \\sum_i n_i v_i + \\sum_{\\mathrm{rings}} \\Delta v_{\\mathrm{ring}}
+    .. math:: V_b = \sum_i n_i v_i + \sum_{\mathrm{rings}} \Delta v_{\mathrm{ring}}
 
     Parameters
     ----------

@@ -125,11 +125,11 @@ def mass_transfer_coefficient_from_heat(
     Sc: ArrayLike,
     exponent: float = _TWO_THIRDS,
 ) -> FloatOrArray:
-    """Mass-transfer coefficient from a heat-transfer coefficient (Chilton-Colburn).
+    r"""Mass-transfer coefficient from a heat-transfer coefficient (Chilton-Colburn).
 
-    .. math:: k_c = \\frac{h}{\\rho c_p}\\left(\\frac{Pr}{Sc}\\right)^{n} = \\frac{h}{\\rho c_p Le^{n}}
+    .. math:: k_c = \frac{h}{\rho c_p}\left(\frac{Pr}{Sc}\right)^{n} = \frac{h}{\rho c_p Le^{n}}
 
-    from :math:`j_H = St\\,Pr^{2/3} = j_D = St_m Sc^{2/3}` (n = 2/3).  For a
+    from :math:`j_H = St\,Pr^{2/3} = j_D = St_m Sc^{2/3}` (n = 2/3).  For a
     correlation whose Pr (Sc) exponent is m, the consistent choice is
     n = 1 - m (e.g. n = 0.6 for Pr^0.4).
 
@@ -210,9 +210,9 @@ def heat_transfer_coefficient_from_mass(
     Sc: ArrayLike,
     exponent: float = _TWO_THIRDS,
 ) -> FloatOrArray:
-    """Heat-transfer coefficient from a mass-transfer coefficient (Chilton-Colburn).
+    r"""Heat-transfer coefficient from a mass-transfer coefficient (Chilton-Colburn).
 
-    .. math:: h = k_c\\,\\rho c_p\\left(\\frac{Sc}{Pr}\\right)^{n}
+    .. math:: h = k_c\,\rho c_p\left(\frac{Sc}{Pr}\right)^{n}
 
     Parameters
     ----------
@@ -262,9 +262,9 @@ def heat_transfer_coefficient_from_mass(
 def sherwood_from_nusselt(
     Nu: ArrayLike, *, Pr: ArrayLike, Sc: ArrayLike, exponent: float = 1.0 / 3.0
 ) -> FloatOrArray:
-    """Sherwood number from a Nusselt number at the same Reynolds number.
+    r"""Sherwood number from a Nusselt number at the same Reynolds number.
 
-    .. math:: Sh = Nu\\left(\\frac{Sc}{Pr}\\right)^{m}
+    .. math:: Sh = Nu\left(\frac{Sc}{Pr}\right)^{m}
 
     Parameters
     ----------
@@ -309,9 +309,9 @@ def sherwood_from_nusselt(
 def nusselt_from_sherwood(
     Sh: ArrayLike, *, Pr: ArrayLike, Sc: ArrayLike, exponent: float = 1.0 / 3.0
 ) -> FloatOrArray:
-    """Nusselt number from a Sherwood number at the same Reynolds number.
+    r"""Nusselt number from a Sherwood number at the same Reynolds number.
 
-    .. math:: Nu = Sh\\left(\\frac{Pr}{Sc}\\right)^{m}
+    .. math:: Nu = Sh\left(\frac{Pr}{Sc}\right)^{m}
 
     Parameters
     ----------
@@ -418,9 +418,9 @@ def stanton_reynolds(f_darcy: ArrayLike) -> FloatOrArray:
 
 @guard
 def stanton_prandtl_taylor(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
-    """Prandtl-Taylor analogy for turbulent duct flow.
+    r"""Prandtl-Taylor analogy for turbulent duct flow.
 
-    .. math:: St = \\frac{f/8}{1 + 5\\sqrt{f/8}\\,(Pr - 1)}
+    .. math:: St = \frac{f/8}{1 + 5\sqrt{f/8}\,(Pr - 1)}
 
     Parameters
     ----------
@@ -458,12 +458,12 @@ def stanton_prandtl_taylor(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
 
 @guard
 def stanton_von_karman(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
-    """Von Karman analogy for turbulent duct flow (three-layer model).
+    r"""Von Karman analogy for turbulent duct flow (three-layer model).
 
     .. math::
 
-        St = \\frac{f/8}{1 + 5\\sqrt{f/8}
-        \\left[Pr - 1 + \\ln\\left(1 + \\tfrac{5}{6}(Pr-1)\\right)\\right]}
+        St = \frac{f/8}{1 + 5\sqrt{f/8}
+        \left[Pr - 1 + \ln\left(1 + \tfrac{5}{6}(Pr-1)\right)\right]}
 
     Parameters
     ----------
@@ -506,7 +506,7 @@ def stanton_von_karman(f_darcy: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
 
 @guard
 def lewis_relation(Pr: ArrayLike, Sc: ArrayLike, exponent: float = _TWO_THIRDS) -> FloatOrArray:
-    """Ratio :math:`h/(\\rho c_p k_c) = Le^{n}` that the analogy predicts.
+    r"""Ratio :math:`h/(\rho c_p k_c) = Le^{n}` that the analogy predicts.
 
     Parameters
     ----------
@@ -679,7 +679,7 @@ def mass_transfer_from_heat(
     h_uncertainty: ArrayLike = 0.0,
     D_uncertainty: ArrayLike | None = None,
 ) -> TransferCoefficients:
-    """Mass-transfer coefficients for a species from a known h, resolving properties.
+    r"""Mass-transfer coefficients for a species from a known h, resolving properties.
 
     Parameters
     ----------
@@ -734,9 +734,9 @@ def mass_transfer_from_heat(
     database's and are listed in ``user_supplied``; a carrier or solute the databases lack
     works once every property it needs is given.  The error is that of h
     combined with that of the diffusivity: with the properties fixed,
-    :math:`k_c = h\\,\\rho^{n-1} c_p^{n-1} k^{-n} D^{n}` (the viscosity cancels),
+    :math:`k_c = h\,\rho^{n-1} c_p^{n-1} k^{-n} D^{n}` (the viscosity cancels),
     so by linearisation
-    :math:`u(k_c)^2 = u(h)^2 + (n\\,u(D))^2`, with u(D) the diffusivity
+    :math:`u(k_c)^2 = u(h)^2 + (n\,u(D))^2`, with u(D) the diffusivity
     method's stated average absolute deviation times sqrt(pi/2) (normal
     errors).  The property models' own errors (a few per cent at most) are
     not included.  Where the

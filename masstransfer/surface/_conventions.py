@@ -1,16 +1,16 @@
-"""Mass-transfer coefficient conventions and overall (two-film) coefficients.
+r"""Mass-transfer coefficient conventions and overall (two-film) coefficients.
 
 One flux, many conventions.  For a species A crossing a film,
 
 .. math::
 
-    N_A = k_c\\,\\Delta c_A = k_G\\,\\Delta p_A = k_y\\,\\Delta y_A \\quad \\text{(gas)}, \\qquad
-    N_A = k_L\\,\\Delta c_A = k_x\\,\\Delta x_A \\quad \\text{(liquid)}
+    N_A = k_c\,\Delta c_A = k_G\,\Delta p_A = k_y\,\Delta y_A \quad \text{(gas)}, \qquad
+    N_A = k_L\,\Delta c_A = k_x\,\Delta x_A \quad \text{(liquid)}
 
-so :math:`k_G = k_c/(RT)`, :math:`k_y = k_c\\,c = k_c P/(RT)` and
-:math:`k_x = k_L\\,c`.  Coefficients for diffusion through a stagnant film
+so :math:`k_G = k_c/(RT)`, :math:`k_y = k_c\,c = k_c P/(RT)` and
+:math:`k_x = k_L\,c`.  Coefficients for diffusion through a stagnant film
 (``k``) and the equimolar, F-type coefficient (``F``) are related by the
-log-mean of the non-diffusing component, :math:`F = k\\,y_{B,M}`.  All
+log-mean of the non-diffusing component, :math:`F = k\,y_{B,M}`.  All
 functions are numbers in, numbers out, in SI (molar fluxes in mol/(m^2 s)).
 """
 
@@ -41,7 +41,7 @@ __all__ = [
 
 @guard
 def log_mean(a: ArrayLike, b: ArrayLike) -> FloatOrArray:
-    """Logarithmic mean :math:`(a-b)/\\ln(a/b)`, equal to a where a = b.
+    r"""Logarithmic mean :math:`(a-b)/\ln(a/b)`, equal to a where a = b.
 
     Parameters
     ----------
@@ -58,7 +58,7 @@ def log_mean(a: ArrayLike, b: ArrayLike) -> FloatOrArray:
     Notes
     -----
     Near a = b the ratio form loses precision; a series in
-    :math:`\\ln(a/b)` is used there.
+    :math:`\ln(a/b)` is used there.
 
     References
     ----------
@@ -219,14 +219,14 @@ def kc_from_ky(k_y: ArrayLike, T: ArrayLike, P: ArrayLike) -> FloatOrArray:
 
 @guard
 def kx_from_kL(k_L: ArrayLike, c_total: ArrayLike) -> FloatOrArray:
-    """Liquid-side coefficient on a mole-fraction basis, :math:`k_x = k_L c`.
+    r"""Liquid-side coefficient on a mole-fraction basis, :math:`k_x = k_L c`.
 
     Parameters
     ----------
     k_L : float or array_like
         Coefficient on a concentration basis [m/s].
     c_total : float or array_like
-        Total molar concentration of the liquid, :math:`\\rho/M` [mol/m^3].
+        Total molar concentration of the liquid, :math:`\rho/M` [mol/m^3].
 
     Returns
     -------
@@ -283,7 +283,7 @@ def kL_from_kx(k_x: ArrayLike, c_total: ArrayLike) -> FloatOrArray:
 
 @guard
 def F_from_k(k: ArrayLike, y_BM: ArrayLike) -> FloatOrArray:
-    """F-type (equimolar) coefficient from a stagnant-film coefficient, :math:`F = k\\,y_{B,M}`.
+    r"""F-type (equimolar) coefficient from a stagnant-film coefficient, :math:`F = k\,y_{B,M}`.
 
     Parameters
     ----------
@@ -352,12 +352,12 @@ def k_from_F(F: ArrayLike, y_BM: ArrayLike) -> FloatOrArray:
 
 @guard
 def mass_basis_from_molar(k_y: ArrayLike, M_mix: ArrayLike) -> FloatOrArray:
-    """Mass-fraction-basis coefficient from a mole-fraction-basis one (dilute A).
+    r"""Mass-fraction-basis coefficient from a mole-fraction-basis one (dilute A).
 
-    .. math:: k_\\omega = k_y\\,M_{mix}
+    .. math:: k_\omega = k_y\,M_{mix}
 
-    so that the mass flux is :math:`n_A = k_\\omega\\,\\Delta\\omega_A`
-    (exact in the dilute limit, where :math:`\\Delta\\omega_A = \\Delta y_A M_A/M_{mix}`).
+    so that the mass flux is :math:`n_A = k_\omega\,\Delta\omega_A`
+    (exact in the dilute limit, where :math:`\Delta\omega_A = \Delta y_A M_A/M_{mix}`).
 
     Parameters
     ----------
@@ -423,9 +423,9 @@ def molar_basis_from_mass(k_omega: ArrayLike, M_mix: ArrayLike) -> FloatOrArray:
 
 @guard
 def overall_gas_coefficient(k_y: ArrayLike, k_x: ArrayLike, m: ArrayLike) -> FloatOrArray:
-    """Overall gas-phase coefficient of two films in series.
+    r"""Overall gas-phase coefficient of two films in series.
 
-    .. math:: \\frac{1}{K_y} = \\frac{1}{k_y} + \\frac{m}{k_x}
+    .. math:: \frac{1}{K_y} = \frac{1}{k_y} + \frac{m}{k_x}
 
     Parameters
     ----------
@@ -468,9 +468,9 @@ def overall_gas_coefficient(k_y: ArrayLike, k_x: ArrayLike, m: ArrayLike) -> Flo
 
 @guard
 def overall_liquid_coefficient(k_y: ArrayLike, k_x: ArrayLike, m: ArrayLike) -> FloatOrArray:
-    """Overall liquid-phase coefficient of two films in series.
+    r"""Overall liquid-phase coefficient of two films in series.
 
-    .. math:: \\frac{1}{K_x} = \\frac{1}{m\\,k_y} + \\frac{1}{k_x}
+    .. math:: \frac{1}{K_x} = \frac{1}{m\,k_y} + \frac{1}{k_x}
 
     Parameters
     ----------

@@ -35,9 +35,9 @@ __all__ = [
 
 @guard
 def fick_flux(D: ArrayLike, c1: ArrayLike, c2: ArrayLike, thickness: ArrayLike) -> FloatOrArray:
-    """Steady diffusive flux through a layer by Fick's first law.
+    r"""Steady diffusive flux through a layer by Fick's first law.
 
-    .. math:: J = D\\,\\frac{c_1 - c_2}{L}
+    .. math:: J = D\,\frac{c_1 - c_2}{L}
 
     Parameters
     ----------
@@ -83,9 +83,9 @@ def fick_flux(D: ArrayLike, c1: ArrayLike, c2: ArrayLike, thickness: ArrayLike) 
 
 @guard
 def fick_profile(x: ArrayLike, c1: ArrayLike, c2: ArrayLike, thickness: ArrayLike) -> FloatOrArray:
-    """Steady concentration profile across a layer: linear between the faces.
+    r"""Steady concentration profile across a layer: linear between the faces.
 
-    .. math:: c(x) = c_1 + (c_2 - c_1)\\,x/L
+    .. math:: c(x) = c_1 + (c_2 - c_1)\,x/L
 
     Parameters
     ----------
@@ -127,9 +127,9 @@ def fick_profile(x: ArrayLike, c1: ArrayLike, c2: ArrayLike, thickness: ArrayLik
 def equimolar_flux(
     D: ArrayLike, T: ArrayLike, p1: ArrayLike, p2: ArrayLike, thickness: ArrayLike
 ) -> FloatOrArray:
-    """Flux of A in equimolar counter-diffusion through a gas film.
+    r"""Flux of A in equimolar counter-diffusion through a gas film.
 
-    .. math:: N_A = \\frac{D_{AB}}{RTz}\\,(p_{A1} - p_{A2})
+    .. math:: N_A = \frac{D_{AB}}{RTz}\,(p_{A1} - p_{A2})
 
     Parameters
     ----------
@@ -172,12 +172,12 @@ def equimolar_flux(
 def stagnant_film_flux(
     D: ArrayLike, T: ArrayLike, P: ArrayLike, p1: ArrayLike, p2: ArrayLike, thickness: ArrayLike
 ) -> FloatOrArray:
-    """Flux of A diffusing through a stagnant (non-diffusing) gas B.
+    r"""Flux of A diffusing through a stagnant (non-diffusing) gas B.
 
     .. math::
 
-        N_A = \\frac{D_{AB} P}{RTz}\\,\\ln\\frac{P - p_{A2}}{P - p_{A1}}
-            = \\frac{D_{AB} P}{RTz\\,p_{B,M}}\\,(p_{A1} - p_{A2})
+        N_A = \frac{D_{AB} P}{RTz}\,\ln\frac{P - p_{A2}}{P - p_{A1}}
+            = \frac{D_{AB} P}{RTz\,p_{B,M}}\,(p_{A1} - p_{A2})
 
     Parameters
     ----------
@@ -229,10 +229,10 @@ def stagnant_film_flux(
 
 @guard
 def high_flux_correction(phi: ArrayLike) -> FloatOrArray:
-    """Film-theory correction of a low-flux coefficient for a finite total flux.
+    r"""Film-theory correction of a low-flux coefficient for a finite total flux.
 
-    .. math:: \\frac{k^\\bullet}{k} = \\frac{\\phi}{e^{\\phi} - 1},
-        \\qquad \\phi = \\frac{N_{total}}{k}
+    .. math:: \frac{k^\bullet}{k} = \frac{\phi}{e^{\phi} - 1},
+        \qquad \phi = \frac{N_{total}}{k}
 
     Parameters
     ----------
@@ -251,7 +251,7 @@ def high_flux_correction(phi: ArrayLike) -> FloatOrArray:
     Film theory; the boundary-layer and penetration corrections differ by
     a few per cent (Bird, Stewart & Lightfoot, Section 22.8).  The same
     function gives the Ackermann correction of the heat-transfer
-    coefficient with :math:`\\phi_T = N c_p/h` (:func:`ackermann_correction`).
+    coefficient with :math:`\phi_T = N c_p/h` (:func:`ackermann_correction`).
 
     References
     ----------
@@ -276,10 +276,10 @@ def high_flux_correction(phi: ArrayLike) -> FloatOrArray:
 
 @guard
 def ackermann_correction(N: ArrayLike, cp_molar: ArrayLike, h: ArrayLike) -> FloatOrArray:
-    """Ackermann correction of a heat-transfer coefficient for mass transfer through it.
+    r"""Ackermann correction of a heat-transfer coefficient for mass transfer through it.
 
-    .. math:: \\frac{h^\\bullet}{h} = \\frac{\\phi_T}{e^{\\phi_T} - 1},
-        \\qquad \\phi_T = \\frac{N\\,\\tilde c_{p}}{h}
+    .. math:: \frac{h^\bullet}{h} = \frac{\phi_T}{e^{\phi_T} - 1},
+        \qquad \phi_T = \frac{N\,\tilde c_{p}}{h}
 
     Parameters
     ----------
@@ -319,12 +319,12 @@ def ackermann_correction(N: ArrayLike, cp_molar: ArrayLike, h: ArrayLike) -> Flo
 def high_flux_rate(
     F: ArrayLike, y_surface: ArrayLike, y_bulk: ArrayLike, flux_ratio: ArrayLike = 1.0
 ) -> FloatOrArray:
-    """Flux of A across a film at high transfer rates (film theory).
+    r"""Flux of A across a film at high transfer rates (film theory).
 
-    .. math:: N_A = \\frac{N_A}{\\sum N}\\,F\\,\\ln\\frac{N_A/\\sum N - y_{A,b}}{N_A/\\sum N - y_{A,s}}
+    .. math:: N_A = \frac{N_A}{\sum N}\,F\,\ln\frac{N_A/\sum N - y_{A,b}}{N_A/\sum N - y_{A,s}}
 
     With ``flux_ratio`` = 1 (only A crosses, the carrier is stagnant) this
-    is :math:`N_A = F\\ln[(1-y_{A,b})/(1-y_{A,s})]`.
+    is :math:`N_A = F\ln[(1-y_{A,b})/(1-y_{A,s})]`.
 
     Parameters
     ----------
@@ -349,8 +349,8 @@ def high_flux_rate(
     :math:`F(y_s - y_b)`.  For a stagnant carrier (``flux_ratio`` = 1) the
     ratio of the two is
 
-    .. math:: \\frac{N_A}{F\\,(y_{A,s} - y_{A,b})} = \\frac{1}{y_{B,M}},
-        \\qquad y_{B,M} = \\frac{y_{B,b} - y_{B,s}}{\\ln(y_{B,b}/y_{B,s})}
+    .. math:: \frac{N_A}{F\,(y_{A,s} - y_{A,b})} = \frac{1}{y_{B,M}},
+        \qquad y_{B,M} = \frac{y_{B,b} - y_{B,s}}{\ln(y_{B,b}/y_{B,s})}
 
     the log-mean carrier fraction: the bulk-flow correction is already in the
     result, so do not divide by :math:`y_{B,M}` again.  F must be the low-flux

@@ -63,7 +63,7 @@ def _pos(**kw: ArrayLike) -> dict[str, FloatOrArray]:
 
 @guard
 def reynolds(V: ArrayLike, L: ArrayLike, nu: ArrayLike) -> FloatOrArray:
-    """Reynolds number :math:`Re = VL/\\nu`.
+    r"""Reynolds number :math:`Re = VL/\nu`.
 
     Parameters
     ----------
@@ -95,7 +95,7 @@ def reynolds(V: ArrayLike, L: ArrayLike, nu: ArrayLike) -> FloatOrArray:
 
 @guard
 def prandtl(cp: ArrayLike, k: ArrayLike, mu: ArrayLike) -> FloatOrArray:
-    """Prandtl number :math:`Pr = c_p\\mu/k`.
+    r"""Prandtl number :math:`Pr = c_p\mu/k`.
 
     Parameters
     ----------
@@ -127,7 +127,7 @@ def prandtl(cp: ArrayLike, k: ArrayLike, mu: ArrayLike) -> FloatOrArray:
 
 @guard
 def schmidt(D: ArrayLike, nu: ArrayLike) -> FloatOrArray:
-    """Schmidt number :math:`Sc = \\nu/D`.
+    r"""Schmidt number :math:`Sc = \nu/D`.
 
     Parameters
     ----------
@@ -157,7 +157,7 @@ def schmidt(D: ArrayLike, nu: ArrayLike) -> FloatOrArray:
 
 @guard
 def lewis(alpha: ArrayLike, D: ArrayLike) -> FloatOrArray:
-    """Lewis number :math:`Le = \\alpha/D = Sc/Pr`.
+    r"""Lewis number :math:`Le = \alpha/D = Sc/Pr`.
 
     Parameters
     ----------
@@ -251,7 +251,7 @@ def sherwood(k_c: ArrayLike, L: ArrayLike, D: ArrayLike) -> FloatOrArray:
 
 @guard
 def stanton_heat(h: ArrayLike, V: ArrayLike, rho: ArrayLike, cp: ArrayLike) -> FloatOrArray:
-    """Heat-transfer Stanton number :math:`St = h/(\\rho c_p V)`.
+    r"""Heat-transfer Stanton number :math:`St = h/(\rho c_p V)`.
 
     Parameters
     ----------
@@ -316,7 +316,7 @@ def stanton_mass(k_c: ArrayLike, V: ArrayLike) -> FloatOrArray:
 
 @guard
 def colburn_j_heat(St: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
-    """Colburn j-factor for heat transfer :math:`j_H = St\\,Pr^{2/3}`.
+    r"""Colburn j-factor for heat transfer :math:`j_H = St\,Pr^{2/3}`.
 
     Parameters
     ----------
@@ -347,7 +347,7 @@ def colburn_j_heat(St: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
 
 @guard
 def colburn_j_mass(St_m: ArrayLike, Sc: ArrayLike) -> FloatOrArray:
-    """Colburn j-factor for mass transfer :math:`j_D = St_m\\,Sc^{2/3}`.
+    r"""Colburn j-factor for mass transfer :math:`j_D = St_m\,Sc^{2/3}`.
 
     Parameters
     ----------
@@ -379,7 +379,7 @@ def colburn_j_mass(St_m: ArrayLike, Sc: ArrayLike) -> FloatOrArray:
 
 @guard
 def peclet_heat(V: ArrayLike, L: ArrayLike, alpha: ArrayLike) -> FloatOrArray:
-    """Heat-transfer Peclet number :math:`Pe = VL/\\alpha = Re\\,Pr`.
+    r"""Heat-transfer Peclet number :math:`Pe = VL/\alpha = Re\,Pr`.
 
     Parameters
     ----------
@@ -411,7 +411,7 @@ def peclet_heat(V: ArrayLike, L: ArrayLike, alpha: ArrayLike) -> FloatOrArray:
 
 @guard
 def peclet_mass(V: ArrayLike, L: ArrayLike, D: ArrayLike) -> FloatOrArray:
-    """Mass-transfer Peclet number :math:`Pe_m = VL/D = Re\\,Sc`.
+    r"""Mass-transfer Peclet number :math:`Pe_m = VL/D = Re\,Sc`.
 
     Parameters
     ----------
@@ -445,7 +445,7 @@ def peclet_mass(V: ArrayLike, L: ArrayLike, D: ArrayLike) -> FloatOrArray:
 def grashof_thermal(
     L: ArrayLike, beta: ArrayLike, dT: ArrayLike, nu: ArrayLike, g: float = GRAVITY
 ) -> FloatOrArray:
-    """Thermal Grashof number :math:`Gr = g\\beta|\\Delta T|L^3/\\nu^2`.
+    r"""Thermal Grashof number :math:`Gr = g\beta|\Delta T|L^3/\nu^2`.
 
     Parameters
     ----------
@@ -485,7 +485,7 @@ def grashof_thermal(
 def grashof_solutal(
     L: ArrayLike, rho_surface: ArrayLike, rho_bulk: ArrayLike, nu: ArrayLike, g: float = GRAVITY
 ) -> FloatOrArray:
-    """Grashof number from a density difference :math:`Gr = g|\\Delta\\rho|L^3/(\\bar\\rho\\nu^2)`.
+    r"""Grashof number from a density difference :math:`Gr = g|\Delta\rho|L^3/(\bar\rho\nu^2)`.
 
     Because it takes the density difference itself, it covers solutal,
     thermal and combined buoyancy alike: pass the densities of the fluid at
@@ -533,7 +533,7 @@ def grashof_solutal(
 
 @guard
 def rayleigh(Gr: ArrayLike, Pr: ArrayLike) -> FloatOrArray:
-    """Rayleigh number :math:`Ra = Gr\\,Pr` (or :math:`Gr\\,Sc` for mass transfer).
+    r"""Rayleigh number :math:`Ra = Gr\,Pr` (or :math:`Gr\,Sc` for mass transfer).
 
     Parameters
     ----------
@@ -635,7 +635,7 @@ def biot_mass(k_c: ArrayLike, L: ArrayLike, D_solid: ArrayLike, partition: Array
 
 @guard
 def fourier_heat(t: ArrayLike, L: ArrayLike, alpha: ArrayLike) -> FloatOrArray:
-    """Heat-transfer Fourier number :math:`Fo = \\alpha t/L^2`.
+    r"""Heat-transfer Fourier number :math:`Fo = \alpha t/L^2`.
 
     Parameters
     ----------
@@ -699,7 +699,7 @@ def fourier_mass(t: ArrayLike, L: ArrayLike, D: ArrayLike) -> FloatOrArray:
 
 @guard
 def graetz(Re: ArrayLike, Pr: ArrayLike, D: ArrayLike, x: ArrayLike) -> FloatOrArray:
-    """Graetz number :math:`Gz = (D/x)\\,Re\\,Pr` (use Sc for mass transfer).
+    r"""Graetz number :math:`Gz = (D/x)\,Re\,Pr` (use Sc for mass transfer).
 
     Parameters
     ----------
@@ -736,7 +736,7 @@ def graetz(Re: ArrayLike, Pr: ArrayLike, D: ArrayLike, x: ArrayLike) -> FloatOrA
 def archimedes(
     d: ArrayLike, rho_fluid: ArrayLike, rho_particle: ArrayLike, mu: ArrayLike, g: float = GRAVITY
 ) -> FloatOrArray:
-    """Archimedes number :math:`Ar = g d^3\\rho_f|\\rho_p-\\rho_f|/\\mu^2`.
+    r"""Archimedes number :math:`Ar = g d^3\rho_f|\rho_p-\rho_f|/\mu^2`.
 
     Parameters
     ----------

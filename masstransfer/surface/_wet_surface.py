@@ -1,13 +1,13 @@
-"""Temperature of a wet surface evaporating into a gas, and the wet-bulb temperature.
+r"""Temperature of a wet surface evaporating into a gas, and the wet-bulb temperature.
 
 At steady state, with no radiation or conduction from supports, the
 sensible heat reaching a wet surface pays for the evaporation from it:
 
 .. math::
 
-    h^\\bullet (T - T_s) = N_A M_A \\lambda(T_s), \\qquad
-    N_A = F \\ln\\frac{1 - y_{A,\\infty}}{1 - y_{A,s}}, \\qquad
-    y_{A,s} = \\frac{p^{sat}(T_s)}{P}
+    h^\bullet (T - T_s) = N_A M_A \lambda(T_s), \qquad
+    N_A = F \ln\frac{1 - y_{A,\infty}}{1 - y_{A,s}}, \qquad
+    y_{A,s} = \frac{p^{sat}(T_s)}{P}
 
 with F = k_c c from the Chilton-Colburn analogy (so h itself cancels) and
 h* the Ackermann-corrected h.  Gas properties are taken at the film
@@ -52,9 +52,9 @@ def solve_surface_temperature(
     transfer: Transfer | None = None,
     extra_heat: Callable[[FloatArray], FloatArray] | None = None,
 ) -> FloatArray:
-    """Solve the wet-surface energy balance for T_s, every element at once.
+    r"""Solve the wet-surface energy balance for T_s, every element at once.
 
-    .. math:: h^\\bullet (T - T_s) + q_{extra}(T_s) = N_A M_A \\lambda(T_s)
+    .. math:: h^\bullet (T - T_s) + q_{extra}(T_s) = N_A M_A \lambda(T_s)
 
     ``transfer(Tf, P, rho, cp, k, D)`` gives h and the low-flux F at the film temperature;
     by default h = 1 and F from the Chilton-Colburn analogy (h cancels when there is no

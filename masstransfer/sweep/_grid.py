@@ -190,13 +190,13 @@ def evaporation_flux(
     P: ArrayLike = 101325.0,
     y_bulk: ArrayLike = 0.0,
 ) -> FloatOrArray:
-    """Molar flux of a liquid evaporating into a gas, from a known heat-transfer coefficient.
+    r"""Molar flux of a liquid evaporating into a gas, from a known heat-transfer coefficient.
 
     The chain h -> k_c -> flux: the Chilton-Colburn analogy gives the low-flux coefficient
     :math:`F = k_c P/(R T)` (:func:`masstransfer.mass_transfer_from_heat`), the liquid's
     vapour pressure the surface mole fraction, and film theory for a stagnant gas the flux:
 
-    .. math:: N = F \\ln\\frac{1 - y_b}{1 - y_s}, \\qquad y_s = \\frac{p_{sat}(T)}{P}
+    .. math:: N = F \ln\frac{1 - y_b}{1 - y_s}, \qquad y_s = \frac{p_{sat}(T)}{P}
 
     Parameters
     ----------
