@@ -94,6 +94,11 @@ def register(sub: Any) -> None:
     p.add_argument("--json", action="store_true", help="print JSON instead of tables")
 
 
+#: Above this fraction of the Billet & Schultes loading velocity the command refuses to rate the
+#: column: flooding typically sets in at 1.3 to 1.5 times the loading point (common practice).
+_FLOODING_FRACTION = 1.5
+
+
 def _load(path: str) -> dict[str, Any]:
     if sys.version_info >= (3, 11):
         import tomllib
@@ -104,8 +109,8 @@ def _load(path: str) -> dict[str, Any]:
             data = tomllib.load(fh)
     except OSError as exc:
         raise InputValueError(f"spec={path!r} cannot be read ({exc.strerror}); pass a TOML file") from None
-    except tomllib.TOMLDecodeError as exc:
-        raise InputValueError(f"spec={path!r} is not valid TOML ({exc})") from None
+    except (tomllib.TOMLDecodeError, UnicodeDecodeError) as exc:
+        raise InputValueError(f"spec={path!r} is not a valid UTF-8 TOML file ({exc})") from None
     return data
 
 
@@ -202,6 +207,13 @@ def _compute(spec: Mapping[str, Mapping[str, Any]], points: int) -> dict[str, An
     if dH == 0.0:
         N_OG = float(transfer_units(y_in, prof.y_out, x_in, m, A))
     gas_resistance = (1.0 / k_y_a) / (1.0 / K_y_a)
+    load = None if film.loading_fraction is None else float(film.loading_fraction)
+    if load is not None and load > _FLOODING_FRACTION:
+        raise InputValueError(
+            f"the gas load is {100 * load:.0f} % of the packing's loading "
+            f"point; above about {100 * _FLOODING_FRACTION:.0f} % a packed column floods (common "
+            "practice) and no rating holds: enlarge diameter_m or lower the gas flow"
+        )
     return {
         "mode": mode,
         "packing": film.packing,

@@ -240,10 +240,10 @@ def test_every_guarded_docstring_unit_parses():
         spec = _units._spec(inspect.unwrap(fn))
         for name, unit in spec.params.items():
             if unit.kind == "unit":
-                _units.parse_unit(ureg, unit.text), (qualname, name)
+                assert _units.parse_unit(ureg, unit.text) is not None, (qualname, name)
         for unit in spec.returns:
             if unit.kind == "unit":
-                _units.parse_unit(ureg, unit.text), qualname
+                assert _units.parse_unit(ureg, unit.text) is not None, qualname
 
 
 _NO_PINT = textwrap.dedent(

@@ -815,8 +815,9 @@ def column_profile(
         sol = solve_ivp(rates, (0.0, span), start(yo), events=reached, **opts)
         if sol.status != 1:
             raise InputValueError(
-                f"y_out={yo!r} is beyond the pinch: the gas never reaches y_in within {span:.3g} m of "
-                "packing; raise L or ask for a higher y_out"
+                f"y_out={yo!r} cannot be reached: the operating and equilibrium lines pinch, so no "
+                f"height (searched to {span:.3g} m) brings the gas from y_in down to y_out; raise "
+                "L/G (a larger absorption factor) or ask for a higher y_out"
             )
         assert sol.t_events is not None  # events were passed
         H = float(sol.t_events[0][0])

@@ -72,6 +72,9 @@ __all__ = [
 #: Pressure above which the low-pressure methods warn [Pa] (common practice:
 #: the ideal-gas kinetic theory behind them holds to roughly 10 bar).
 LOW_PRESSURE_LIMIT: Final = 1.0e6
+#: Below this pressure [Pa] a gas diffusivity call warns: a pressure given in bar or atm instead of
+#: Pa, or a rarefied gas where the continuum methods no longer describe transport in equipment.
+VACUUM_LIMIT: Final = 1.0e3
 
 _BAR = 1.0e5
 
@@ -86,6 +89,14 @@ def _check_M(name: str, M: FloatOrArray) -> None:
 
 
 def _warn_pressure(P: FloatOrArray, method: str) -> None:
+    low = P < VACUUM_LIMIT if isinstance(P, float) else bool(np.any(P < VACUUM_LIMIT))
+    if low:
+        warn_caller(
+            f"{method}: P below {VACUUM_LIMIT:g} Pa: P is in pascals (1 bar = 1e5 Pa), and at such "
+            "pressures the mean free path approaches the size of pores and channels (Knudsen "
+            "regime, see masstransfer.diffusivity.bosanquet); check the pressure",
+            EnvelopeWarning,
+        )
     high = P > LOW_PRESSURE_LIMIT if isinstance(P, float) else bool(np.any(P > LOW_PRESSURE_LIMIT))
     if high:
         warn_caller(
@@ -1244,7 +1255,12 @@ def gas_diffusivity(
     if not isinstance(Tv, float | np.ndarray) or not isinstance(Pv, float | np.ndarray):
         return dask_blocks(gas_diffusivity, solute, medium, T, P, method)  # lazy, block by block
     if isinstance(Tv, float) and isinstance(Pv, float):  # scalar fast path: checks only when needed
-        if Tv < r.Tc or Pv > LOW_PRESSURE_LIMIT or not r.T_lo <= Tv <= r.T_hi or r.cautions:
+        if (
+            Tv < r.Tc
+            or not VACUUM_LIMIT <= Pv <= LOW_PRESSURE_LIMIT
+            or not r.T_lo <= Tv <= r.T_hi
+            or r.cautions
+        ):
             _slow_checks(r, Tv, Pv)
         if r.fast:
             return float(r.fast * Tv**1.75 / Pv)

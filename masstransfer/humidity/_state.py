@@ -21,6 +21,7 @@ from ..constants import R_GAS
 from ..errors import InputTypeError, InputValueError, OutOfRangeError
 from ..substances._species import Species
 from ..surface._medium import GasSide, LiquidSide, Override, gas_side, liquid_side
+from ..surface._wet_surface import _below_models
 
 __all__ = ["HumidGasState", "humid_gas_state", "humidity_ratio_from_y", "y_from_humidity_ratio"]
 
@@ -239,8 +240,7 @@ class Pair:
         hi = np.asarray(T, dtype=float)
         if (balance(lo) <= 0).any():
             raise OutOfRangeError(
-                f"the adiabatic-saturation temperature lies below {float(lo.ravel()[0]):.2f} K, the "
-                f"lower end of the liquid models of {self.liq.species.name!r} (it would freeze)"
+                _below_models(self.liq.species, float(lo.ravel()[0]), "adiabatic-saturation temperature")
             )
         return bisect(balance, lo, hi)
 

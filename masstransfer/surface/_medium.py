@@ -25,7 +25,7 @@ import numpy as np
 from .._typing import FloatArray, FloatOrArray
 from .._validation import check_positive
 from ..constants import R_GAS
-from ..errors import InputTypeError, InputValueError
+from ..errors import InputTypeError, InputValueError, MassTransferError, MissingConstantError
 from ..substances._species import Species, species
 
 __all__ = [
@@ -362,8 +362,6 @@ def liquid_side(
     A property the user supplies is never looked up, so a liquid missing from the databases
     works once its vapour pressure, latent heat and vapour heat capacity are given.
     """
-    from ..errors import MissingConstantError
-
     a = species(liquid)
     over = {
         "vapour_pressure": property_override("vapour_pressure", vapour_pressure, "Pa"),
@@ -404,9 +402,21 @@ def liquid_side(
     if over["cp_vapour"] is None:
         from ..substances._properties import gas_model
 
-        vap = gas_model(a)
-        lows.append(vap.cp_molar.T_min)
-        fns["cp_vapour"] = vap.heat_capacity
+        try:
+            vap = gas_model(a)
+        except MassTransferError as exc:
+            raise MissingConstantError(
+                f"no vapour heat capacity for {a.name!r} ({exc}); pass cp_vapour=... [J/(kg K)], "
+                "a number or a function of T [K]"
+            ) from exc
+        lo_cp, hi_cp = vap.cp_molar.T_min, vap.cp_molar.T_max
+
+        def cp_vapour_model(T: FloatOrArray) -> FloatOrArray:
+            # a small correction (sensible heat of the vapour): held at the ends of its fitted
+            # range rather than restricting the liquid's temperatures to that range
+            return vap.heat_capacity(np.clip(T, lo_cp, hi_cp))
+
+        fns["cp_vapour"] = cp_vapour_model
     for key, fn in over.items():
         if fn is not None:
             fns[key] = fn

@@ -41,6 +41,22 @@ _TOLERANCE = 1e-10  # K, on the surface temperature (arrays and scalars agree to
 Transfer = Callable[[FloatArray, FloatArray, FloatArray, FloatArray, FloatArray, FloatArray], tuple[Any, Any]]
 
 
+def _below_models(sp: Any, T_low: float, what: str) -> str:
+    """Say why no answer exists below ``T_low``: the liquid freezes, or its property models stop."""
+    Tm = getattr(sp, "Tm", None)
+    if isinstance(Tm, float) and Tm >= T_low - 0.5:
+        return (
+            f"the {what} lies below {T_low:.2f} K, where {sp.name!r} freezes (melting point "
+            f"{Tm:.2f} K); no liquid-surface value exists"
+        )
+    melt = f" (it melts at {Tm:.2f} K)" if isinstance(Tm, float) else ""
+    return (
+        f"the {what} lies below {T_low:.2f} K, where the property models of liquid {sp.name!r} "
+        f"stop{melt}; pass your own vapour_pressure= and latent_heat= (functions of T [K]) valid "
+        "lower down"
+    )
+
+
 def solve_surface_temperature(
     liq: LiquidSide,
     gas: GasSide,
@@ -129,10 +145,7 @@ def solve_surface_temperature(
         raise OutOfRangeError("the wet surface would be hotter than the liquid's modelled range")
     f_lo = residual(lo, props)
     if ((f_lo < 0) & ~saturated).any():
-        raise OutOfRangeError(
-            f"the surface temperature lies below {float(np.min(lo)):.2f} K, the lower end of the liquid "
-            f"models of {liq.species.name!r} (it would freeze); no liquid wet-surface temperature exists"
-        )
+        raise OutOfRangeError(_below_models(liq.species, float(np.min(lo)), "surface temperature"))
     hi = np.where(saturated, lo, hi)  # nothing to solve there
     # The film properties change slowly with T_s: solve with them frozen, update, repeat; each
     # pass searches a narrow bracket around the last answer (widened where it misses the root).

@@ -76,4 +76,18 @@ def test_missing_and_broken_files(capsys, tmp_path):
     broken = tmp_path / "broken.toml"
     broken.write_text("[column\n", encoding="utf-8")
     assert main(["column", str(broken)]) == 2
-    assert "not valid TOML" in capsys.readouterr().err
+    assert "not a valid UTF-8 TOML file" in capsys.readouterr().err
+    binary = tmp_path / "binary.toml"
+    binary.write_bytes(b"\x00\xff")
+    assert main(["column", str(binary)]) == 2
+    assert "not a valid UTF-8 TOML file" in capsys.readouterr().err
+
+
+def test_a_flooded_column_is_refused(capsys, tmp_path):
+    assert main(["column", "--example"]) == 0
+    spec = capsys.readouterr().out.replace("diameter_m = 0.6", "diameter_m = 0.05")
+    assert "diameter_m = 0.05" in spec
+    path = tmp_path / "narrow.toml"
+    path.write_text(spec, encoding="utf-8")
+    assert main(["column", str(path)]) == 2
+    assert "floods" in capsys.readouterr().err

@@ -305,3 +305,9 @@ def test_report_records_method_constants_and_warnings():
     assert liq.value == mt.liquid_diffusivity("water", "ethanol", 298.15, method="tyn-calus")
     assert any("dimer" in n and "37.8" in n for n in liq.notes)
     assert "measured data" in liq.summary()
+
+
+def test_a_pressure_in_bar_read_as_pascals_warns():
+    # 1 "bar" passed as 1 Pa would give a diffusivity 1e5 times too large: the call must say so
+    with pytest.warns(mt.errors.EnvelopeWarning, match="P is in pascals"):
+        mt.gas_diffusivity("acetone", "air", 298.15, 1.0)

@@ -22,8 +22,9 @@ def test_constant_rate_drying_textbook_example():
     assert r.T_surface - 273.15 == pytest.approx(28.9, abs=1.5)
 
 
-def test_one_call_equals_the_chain_by_hand():
-    # the eight-step chain, written out with the library's own pieces
+def test_one_call_is_consistent_with_the_chain_it_replaces():
+    # a consistency check, not a validation: the one call must equal the eight-step chain written
+    # out with the library's own pieces (the outside checks are the CoolProp and textbook tests)
     T, rh, P, h = 333.15, 0.05, 101325.0, 28.0
     y = rh * mt.liquid_model("water").vapor_pressure(T) / P
     Ts = mt.wet_surface_temperature("water", "air", T, y, P)
@@ -189,3 +190,16 @@ def test_wet_surface_temperature_takes_overrides():
         "ethanol", "air", 300.0, 0.0, latent_heat=1.2 * lq.enthalpy_vaporization(280.0)
     )
     assert colder < own
+
+
+def test_below_the_property_models_the_message_names_the_limit_and_the_fix():
+    from masstransfer.surface._wet_surface import _below_models
+
+    # ethyl acetate melts at 189 K (CRC Handbook, from memory): a model limit at 289 K is not freezing
+    sp = mt.species("ethyl acetate")
+    text = _below_models(sp, 289.0, "surface temperature")
+    assert "freeze" not in text
+    assert "vapour_pressure=" in text
+    assert "melts at 189" in text
+    # at the melting point itself the liquid does freeze
+    assert "freezes" in _below_models(sp, sp.Tm, "surface temperature")
