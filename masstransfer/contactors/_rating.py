@@ -224,7 +224,7 @@ def packed_column(
                 uL, uV, pk.a, pk.void_fraction, pk.C_S, rhoL, rhoV, muL, muV
             )
             loading = finish(np.asarray(uV) / np.asarray(u_S))
-            worst = float(np.max(loading))
+            worst = float(np.max(loading, initial=0.0))  # an empty input has no load to report
             if worst >= NEAR_LOADING:
                 caught.append(
                     (

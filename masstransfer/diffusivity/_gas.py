@@ -41,7 +41,7 @@ from ..constants import DEBYE
 from ..errors import EnvelopeWarning, InputValueError, MissingConstantError
 from ..substances._species import Origin, Species, species
 from ._common import normalise_method
-from ._phase import PhaseLimits, check_vapour, phase_limits
+from ._phase import PhaseLimits, check_vapour, medium_state, phase_limits
 from ._records import (
     ClassRule,
     ConstantUsed,
@@ -1274,7 +1274,7 @@ def gas_diffusivity(
 def available_methods(
     solute: str | Species,
     medium: str | Species,
-    phase: Literal["gas", "liquid"] = "gas",
+    phase: Literal["gas", "liquid"] | None = None,
 ) -> tuple[MethodAvailability, ...]:
     """Which diffusivity methods apply to a pair, which is the default, and why the others do not.
 
@@ -1284,8 +1284,9 @@ def available_methods(
         Diffusing species.
     medium : str or Species
         The gas or solvent it diffuses in.
-    phase : {'gas', 'liquid'}
-        Phase of the medium.
+    phase : {'gas', 'liquid'}, optional
+        Phase of the medium; by default the medium's state at 298.15 K and 101325 Pa (a
+        liquid solvent such as water gives the liquid methods), gas when that is unclear.
 
     Returns
     -------
@@ -1312,6 +1313,8 @@ def available_methods(
 
     """
     a, b = species(solute), species(medium)
+    if phase is None:
+        phase = "liquid" if medium_state(phase_limits(b), 298.15, 101325.0) == "liquid" else "gas"
     if phase == "gas":
         records, default = GAS_METHODS, ready_gas(a, b, None).record.name
     elif phase == "liquid":

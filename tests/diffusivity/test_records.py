@@ -352,3 +352,12 @@ def test_class_caution_reaches_a_python_dash_c_caller():
     assert float(out.stdout) > 0
     assert "EnvelopeWarning" in out.stderr
     assert "polar member" in out.stderr
+
+
+def test_available_methods_infers_a_liquid_solvent():
+    # water is a liquid at 25 C and 1 atm (common practice): its methods are the liquid ones
+    names = [m.method for m in mt.diffusivity.available_methods("ethylbenzene", "water")]
+    assert names == list(mt.diffusivity.LIQUID_METHODS)
+    assert [m.method for m in mt.diffusivity.available_methods("toluene", "air")] == list(
+        mt.diffusivity.GAS_METHODS
+    )
