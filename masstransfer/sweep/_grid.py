@@ -4,6 +4,7 @@ from __future__ import annotations
 
 import functools
 import importlib
+import inspect
 import math
 from collections.abc import Callable, Mapping
 from typing import Any
@@ -177,6 +178,15 @@ def evaluate(fn: Callable[..., Any], grid: Mapping[str, Any], **constants: Any) 
     for n, a in zip(names, arrays, strict=True):
         if a.dtype.kind not in "iuf":
             raise InputTypeError(f"{n} is an array of {a.dtype}, not real numbers; pass floats")
+    try:  # the grid and the constants must together fill fn's arguments
+        inspect.signature(fn).bind(**dict.fromkeys(names), **constants)
+    except TypeError as exc:
+        raise InputTypeError(
+            f"the grid ({', '.join(names)}) and the constants ({', '.join(constants) or 'none'}) do not "
+            f"fit {getattr(fn, '__name__', fn)!r}: {exc}; pass the missing arguments as constants"
+        ) from None
+    except ValueError:  # a callable without an inspectable signature: call it as given
+        pass
     block = functools.partial(_call_block, fn, names, constants)
     return da.map_blocks(block, *arrays, dtype=float, meta=np.empty((0,) * arrays[0].ndim, dtype=float))
 

@@ -122,3 +122,9 @@ def test_readme_sweep_example_runs():
     namespace: dict[str, object] = {}
     exec(compile(section[start : section.index("```", start)], "README.md", "exec"), namespace)
     assert 0.0 < namespace["N_mean"] < namespace["N_max"] < 10.0  # mol/(m^2 s), up to h = 200 at 345 K
+
+
+def test_missing_constants_are_named_before_anything_runs():
+    grid = sweep.design_grid(T=np.linspace(300.0, 350.0, 4), h=[10.0, 20.0])
+    with pytest.raises(mt.errors.InputTypeError, match="solute"):
+        sweep.evaluate(sweep.evaporation_flux, grid)
