@@ -108,6 +108,22 @@ def design_grid(*, block_states: float = 1 << 20, **axes: ArrayLike) -> dict[str
     return grid
 
 
+def _unfilled(fn: Callable[..., Any], names: tuple[str, ...], constants: dict[str, Any]) -> list[str]:
+    """List the required parameters of ``fn`` that neither the grid nor the constants give."""
+    try:
+        params = inspect.signature(fn).parameters.values()
+    except (TypeError, ValueError):  # a callable whose signature cannot be read: call it as given
+        return []
+    given = set(names) | set(constants)
+    return [
+        p.name
+        for p in params
+        if p.default is inspect.Parameter.empty
+        and p.kind in (inspect.Parameter.POSITIONAL_OR_KEYWORD, inspect.Parameter.KEYWORD_ONLY)
+        and p.name not in given
+    ]
+
+
 def _call_block(
     fn: Callable[..., Any], names: tuple[str, ...], constants: dict[str, Any], *blocks: FloatArray
 ) -> FloatArray:
@@ -178,15 +194,12 @@ def evaluate(fn: Callable[..., Any], grid: Mapping[str, Any], **constants: Any) 
     for n, a in zip(names, arrays, strict=True):
         if a.dtype.kind not in "iuf":
             raise InputTypeError(f"{n} is an array of {a.dtype}, not real numbers; pass floats")
-    try:  # the grid and the constants must together fill fn's arguments
-        inspect.signature(fn).bind(**dict.fromkeys(names), **constants)
-    except TypeError as exc:
+    unfilled = _unfilled(fn, names, constants)
+    if unfilled:
         raise InputTypeError(
-            f"the grid ({', '.join(names)}) and the constants ({', '.join(constants) or 'none'}) do not "
-            f"fit {getattr(fn, '__name__', fn)!r}: {exc}; pass the missing arguments as constants"
-        ) from None
-    except ValueError:  # a callable without an inspectable signature: call it as given
-        pass
+            f"the grid ({', '.join(names)}) and the constants ({', '.join(constants) or 'none'}) leave "
+            f"{', '.join(unfilled)} of {getattr(fn, '__name__', fn)!r} unfilled; pass them as constants"
+        )
     block = functools.partial(_call_block, fn, names, constants)
     return da.map_blocks(block, *arrays, dtype=float, meta=np.empty((0,) * arrays[0].ndim, dtype=float))
 
