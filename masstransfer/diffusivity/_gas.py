@@ -74,7 +74,7 @@ __all__ = [
 LOW_PRESSURE_LIMIT: Final = 1.0e6
 #: Below this pressure [Pa] a gas diffusivity call warns: a pressure given in bar or atm instead of
 #: Pa, or a rarefied gas where the continuum methods no longer describe transport in equipment.
-VACUUM_LIMIT: Final = 1.0e3
+VACUUM_LIMIT: Final = 100.0
 
 _BAR = 1.0e5
 
