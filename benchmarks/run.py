@@ -73,6 +73,26 @@ def bench_scalar_vs_cantera(method: str) -> tuple[str, float, float, str]:
     )
 
 
+def bench_scalar_vs_bare() -> tuple[str, float, float, str]:
+    """One cached scalar Fuller call against the bare Fuller expression with its constant."""
+    c, T, P = 7.0e-10, 300.0, 101325.0  # the constant's value does not change the cost
+
+    def bare():
+        return c * T**1.75 / P
+
+    def ours():
+        return mt.gas_diffusivity("carbon dioxide", "nitrogen", 300.0, 101325.0)
+
+    ours()
+    t_base, t_ours = best(bare, 20000), best(ours, 20000)
+    return (
+        "one scalar gas_diffusivity call, default method (cached species)",
+        t_ours,
+        t_base,
+        "bare Fuller expression, constant precomputed",
+    )
+
+
 def bench_liquid_viscosity() -> tuple[str, float, float, str]:
     from thermo import ViscosityLiquid
 
@@ -568,6 +588,7 @@ def main() -> None:
         return
     rows = [
         bench_array_fuller(),
+        bench_scalar_vs_bare(),
         bench_scalar_vs_cantera("fuller"),
         bench_scalar_vs_cantera("chapman-enskog"),
         bench_liquid_viscosity(),

@@ -1244,7 +1244,20 @@ def gas_diffusivity(
     0.361
 
     """
-    if (type(T) is not float or type(P) is not float) and has_quantity((T, P), {}):  # pint: units
+    if type(T) is float and type(P) is float:  # scalar fast path: plain floats in the SI range
+        try:
+            r = _READY[(method, solute, medium)]
+        except (KeyError, TypeError):
+            r = _ready(method, solute, medium)
+        if (
+            r.fast
+            and r.Tc <= T <= r.T_hi
+            and r.T_lo <= T
+            and VACUUM_LIMIT <= P <= LOW_PRESSURE_LIMIT
+            and not r.cautions
+        ):
+            return r.fast * T**1.75 / P  # the bounds above also exclude NaN and infinity
+    elif has_quantity((T, P), {}):  # pint: units
         return call_with_quantities(gas_diffusivity, (solute, medium, T, P, method), {})
     try:
         r = _READY[(method, solute, medium)]

@@ -311,3 +311,44 @@ def test_a_pressure_in_bar_read_as_pascals_warns():
     # 1 "bar" passed as 1 Pa would give a diffusivity 1e5 times too large: the call must say so
     with pytest.warns(mt.errors.EnvelopeWarning, match="P is in pascals"):
         mt.gas_diffusivity("acetone", "air", 298.15, 1.0)
+
+
+@pytest.mark.parametrize(
+    ("T", "P"),
+    [
+        (200.0, 100.0),  # lowest T of Fuller's stated range, lowest pressure without a warning
+        (2000.0, 1.0e6),  # highest T of the range, highest pressure without a warning
+        (298.15, ATM),
+    ],
+)
+def test_scalar_fast_path_at_its_edges_equals_the_array_path(T, P):
+    with warnings.catch_warnings():
+        warnings.simplefilter("error")
+        s = mt.gas_diffusivity("toluene", "air", T, P)
+    a = mt.gas_diffusivity("toluene", "air", np.array([T]), np.array([P]))
+    assert isinstance(s, float)
+    assert s == pytest.approx(float(a[0]), rel=1e-14)
+
+
+@pytest.mark.parametrize(
+    ("T", "P", "error", "match"),
+    [
+        (float("nan"), ATM, mt.errors.InputValueError, "T"),
+        (float("inf"), ATM, mt.errors.InputValueError, "T"),
+        (-298.15, ATM, mt.errors.InputValueError, "T"),
+        (298.15, float("nan"), mt.errors.InputValueError, "P"),
+        (298.15, -1.0, mt.errors.InputValueError, "P"),
+    ],
+)
+def test_scalar_fast_path_refuses_what_the_checked_path_refuses(T, P, error, match):
+    mt.gas_diffusivity("toluene", "air", 298.15)  # the pair is cached: the fast path is taken
+    with pytest.raises(error, match=match):
+        mt.gas_diffusivity("toluene", "air", T, P)
+
+
+def test_scalar_fast_path_still_warns_outside_the_range():
+    mt.gas_diffusivity("toluene", "air", 298.15)
+    with pytest.warns(mt.errors.EnvelopeWarning, match="outside 200-2000 K"):
+        mt.gas_diffusivity("toluene", "air", 2100.0)
+    with pytest.warns(mt.errors.EnvelopeWarning, match="P is in pascals"):
+        mt.gas_diffusivity("toluene", "air", 298.15, 50.0)
