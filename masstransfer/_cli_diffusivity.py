@@ -75,18 +75,18 @@ def run(args: argparse.Namespace) -> str:
     """Compute and format the diffusivity for the parsed arguments."""
     from ._cli_units import convert_table, plus_minus
     from .diffusivity._report import diffusivity_report
-    from .errors import OutOfRangeError
+    from .errors import InputValueError, OutOfRangeError
 
     T = np.asarray(args.temperature, dtype=float)
     try:
         report = diffusivity_report(
             args.solute, args.medium, T, args.pressure, phase=args.phase, method=args.method
         )
-    except OutOfRangeError as exc:  # name the command line's options, not the Python calls
+    except (OutOfRangeError, InputValueError) as exc:  # name the command line's options, not the calls
         text = str(exc)
         for python, option in _CLI_WORDS:
             text = text.replace(python, option)
-        raise OutOfRangeError(text) from exc
+        raise type(exc)(text) from exc
     D = np.atleast_1d(np.asarray(report.value, dtype=float))
     inferred = args.phase is None
     if args.json:

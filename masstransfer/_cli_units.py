@@ -48,6 +48,11 @@ _HEADER = re.compile(r"^(\S+) \[(.+)\]$")
 _REQUESTED: contextvars.ContextVar[dict[str, str] | None] = contextvars.ContextVar(
     "masstransfer_cli_units", default=None
 )
+#: Below this, a temperature given without a unit is more likely degrees Celsius than kelvin [K].
+_LOW_KELVIN = 200.0
+_BARE_LOW_T: contextvars.ContextVar[tuple[float, ...]] = contextvars.ContextVar(
+    "masstransfer_cli_bare_low_T", default=()
+)
 _INSTALL = "values with units need pint: pip install 'masstransfer[units]'"
 
 
@@ -64,9 +69,13 @@ def _reader(si_unit: str) -> Callable[[str], float]:
 
     def read(text: str) -> float:
         try:
-            return float(text)
+            value = float(text)
         except ValueError:
             pass
+        else:
+            if si_unit == "K" and value < _LOW_KELVIN:  # kept for the hint if the input is refused
+                _BARE_LOW_T.set((*_BARE_LOW_T.get(), value))
+            return value
         m = _NUMBER.match(text)
         if m is None:
             raise argparse.ArgumentTypeError(
@@ -131,6 +140,23 @@ def install(parser: argparse.ArgumentParser) -> None:
                 metavar="FRACTION",
                 help="relative standard uncertainty of the given h or k_c (0.1 for 10 %%)",
             )
+
+
+def start() -> None:
+    """Forget the values read by an earlier run in this thread (call before parsing)."""
+    _BARE_LOW_T.set(())
+
+
+def kelvin_hint() -> str:
+    """Return a hint for a refused input when a temperature was given as a bare number below 200 K."""
+    low = _BARE_LOW_T.get()
+    if not low:
+        return ""
+    t = low[0]
+    return (
+        f" (note: -T {t:g} without a unit is read as {t:g} K; for {t:g} degrees Celsius write "
+        f"-T '{t:g} degC' or -T {t + 273.15:g})"
+    )
 
 
 def begin(args: argparse.Namespace) -> None:

@@ -345,6 +345,7 @@ def main(argv: Sequence[str] | None = None) -> int:
 
     """
     argv = list(sys.argv[1:] if argv is None else argv)
+    _cli_units.start()
     try:
         args = _parser().parse_args(argv)
     except _UsageError as exc:
@@ -391,13 +392,11 @@ def main(argv: Sequence[str] | None = None) -> int:
 
 def _emit_error(exc: MassTransferError, as_json: bool) -> int:
     """Report a rejected input: one line on stderr, or a JSON object on stdout with ``--json``."""
+    message = _cli_message(str(exc)) + _cli_units.kelvin_hint()
     if as_json:
-        _emit(
-            json.dumps({"error": {"type": type(exc).__name__, "message": _cli_message(str(exc))}}, indent=2),
-            [],
-        )
+        _emit(json.dumps({"error": {"type": type(exc).__name__, "message": message}}, indent=2), [])
     else:
-        print(f"masstransfer: error: {_cli_message(str(exc))}", file=sys.stderr)
+        print(f"masstransfer: error: {message}", file=sys.stderr)
     return 2
 
 

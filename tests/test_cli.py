@@ -81,3 +81,22 @@ def test_python_dash_m():
         [sys.executable, "-m", "masstransfer", "demo"], capture_output=True, text=True, check=True
     )
     assert "Fuller" in out.stdout
+
+
+def test_a_bare_low_temperature_refused_gets_the_celsius_hint(capsys):
+    # 25 read as kelvin: air is not a gas there; the message says how to give degrees Celsius
+    assert main(["diffusivity", "toluene", "air", "-T", "25"]) == 2
+    err = capsys.readouterr().err
+    assert "read as 25 K" in err
+    assert "-T '25 degC'" in err
+    assert "-T 298.15" in err
+    # the hint does not carry over to a later, unrelated refusal in the same process
+    assert main(["diffusivity", "toluene", "air", "-T", "298.15", "-P", "-3"]) == 2
+    assert "degC" not in capsys.readouterr().err
+
+
+def test_phase_message_names_the_option_not_the_keyword(capsys):
+    assert main(["diffusivity", "toluene", "air", "-T", "77", "--json"]) == 2
+    message = json.loads(capsys.readouterr().out)["error"]["message"]
+    assert "--phase gas or --phase liquid" in message
+    assert "phase='gas'" not in message
