@@ -28,6 +28,20 @@ _VALUE_OPTIONS = {
     "h": "W/(m^2 K)",
     "kc": "m/s",
     "rh": "dimensionless",
+    "dew_point": "K",
+    "radiant_temperature": "K",
+    "velocity": "m/s",
+    "length": "m",
+    "conduction_coefficient": "W/(m^2 K)",
+}
+#: An example of a value with a unit, per SI unit, for the options' help.
+_EXAMPLES = {
+    "K": "'60 degC'",
+    "Pa": "'2 bar'",
+    "W/(m^2 K)": "'5 Btu/(h ft^2 degF)'",
+    "m/s": "'12 mm/s'",
+    "dimensionless": "'45 %%'",  # '%%' is one '%' in argparse help
+    "m": "'50 mm'",
 }
 #: JSON fields with their quantity name and SI unit, for ``"converted"``.
 _JSON_FIELDS = {
@@ -123,7 +137,7 @@ def install(parser: argparse.ArgumentParser) -> None:
                 action.type = _reader(unit)
                 takes_values = True
                 if action.help:
-                    action.help += " (or with a unit, e.g. '60 degC', '2 bar')"
+                    action.help += f" (or with a unit, e.g. {_EXAMPLES[unit]})"
         if takes_values:
             sub.add_argument(
                 "--units",

@@ -100,3 +100,19 @@ def test_phase_message_names_the_option_not_the_keyword(capsys):
     message = json.loads(capsys.readouterr().out)["error"]["message"]
     assert "--phase gas or --phase liquid" in message
     assert "phase='gas'" not in message
+
+
+def test_evaporate_reads_units_on_every_physical_option(capsys):
+    plain = [
+        "evaporate", "water", "air", "-T", "333.15", "--dew-point", "283.15",
+        "--correlation", "flat-plate-laminar-average", "--velocity", "3", "--length", "0.3", "--json",
+    ]  # fmt: skip
+    assert main(plain) == 0
+    si = json.loads(capsys.readouterr().out)
+    units = [
+        "evaporate", "water", "air", "-T", "60 degC", "--dew-point", "10 degC",
+        "--correlation", "flat-plate-laminar-average", "--velocity", "300 cm/s", "--length", "300 mm",
+        "--json",
+    ]  # fmt: skip
+    assert main(units) == 0
+    assert json.loads(capsys.readouterr().out) == si
