@@ -11,7 +11,7 @@ import re
 from types import MappingProxyType
 from typing import Final
 
-__all__ = ["ALIASES", "AMBIGUOUS", "CAS_PREFIX", "COMMON_NAMES"]
+__all__ = ["ALIASES", "AMBIGUOUS", "CAS_PREFIX", "COMMON_NAMES", "UNCLEAR_ABBREVIATIONS"]
 
 #: Plant abbreviations (upper-cased key) -> CAS number.  Every row: common practice.
 ALIASES: Final = MappingProxyType(
@@ -40,6 +40,54 @@ ALIASES: Final = MappingProxyType(
         "DMC": "616-38-6",  # dimethyl carbonate; common practice
         "PERC": "127-18-4",  # tetrachloroethylene (perchloroethylene); common practice
         "CTC": "56-23-5",  # carbon tetrachloride; common practice
+        # gas-treating amines and glycols (the database's own synonyms give other substances)
+        "DEA": "111-42-2",  # diethanolamine; common practice
+        "MDEA": "105-59-9",  # N-methyldiethanolamine; common practice
+        "DGA": "929-06-6",  # diglycolamine, 2-(2-aminoethoxy)ethanol; common practice
+        "PZ": "110-85-0",  # piperazine; common practice
+        "TEG": "112-27-6",  # triethylene glycol; common practice
+        "PG": "57-55-6",  # propylene glycol, 1,2-propanediol; common practice
+        "EG": "107-21-1",  # ethylene glycol; common practice
+        # solvents and intermediates
+        "DIBK": "108-83-8",  # diisobutyl ketone; common practice
+        "MAK": "110-43-0",  # methyl amyl ketone, 2-heptanone; common practice
+        "EGBE": "111-76-2",  # ethylene glycol monobutyl ether, 2-butoxyethanol; common practice
+        "PGME": "107-98-2",  # propylene glycol methyl ether, 1-methoxy-2-propanol; common practice
+        "PGMEA": "108-65-6",  # propylene glycol methyl ether acetate; common practice
+        "DIPE": "108-20-3",  # diisopropyl ether; common practice
+        "DEE": "60-29-7",  # diethyl ether; common practice
+        "IPE": "108-20-3",  # isopropyl ether, diisopropyl ether; common practice
+        "MEOAC": "79-20-9",  # methyl acetate; common practice
+        "ACOH": "64-19-7",  # acetic acid; common practice
+        "HAC": "64-19-7",  # acetic acid; common practice
+        "MCH": "108-87-2",  # methylcyclohexane; common practice
+        "EDC": "107-06-2",  # ethylene dichloride, 1,2-dichloroethane; common practice
+        "DCE": "107-06-2",  # 1,2-dichloroethane; common practice
+        "VCM": "75-01-4",  # vinyl chloride monomer; common practice
+        "VAM": "108-05-4",  # vinyl acetate monomer; common practice
+        "MMA": "80-62-6",  # methyl methacrylate; common practice
+        "MCB": "108-90-7",  # monochlorobenzene; common practice
+        "ODCB": "95-50-1",  # ortho-dichlorobenzene; common practice
+        "ECH": "106-89-8",  # epichlorohydrin; common practice
+        "DMDS": "624-92-0",  # dimethyl disulfide; common practice
+        "TBA": "75-65-0",  # tert-butanol (tert-butyl alcohol); common practice
+        "IBA": "78-83-1",  # isobutanol (isobutyl alcohol); common practice
+        "NBA": "71-36-3",  # n-butanol (n-butyl alcohol); common practice
+        "BUOH": "71-36-3",  # n-butanol; common practice
+        # commercial isomer mixtures: the straight chain, with the ambiguity warning below
+        "HEXANES": "110-54-3",  # n-hexane for "hexanes"; common practice
+        "HEPTANES": "142-82-5",  # n-heptane for "heptanes"; common practice
+    }
+)
+
+#: Abbreviations that mean different substances in different trades: refused with the
+#: candidates rather than guessed (upper-cased key) -> (name, CAS) of each.  Common practice.
+UNCLEAR_ABBREVIATIONS: Final = MappingProxyType(
+    {
+        "TEA": (("triethanolamine", "102-71-6"), ("triethylamine", "121-44-8")),
+        "DIPA": (("diisopropanolamine", "110-97-4"), ("diisopropylamine", "108-18-9")),
+        "AMP": (("2-amino-2-methyl-1-propanol", "124-68-5"), ("adenosine monophosphate", "61-19-8")),
+        "TCA": (("1,1,1-trichloroethane", "71-55-6"), ("trichloroacetic acid", "76-03-9")),
     }
 )
 
@@ -90,6 +138,10 @@ AMBIGUOUS: Final = MappingProxyType(
         "c5h12": (("n-pentane", "109-66-0"), ("isopentane", "78-78-4"), ("neopentane", "463-82-1")),
         "c6h14": (("n-hexane", "110-54-3"), ("2-methylpentane", "107-83-5"), ("3-methylpentane", "96-14-0")),
         "c4h10": (("n-butane", "106-97-8"), ("isobutane", "75-28-5")),
+        "hexanes": (("n-hexane", "110-54-3"), ("2-methylpentane", "107-83-5"), ("3-methylpentane", "96-14-0"),
+                    ("methylcyclopentane", "96-37-7")),
+        "heptanes": (("n-heptane", "142-82-5"), ("2-methylhexane", "591-76-4"),
+                     ("3-methylhexane", "589-34-4")),
         "c3h6": (("propylene", "115-07-1"), ("cyclopropane", "75-19-4")),
         "c2h4cl2": (("1,2-dichloroethane", "107-06-2"), ("1,1-dichloroethane", "75-34-3")),
         "c9h12": (("cumene", "98-82-8"), ("n-propylbenzene", "103-65-1"), ("mesitylene", "108-67-8")),

@@ -623,6 +623,14 @@ def _resolve(key: str) -> Species:
     if key.lower() in _AIR_NAMES:
         return _air()
     alias = _names.ALIASES.get(key.upper())
+    unclear = _names.UNCLEAR_ABBREVIATIONS.get(key.upper())
+    if unclear is not None:
+        raise _unknown(
+            key,
+            "is an abbreviation that means different substances in different trades ("
+            + ", ".join(f"{n}, CAS {c}" for n, c in unclear)
+            + "), so it was not guessed; pass the full name or the CAS number",
+        )
     m = _names.CAS_PREFIX.match(key)
     query = alias or (m.group(1) if m else key)
     with loading():
@@ -664,6 +672,13 @@ def _lookup(key: str, original: str | None = None) -> Species:
             meta = candidate  # kept to name it in the error
     if meta is None:
         raise _unknown(shown, "is not known to the chemicals database")
+    if _abbreviation_guess(key, meta):
+        raise _unknown(
+            shown,
+            f"looks like an abbreviation the library does not know; the database's synonyms give "
+            f"{meta.common_name!r} (CAS {meta.CASs}, {meta.formula}), which need not be what your "
+            "trade means by it, so it was not used; pass the full name or the CAS number",
+        )
     if not _plausible(key, meta):
         raise _unknown(
             shown,
@@ -679,6 +694,25 @@ def _lookup(key: str, original: str | None = None) -> Species:
             name=str(meta.common_name or meta.CASs),
         )
     )
+
+
+#: Two to six letters, two or more of them capitals ("BZ", "TEA", "AcOH"): an abbreviation.
+_ABBREVIATION = re.compile(r"(?=(?:[^A-Z]*[A-Z]){2})[A-Za-z]{2,6}")
+
+
+def _abbreviation_guess(query: str, meta: Any) -> bool:
+    """Whether ``meta`` was found only through a synonym for what looks like an abbreviation.
+
+    Abbreviations mean different substances in different trades, and the database's synonym
+    lists mix them ("BZ", "TEA", "PG"); only those in the alias table are trusted.  A formula
+    that matches the hit's formula ("CS2", "HCN") and an all-capital full name ("WATER") pass.
+    """
+    if not _ABBREVIATION.fullmatch(query) or query.lower() in _names.AMBIGUOUS:
+        return False
+    if _FORMULA.fullmatch(query) and _formula_atoms(query) == _formula_atoms(str(meta.formula or "")):
+        return False
+    own = {_norm(str(n)) for n in (meta.common_name, meta.iupac_name) if n}
+    return _norm(query) not in own
 
 
 def _plausible(query: str, meta: Any) -> bool:

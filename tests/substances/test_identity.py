@@ -26,6 +26,15 @@ from masstransfer.errors import AmbiguousSpeciesWarning, UnknownSpeciesError
         ("MIBK", "108-10-1"),
         ("NMP", "872-50-4"),
         ("ipa", "67-63-0"),
+        ("DEA", "111-42-2"),  # diethanolamine, not a herbicide metabolite
+        ("MDEA", "105-59-9"),  # N-methyldiethanolamine, not an amphetamine
+        ("PG", "57-55-6"),  # propylene glycol (1,2-propanediol), not 1,3-propanediol
+        ("EDC", "107-06-2"),
+        ("AcOH", "64-19-7"),
+        ("IBA", "78-83-1"),  # isobutanol, not a plant hormone
+        ("hexanes", "110-54-3"),  # n-hexane, with the ambiguity warning
+        ("HCN", "74-90-8"),  # a formula that looks like an abbreviation
+        ("WATER", "7732-18-5"),  # an all-capital name
         ("CAS 67-64-1", "67-64-1"),
         ("CAS-No. 67-64-1", "67-64-1"),
         # full names, including one the database finds only lower-cased
@@ -35,8 +44,38 @@ from masstransfer.errors import AmbiguousSpeciesWarning, UnknownSpeciesError
         ("CO2", "124-38-9"),
     ],
 )
+@pytest.mark.filterwarnings("ignore::masstransfer.errors.AmbiguousSpeciesWarning")
 def test_names_abbreviations_and_cas_prefix_resolve(query, cas):
     assert cas == mt.species(query).CAS
+
+
+@pytest.mark.parametrize(
+    ("query", "words"),
+    [
+        ("TEA", ("triethanolamine", "triethylamine")),  # gas treating vs. pharmaceutical usage
+        ("DIPA", ("diisopropanolamine", "diisopropylamine")),
+        ("AMP", ("2-amino-2-methyl-1-propanol",)),
+        ("TCA", ("1,1,1-trichloroethane", "trichloroacetic acid")),
+    ],
+)
+def test_abbreviation_with_several_meanings_is_refused_naming_them(query, words):
+    with pytest.raises(UnknownSpeciesError, match="not guessed") as info:
+        mt.species(query)
+    for word in words:
+        assert word in str(info.value)
+
+
+@pytest.mark.parametrize(
+    ("query", "wrong"),
+    [
+        ("BZ", "benzilate"),  # the database's synonym is a chemical warfare agent, not benzene
+        ("LPG", "alanine"),  # a fuel-gas mixture, not an amino acid
+    ],
+)
+def test_unknown_abbreviation_is_not_resolved_through_a_synonym(query, wrong):
+    with pytest.raises(UnknownSpeciesError, match="abbreviation the library does not know") as info:
+        mt.species(query)
+    assert wrong in str(info.value)  # what the database offered is named, so the user can judge
 
 
 def test_implausible_match_raises_with_candidates():
