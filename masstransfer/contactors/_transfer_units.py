@@ -16,6 +16,7 @@ import numpy as np
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, scalar
 from ..errors import InputTypeError, InputValueError, UnknownMethodError
+from ._common import float_array as _arr
 
 __all__ = [
     "ColumnProfile",
@@ -28,10 +29,6 @@ __all__ = [
     "transfer_unit_height",
     "transfer_units",
 ]
-
-
-def _arr(x: FloatOrArray) -> FloatArray:
-    return np.asarray(x, dtype=float)
 
 
 def _fraction(name: str, value: ArrayLike) -> FloatOrArray:
