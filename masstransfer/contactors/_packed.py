@@ -445,19 +445,9 @@ def billet_schultes_k_G(
 
     """
     uV, uL, av, eps, cv, ch, rhoV, muV, D, rhoL, muL, Tv = positives(
-        u_V=u_V,
-        u_L=u_L,
-        a=a,
-        void_fraction=void_fraction,
-        C_V=C_V,
-        C_h=C_h,
-        rho_V=rho_V,
-        mu_V=mu_V,
-        D_V=D_V,
-        rho_L=rho_L,
-        mu_L=mu_L,
-        T=T,
-    )
+        u_V=u_V, u_L=u_L, a=a, void_fraction=void_fraction, C_V=C_V, C_h=C_h, rho_V=rho_V, mu_V=mu_V,
+        D_V=D_V, rho_L=rho_L, mu_L=mu_L, T=T,
+    )  # fmt: skip
     _void(eps)
     A, E = _arr(av), _arr(eps)
     hL = _holdup(_arr(uL), A, _arr(ch), _arr(rhoL), _arr(muL))
@@ -608,16 +598,9 @@ def billet_schultes_loading_velocity(
 
     """
     uL, uV, av, eps, cs, rhoL, rhoV, muL, muV = positives(
-        u_L=u_L,
-        u_V=u_V,
-        a=a,
-        void_fraction=void_fraction,
-        C_S=C_S,
-        rho_L=rho_L,
-        rho_V=rho_V,
-        mu_L=mu_L,
+        u_L=u_L, u_V=u_V, a=a, void_fraction=void_fraction, C_S=C_S, rho_L=rho_L, rho_V=rho_V, mu_L=mu_L,
         mu_V=mu_V,
-    )
+    )  # fmt: skip
     _void(eps)
     A, RL, RV, ML, MV = _arr(av), _arr(rhoL), _arr(rhoV), _arr(muL), _arr(muV)
     film = 12.0 * ML * _arr(uL) / (GRAVITY * RL)
@@ -814,20 +797,9 @@ def bravo_rocha_fair_k_G(
 
     """
     uV, uL, eps, Sv, Bv, hv, th, rhoV, muV, D, rhoL, muL, Tv = positives(
-        u_V=u_V,
-        u_L=u_L,
-        void_fraction=void_fraction,
-        S=S,
-        B=B,
-        h=h,
-        theta=theta,
-        rho_V=rho_V,
-        mu_V=mu_V,
-        D_V=D_V,
-        rho_L=rho_L,
-        mu_L=mu_L,
-        T=T,
-    )
+        u_V=u_V, u_L=u_L, void_fraction=void_fraction, S=S, B=B, h=h, theta=theta, rho_V=rho_V, mu_V=mu_V,
+        D_V=D_V, rho_L=rho_L, mu_L=mu_L, T=T,
+    )  # fmt: skip
     _void(eps)
     _brf_check(Sv, Bv, hv, th)
     U_Ve, U_Le = _brf_velocities(
