@@ -214,6 +214,17 @@ def _compute(spec: Mapping[str, Mapping[str, Any]], points: int) -> dict[str, An
             f"point; above about {100 * _FLOODING_FRACTION:.0f} % a packed column floods (common "
             "practice) and no rating holds: enlarge diameter_m or lower the gas flow"
         )
+    notes = [
+        "capacity: only the fraction of the loading point is rated, not the pressure drop or the "
+        "flooding point; check both against the packing's own data",
+        "the packed height carries no allowance for liquid maldistribution, end effects or a design "
+        "margin; add the margin your practice requires",
+    ]
+    if dH == 0.0:
+        notes.append(
+            "isothermal liquid: no heat of absorption was given; for an exothermic absorption set "
+            "[equilibrium] heat_of_absorption_J_per_mol, since the warming liquid raises m and the height"
+        )
     return {
         "mode": mode,
         "packing": film.packing,
@@ -248,6 +259,7 @@ def _compute(spec: Mapping[str, Mapping[str, Any]], points: int) -> dict[str, An
             "y_star": prof.y_star.tolist(),
         },
         "caution": CAUTION,
+        "notes": notes,
         "warnings": list(film.warnings),
     }
 
@@ -285,7 +297,10 @@ def _tables(r: Mapping[str, Any]) -> str:
     lines += ["", "Profile along the height", f"{'z [m]':>8}  {'y':>11}  {'x':>11}  {'y*':>11}  {'T [K]':>8}"]
     for z, y, x, ys, T in zip(prof["z_m"], prof["y"], prof["x"], prof["y_star"], prof["T_K"], strict=True):
         lines.append(f"{z:8.3f}  {y:11.4e}  {x:11.4e}  {ys:11.4e}  {T:8.2f}")
-    lines += ["", f"Accuracy: {r['accuracy']}.", f"Caution: {CAUTION}"]
+    lines += ["", f"Accuracy: {r['accuracy']}."]
+    if r["warnings"]:
+        lines += ["Warnings:", *(f"  {w}" for w in r["warnings"])]
+    lines += ["Notes:", *(f"  {n}" for n in r["notes"]), f"Caution: {CAUTION}"]
     return "\n".join(lines)
 
 

@@ -13,6 +13,7 @@ from ..constants import GRAVITY
 from ..errors import InputTypeError, InputValueError
 from ..surface import archimedes, correlation
 from ._common import envelope
+from ._common import float_array as _arr
 
 __all__ = [
     "akita_yoshida_holdup",
@@ -24,10 +25,6 @@ __all__ = [
 
 _AY = "Akita & Yoshida (1973) data range (from memory)"
 _VR = "van't Riet (1979) data range"
-
-
-def _arr(x: FloatOrArray) -> FloatArray:
-    return np.asarray(x, dtype=float)
 
 
 def _solve_holdup(rhs: FloatArray) -> FloatArray:

@@ -4,11 +4,16 @@ from __future__ import annotations
 
 import numpy as np
 
-from .._typing import FloatOrArray
-from .._validation import warn_caller
+from .._typing import FloatArray, FloatOrArray
+from .._validation import check_positive, check_shapes, warn_caller
 from ..errors import EnvelopeError, EnvelopeWarning, InputValueError
 
-__all__ = ["envelope", "require_domain"]
+__all__ = ["envelope", "float_array", "positives", "require_domain"]
+
+
+def float_array(x: FloatOrArray) -> FloatArray:
+    """Return the value as a float numpy array (0-d for a scalar)."""
+    return np.asarray(x, dtype=float)
 
 
 def _extremes(value: FloatOrArray) -> tuple[float, float] | None:
@@ -44,3 +49,13 @@ def require_domain(name: str, value: FloatOrArray, low: float, high: float, fix:
     raise InputValueError(
         f"{name}={bad!r} is outside ({low:g}, {high:g}), where the equation is defined; {fix}"
     )
+
+
+def positives(**values: object) -> tuple[FloatOrArray, ...]:
+    """Check each argument finite and positive, in the order given, and that they broadcast together.
+
+    Returns the converted values in the same order; the first bad one raises, naming itself.
+    """
+    checked = {name: check_positive(name, value) for name, value in values.items()}
+    check_shapes(**checked)
+    return tuple(checked.values())

@@ -11,10 +11,11 @@ import math
 import numpy as np
 
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_positive, check_shapes, finish, guard
+from .._validation import finish, guard
 from ..constants import GRAVITY, R_GAS
 from ..errors import InputValueError
-from ._common import envelope
+from ._common import envelope, positives
+from ._common import float_array as _arr
 
 __all__ = [
     "billet_schultes_area",
@@ -33,10 +34,6 @@ _ONDA = "Onda, Takeuchi & Okumoto (1968)"
 _ONDA_ENVELOPE = "Onda et al. (1968) data range (from memory)"
 _BS = "Billet & Schultes (1999)"
 _BRF = "Bravo, Rocha & Fair (1985)"
-
-
-def _arr(x: FloatOrArray) -> FloatArray:
-    return np.asarray(x, dtype=float)
 
 
 @guard
@@ -94,13 +91,9 @@ def onda_wetted_area(
     72.6
 
     """
-    av = check_positive("a", a)
-    sc = check_positive("sigma_c", sigma_c)
-    s = check_positive("sigma", sigma)
-    Lm = check_positive("L_mass", L_mass)
-    mu = check_positive("mu_L", mu_L)
-    rho = check_positive("rho_L", rho_L)
-    check_shapes(a=av, sigma_c=sc, sigma=s, L_mass=Lm, mu_L=mu, rho_L=rho)
+    av, sc, s, Lm, mu, rho = positives(
+        a=a, sigma_c=sigma_c, sigma=sigma, L_mass=L_mass, mu_L=mu_L, rho_L=rho_L
+    )
     A, L, M, R = _arr(av), _arr(Lm), _arr(mu), _arr(rho)
     Re = L / (A * M)
     Fr = L * L * A / (R * R * GRAVITY)
@@ -168,14 +161,9 @@ def onda_k_L(
     1.816
 
     """
-    Lm = check_positive("L_mass", L_mass)
-    aw = check_positive("a_w", a_w)
-    mu = check_positive("mu_L", mu_L)
-    rho = check_positive("rho_L", rho_L)
-    D = check_positive("D_L", D_L)
-    av = check_positive("a", a)
-    dp = check_positive("nominal_size", nominal_size)
-    check_shapes(L_mass=Lm, a_w=aw, mu_L=mu, rho_L=rho, D_L=D, a=av, nominal_size=dp)
+    Lm, aw, mu, rho, D, av, dp = positives(
+        L_mass=L_mass, a_w=a_w, mu_L=mu_L, rho_L=rho_L, D_L=D_L, a=a, nominal_size=nominal_size
+    )
     M, R = _arr(mu), _arr(rho)
     Sc = M / (R * _arr(D))
     return finish(
@@ -241,14 +229,9 @@ def onda_k_G(
     1.36
 
     """
-    Gm = check_positive("G_mass", G_mass)
-    av = check_positive("a", a)
-    mu = check_positive("mu_G", mu_G)
-    rho = check_positive("rho_G", rho_G)
-    D = check_positive("D_G", D_G)
-    dp = check_positive("nominal_size", nominal_size)
-    Tv = check_positive("T", T)
-    check_shapes(G_mass=Gm, a=av, mu_G=mu, rho_G=rho, D_G=D, nominal_size=dp, T=Tv)
+    Gm, av, mu, rho, D, dp, Tv = positives(
+        G_mass=G_mass, a=a, mu_G=mu_G, rho_G=rho_G, D_G=D_G, nominal_size=nominal_size, T=T
+    )
     A, M, Dv, d = _arr(av), _arr(mu), _arr(D), _arr(dp)
     C = np.where(d >= 0.015, 5.23, 2.0)
     Sc = M / (_arr(rho) * Dv)
@@ -312,14 +295,9 @@ def billet_schultes_k_L(
     1.464
 
     """
-    uL = check_positive("u_L", u_L)
-    av = check_positive("a", a)
-    eps = check_positive("void_fraction", void_fraction)
-    cl = check_positive("C_L", C_L)
-    rho = check_positive("rho_L", rho_L)
-    mu = check_positive("mu_L", mu_L)
-    D = check_positive("D_L", D_L)
-    check_shapes(u_L=uL, a=av, void_fraction=eps, C_L=cl, rho_L=rho, mu_L=mu, D_L=D)
+    uL, av, eps, cl, rho, mu, D = positives(
+        u_L=u_L, a=a, void_fraction=void_fraction, C_L=C_L, rho_L=rho_L, mu_L=mu_L, D_L=D_L
+    )
     _void(eps)
     A = _arr(av)
     d_h = 4.0 * _arr(eps) / A
@@ -391,12 +369,7 @@ def billet_schultes_holdup(
     0.0356
 
     """
-    uL = check_positive("u_L", u_L)
-    av = check_positive("a", a)
-    ch = check_positive("C_h", C_h)
-    rho = check_positive("rho_L", rho_L)
-    mu = check_positive("mu_L", mu_L)
-    check_shapes(u_L=uL, a=av, C_h=ch, rho_L=rho, mu_L=mu)
+    uL, av, ch, rho, mu = positives(u_L=u_L, a=a, C_h=C_h, rho_L=rho_L, mu_L=mu_L)
     return finish(_holdup(_arr(uL), _arr(av), _arr(ch), _arr(rho), _arr(mu)))
 
 
@@ -471,21 +444,9 @@ def billet_schultes_k_G(
     2.542
 
     """
-    uV = check_positive("u_V", u_V)
-    uL = check_positive("u_L", u_L)
-    av = check_positive("a", a)
-    eps = check_positive("void_fraction", void_fraction)
-    cv = check_positive("C_V", C_V)
-    ch = check_positive("C_h", C_h)
-    rhoV = check_positive("rho_V", rho_V)
-    muV = check_positive("mu_V", mu_V)
-    D = check_positive("D_V", D_V)
-    rhoL = check_positive("rho_L", rho_L)
-    muL = check_positive("mu_L", mu_L)
-    Tv = check_positive("T", T)
-    check_shapes(
-        u_V=uV, u_L=uL, a=av, void_fraction=eps, C_V=cv, C_h=ch, rho_V=rhoV, mu_V=muV, D_V=D,
-        rho_L=rhoL, mu_L=muL, T=Tv,
+    uV, uL, av, eps, cv, ch, rhoV, muV, D, rhoL, muL, Tv = positives(
+        u_V=u_V, u_L=u_L, a=a, void_fraction=void_fraction, C_V=C_V, C_h=C_h, rho_V=rho_V, mu_V=mu_V,
+        D_V=D_V, rho_L=rho_L, mu_L=mu_L, T=T,
     )  # fmt: skip
     _void(eps)
     A, E = _arr(av), _arr(eps)
@@ -554,13 +515,9 @@ def billet_schultes_area(
     79.2
 
     """
-    uL = check_positive("u_L", u_L)
-    av = check_positive("a", a)
-    eps = check_positive("void_fraction", void_fraction)
-    rho = check_positive("rho_L", rho_L)
-    mu = check_positive("mu_L", mu_L)
-    s = check_positive("sigma", sigma)
-    check_shapes(u_L=uL, a=av, void_fraction=eps, rho_L=rho, mu_L=mu, sigma=s)
+    uL, av, eps, rho, mu, s = positives(
+        u_L=u_L, a=a, void_fraction=void_fraction, rho_L=rho_L, mu_L=mu_L, sigma=sigma
+    )
     _void(eps)
     A, U, R = _arr(av), _arr(uL), _arr(rho)
     d_h = 4.0 * _arr(eps) / A
@@ -640,16 +597,10 @@ def billet_schultes_loading_velocity(
     2.09
 
     """
-    uL = check_positive("u_L", u_L)
-    uV = check_positive("u_V", u_V)
-    av = check_positive("a", a)
-    eps = check_positive("void_fraction", void_fraction)
-    cs = check_positive("C_S", C_S)
-    rhoL = check_positive("rho_L", rho_L)
-    rhoV = check_positive("rho_V", rho_V)
-    muL = check_positive("mu_L", mu_L)
-    muV = check_positive("mu_V", mu_V)
-    check_shapes(u_L=uL, u_V=uV, a=av, void_fraction=eps, C_S=cs, rho_L=rhoL, rho_V=rhoV, mu_L=muL, mu_V=muV)
+    uL, uV, av, eps, cs, rhoL, rhoV, muL, muV = positives(
+        u_L=u_L, u_V=u_V, a=a, void_fraction=void_fraction, C_S=C_S, rho_L=rho_L, rho_V=rho_V, mu_L=mu_L,
+        mu_V=mu_V,
+    )  # fmt: skip
     _void(eps)
     A, RL, RV, ML, MV = _arr(av), _arr(rhoL), _arr(rhoV), _arr(muL), _arr(muV)
     film = 12.0 * ML * _arr(uL) / (GRAVITY * RL)
@@ -757,16 +708,9 @@ def bravo_rocha_fair_k_L(
     1.234
 
     """
-    uL = check_positive("u_L", u_L)
-    eps = check_positive("void_fraction", void_fraction)
-    Sv = check_positive("S", S)
-    Bv = check_positive("B", B)
-    hv = check_positive("h", h)
-    th = check_positive("theta", theta)
-    rho = check_positive("rho_L", rho_L)
-    mu = check_positive("mu_L", mu_L)
-    D = check_positive("D_L", D_L)
-    check_shapes(u_L=uL, void_fraction=eps, S=Sv, B=Bv, h=hv, theta=th, rho_L=rho, mu_L=mu, D_L=D)
+    uL, eps, Sv, Bv, hv, th, rho, mu, D = positives(
+        u_L=u_L, void_fraction=void_fraction, S=S, B=B, h=h, theta=theta, rho_L=rho_L, mu_L=mu_L, D_L=D_L
+    )
     _void(eps)
     _brf_check(Sv, Bv, hv, th)
     _, U_Le = _brf_velocities(
@@ -852,22 +796,9 @@ def bravo_rocha_fair_k_G(
     0.686
 
     """
-    uV = check_positive("u_V", u_V)
-    uL = check_positive("u_L", u_L)
-    eps = check_positive("void_fraction", void_fraction)
-    Sv = check_positive("S", S)
-    Bv = check_positive("B", B)
-    hv = check_positive("h", h)
-    th = check_positive("theta", theta)
-    rhoV = check_positive("rho_V", rho_V)
-    muV = check_positive("mu_V", mu_V)
-    D = check_positive("D_V", D_V)
-    rhoL = check_positive("rho_L", rho_L)
-    muL = check_positive("mu_L", mu_L)
-    Tv = check_positive("T", T)
-    check_shapes(
-        u_V=uV, u_L=uL, void_fraction=eps, S=Sv, B=Bv, h=hv, theta=th, rho_V=rhoV, mu_V=muV, D_V=D,
-        rho_L=rhoL, mu_L=muL, T=Tv,
+    uV, uL, eps, Sv, Bv, hv, th, rhoV, muV, D, rhoL, muL, Tv = positives(
+        u_V=u_V, u_L=u_L, void_fraction=void_fraction, S=S, B=B, h=h, theta=theta, rho_V=rho_V, mu_V=mu_V,
+        D_V=D_V, rho_L=rho_L, mu_L=mu_L, T=T,
     )  # fmt: skip
     _void(eps)
     _brf_check(Sv, Bv, hv, th)

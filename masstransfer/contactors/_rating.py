@@ -10,10 +10,11 @@ from typing import Any
 import numpy as np
 
 from .._typing import ArrayLike, FloatOrArray
-from .._validation import check_positive, check_shapes, collect_warnings, finish, guard, warn_caller
+from .._validation import check_positive, collect_warnings, finish, guard, warn_caller
 from ..errors import EnvelopeWarning, InputTypeError, UnknownMethodError
 from ..substances._species import Species
 from ._bubble import akita_yoshida_holdup, akita_yoshida_kla
+from ._common import positives
 from ._packed import (
     billet_schultes_area,
     billet_schultes_k_G,
@@ -190,17 +191,9 @@ def packed_column(
     """
     pk = _packing_arg(packing)
     how = _method_arg(method)
-    uV = check_positive("u_V", u_V)
-    uL = check_positive("u_L", u_L)
-    Tv = check_positive("T", T)
-    rhoV = check_positive("rho_V", rho_V)
-    muV = check_positive("mu_V", mu_V)
-    DV = check_positive("D_V", D_V)
-    rhoL = check_positive("rho_L", rho_L)
-    muL = check_positive("mu_L", mu_L)
-    DL = check_positive("D_L", D_L)
-    s = check_positive("sigma", sigma)
-    check_shapes(u_V=uV, u_L=uL, T=Tv, rho_V=rhoV, mu_V=muV, D_V=DV, rho_L=rhoL, mu_L=muL, D_L=DL, sigma=s)
+    uV, uL, Tv, rhoV, muV, DV, rhoL, muL, DL, s = positives(
+        u_V=u_V, u_L=u_L, T=T, rho_V=rho_V, mu_V=mu_V, D_V=D_V, rho_L=rho_L, mu_L=mu_L, D_L=D_L, sigma=sigma
+    )
     with collect_warnings() as caught:
         if how == "onda":
             L_mass = finish(np.asarray(uL) * np.asarray(rhoL))

@@ -14,6 +14,7 @@ import numpy as np
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, warn_caller
 from ..errors import EnvelopeWarning, InputValueError, UnknownMethodError
+from ._common import float_array as _arr
 
 __all__ = [
     "EnhancementResult",
@@ -33,10 +34,6 @@ FAST_ABOVE = 3.0
 #: Ha / E_inf ratios bounding the fast pseudo-first-order and instantaneous regimes (common practice).
 PSEUDO_FIRST_ORDER_BELOW = 0.5
 INSTANTANEOUS_ABOVE = 10.0
-
-
-def _arr(x: FloatOrArray) -> FloatArray:
-    return np.asarray(x, dtype=float)
 
 
 @overload

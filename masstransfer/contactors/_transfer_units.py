@@ -16,6 +16,7 @@ import numpy as np
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, scalar
 from ..errors import InputTypeError, InputValueError, UnknownMethodError
+from ._common import float_array as _arr
 
 __all__ = [
     "ColumnProfile",
@@ -28,10 +29,6 @@ __all__ = [
     "transfer_unit_height",
     "transfer_units",
 ]
-
-
-def _arr(x: FloatOrArray) -> FloatArray:
-    return np.asarray(x, dtype=float)
 
 
 def _fraction(name: str, value: ArrayLike) -> FloatOrArray:
@@ -361,8 +358,65 @@ def _equilibrium(equilibrium: Any) -> Callable[..., float]:
     return line
 
 
-def _log_mean(a: float, b: float) -> float:
-    return a if abs(a - b) < 1e-12 * a else (a - b) / math.log(a / b)
+def _inert_log_mean(y: float, ystar: float) -> float:
+    """Log mean of 1 - y* and 1 - y, accurate however close the two are.
+
+    With b = 1 - y and r = (y - y*)/b the log mean is b r / ln(1 + r); the difference y - y* is
+    taken directly (never as (1 - y*) - (1 - y), which loses it below y ~ 1e-16), and for
+    |r| < 1e-4 the series b (1 + r/2 - r^2/12 + r^3/24) replaces the quotient.
+    """
+    b = 1.0 - y
+    r = (y - ystar) / b
+    if abs(r) < 1e-4:
+        return b * (1.0 + r * (0.5 + r * (-1.0 / 12.0 + r / 24.0)))
+    return b * r / math.log1p(r)
+
+
+#: Below this driving force at the top a double has lost its full precision (the smallest normal).
+_TINY = float(np.finfo(float).tiny)
+
+
+def _top_force(driving: Callable[[float], float], yo: float, yi: float) -> float:
+    """Check y - y* > 0 from the top to the bottom and return its value at the top, y_out - y*(x_in).
+
+    The check samples a linear grid and a grid logarithmic in the distance from the top, so a pinch
+    close to a very small y_out is seen as well as one in the body of the column.
+    """
+    d0 = driving(yo)
+    span = yi - yo
+    near_top = yo + np.geomspace(max(d0, _TINY), span + max(d0, _TINY), 201) - max(d0, _TINY)
+    grid = np.unique(np.concatenate([np.linspace(yo, yi, 201), np.clip(near_top, yo, yi)]))
+    forces = np.array([driving(float(y)) for y in grid])
+    if np.any(forces <= 0.0):
+        at = float(grid[int(np.argmax(forces <= 0.0))])
+        raise InputValueError(
+            f"the driving force y - y* is not positive at y={at:.6g}: the operating line touches or "
+            "crosses the equilibrium curve (a pinch); raise L_over_G or ask for a higher y_out"
+        )
+    if d0 < _TINY:
+        raise InputValueError(
+            f"y_out={yo!r} leaves a driving force y_out - y* of {d0!r} at the top, below the smallest "
+            f"normal double ({_TINY:.3g}), where the transfer units cannot be counted to full precision; "
+            "ask for y_out at least 1e-300 above the gas in equilibrium with the entering liquid"
+        )
+    return d0
+
+
+def _quad_from_top(integrand: Callable[[float], float], yo: float, yi: float, d0: float) -> float:
+    """Integrate integrand(y) dy from y_out to y_in in u = ln(y - y_out + d0).
+
+    d0 is the driving force at the top.  With w = y - y_out + d0, dy = w du and the integrand
+    w/(y - y*) stays between fixed bounds however small y_out is, so the quadrature resolves
+    the ln(1/y_out) tail that a linear variable cannot reach below y_out ~ 1e-50.
+    """
+    from scipy.integrate import quad
+
+    def in_log(u: float) -> float:
+        w = math.exp(u)
+        return w * integrand(yo + (w - d0))
+
+    value, _ = quad(in_log, math.log(d0), math.log(yi - yo + d0), epsabs=0.0, epsrel=1e-11, limit=200)
+    return float(value)
 
 
 @guard(check_output=False)
@@ -417,8 +471,12 @@ def numerical_transfer_units(
     Notes
     -----
     Adaptive Gauss-Kronrod quadrature (:func:`scipy.integrate.quad`) to a
-    relative tolerance of 1e-11; with a straight line and a dilute gas it
-    reproduces :func:`transfer_units` (tested to 1e-6).
+    relative tolerance of 1e-11, in the variable ln(y - y_out + d0) with d0
+    the driving force at the top, so the ln(1/y_out) tail is resolved for any
+    y_out; with a straight line and a dilute gas it reproduces
+    :func:`transfer_units` to 1e-6 (tested for y_out from 1e-3 down to
+    1e-300).  A driving force at the top below the smallest normal double
+    (2.2e-308) is refused, naming ``y_out``.
 
     References
     ----------
@@ -431,8 +489,6 @@ def numerical_transfer_units(
     5.977
 
     """
-    from scipy.integrate import quad
-
     yi = float(_fraction("y_in", scalar("y_in", y_in)))
     yo = float(_fraction("y_out", scalar("y_out", y_out)))
     xi = float(_fraction("x_in", scalar("x_in", x_in)))
@@ -459,23 +515,15 @@ def numerical_transfer_units(
     def driving(y: float) -> float:
         return y - f(x_of(y))
 
-    grid = np.linspace(yo, yi, 201)
-    forces = np.array([driving(float(y)) for y in grid])
-    if np.any(forces <= 0.0):
-        at = float(grid[int(np.argmax(forces <= 0.0))])
-        raise InputValueError(
-            f"the driving force y - y* is not positive at y={at:.6g}: the operating line touches or "
-            "crosses the equilibrium curve (a pinch); raise L_over_G or ask for a higher y_out"
-        )
+    d0 = _top_force(driving, yo, yi)
 
     def integrand(y: float) -> float:
         ystar = f(x_of(y))
         if not conc:
             return 1.0 / (y - ystar)
-        return _log_mean(1.0 - ystar, 1.0 - y) / ((1.0 - y) * (y - ystar))
+        return _inert_log_mean(y, ystar) / ((1.0 - y) * (y - ystar))
 
-    value, _ = quad(integrand, yo, yi, epsabs=0.0, epsrel=1e-11, limit=200)
-    return float(value)
+    return _quad_from_top(integrand, yo, yi, d0)
 
 
 @guard(check_output=False)
@@ -538,7 +586,6 @@ def film_transfer_units(
     6.157
 
     """
-    from scipy.integrate import quad
     from scipy.optimize import brentq
 
     yi = float(_fraction("y_in", scalar("y_in", y_in)))
@@ -562,12 +609,7 @@ def film_transfer_units(
 
     if not x_of(yi) < 1.0:
         raise InputValueError(f"the leaving liquid would have x={x_of(yi)!r}; raise L_over_G={LG!r}")
-    grid = np.linspace(yo, yi, 201)
-    if any(float(y) - f(x_of(float(y))) <= 0.0 for y in grid):
-        raise InputValueError(
-            "the driving force y - y* is not positive everywhere between the ends (a pinch); "
-            "raise L_over_G or ask for a higher y_out"
-        )
+    d0 = _top_force(lambda y: y - f(x_of(y)), yo, yi)
 
     def interface(y: float) -> tuple[float, float]:
         x = x_of(y)
@@ -575,7 +617,16 @@ def film_transfer_units(
             x_i = (y + R * x) / (slope + R)
             return slope * x_i, x_i
         top = x + (y - f(x)) / R
-        x_i = float(brentq(lambda v: f(v) - y + R * (v - x), x, min(top, 1.0 - 1e-12), xtol=1e-16))
+        width = min(top, 1.0 - 1e-12) - x
+
+        def balance(t: float) -> float:
+            # the film balance on the interval [x, top] scaled to [0, 1], so the root is found to
+            # the same relative precision at y ~ 1e-300 as at y ~ 0.01
+            return (f(x + t * width) - y) / (R * width) + t
+
+        if width <= 0.0 or balance(1.0) <= 0.0:  # x and its bound round together: no room to search
+            return f(x + width), x + width
+        x_i = x + float(brentq(balance, 0.0, 1.0, xtol=1e-15)) * width
         return f(x_i), x_i
 
     def integrand(y: float) -> float:
@@ -584,8 +635,7 @@ def film_transfer_units(
             return 1.0 / (y - y_i)
         return 1.0 / (LG * (x_i - x_of(y)))
 
-    value, _ = quad(integrand, yo, yi, epsabs=0.0, epsrel=1e-11, limit=200)
-    return float(value)
+    return _quad_from_top(integrand, yo, yi, d0)
 
 
 def _bool(name: str, value: object) -> bool:
@@ -723,7 +773,10 @@ def column_profile(
     (no solvent evaporation); for strongly exothermic absorption of
     concentrated gases use a rigorous rate-based model.  A dilute,
     isothermal, straight-line case reproduces :func:`transfer_units` times
-    G/K_y a to 1e-6 (tested).
+    G/K_y a to 1e-6 (tested for y_out down to 1e-300: the absolute
+    tolerances follow the driving force at the top, and rating searches
+    ln(y_out - y*)).  A y_out within 2.2e-308 of y* at the top, or a height
+    that brings it within 1e-301, is refused.
 
     References
     ----------
@@ -781,7 +834,7 @@ def column_profile(
         ystar = f(x, temperature(x))
         force = K * (y - ystar)
         if conc:
-            force /= _log_mean(1.0 - ystar, 1.0 - y)
+            force /= _inert_log_mean(y, ystar)
             return [force / G_inert, force / L_inert]
         return [force / Gv, force / Lv]
 
@@ -796,7 +849,12 @@ def column_profile(
         )
     target = yi / (1.0 - yi) if conc else yi
     H_OG = Gv / K
-    opts: dict[str, Any] = {"method": "DOP853", "rtol": 1e-10, "atol": 1e-14, "dense_output": True}
+
+    def options(force_top: float) -> dict[str, Any]:
+        # absolute tolerances on the scale of the driving force at the top (y, then x), so a y_out
+        # of 1e-300 is marched to the same relative precision as one of 1e-3
+        atol = [1e-13 * force_top, 1e-13 * force_top * Gv / Lv]
+        return {"method": "DOP853", "rtol": 1e-10, "atol": atol, "dense_output": True}
 
     def reached(_s: float, state: FloatArray) -> float:
         return float(state[0]) - target
@@ -811,8 +869,14 @@ def column_profile(
                 f"y_out={yo!r} must lie between y*={ystar_top!r} (equilibrium with the entering "
                 f"liquid) and y_in={yi!r}"
             )
+        if yo - ystar_top < _TINY:
+            raise InputValueError(
+                f"y_out={yo!r} lies within {_TINY:.3g} (the smallest normal double) of y*={ystar_top!r}, "
+                "the gas in equilibrium with the entering liquid, where the height cannot be computed "
+                "to full precision; ask for y_out at least 1e-300 above it"
+            )
         span = 1e4 * H_OG
-        sol = solve_ivp(rates, (0.0, span), start(yo), events=reached, **opts)
+        sol = solve_ivp(rates, (0.0, span), start(yo), events=reached, **options(yo - ystar_top))
         if sol.status != 1:
             raise InputValueError(
                 f"y_out={yo!r} cannot be reached: the operating and equilibrium lines pinch, so no "
@@ -824,18 +888,28 @@ def column_profile(
     else:
         H = float(check_positive("height", scalar("height", height)))
 
-        def residual(yo: float) -> float:
-            # negative while the gas, marched down from the top, stays below y_in over the whole
-            # height; positive (by the unused height) once it reaches y_in early: continuous, monotone
-            s = solve_ivp(rates, (0.0, H), start(yo), events=reached, **opts)
+        def residual(u: float) -> float:
+            # u = ln(y_out - y*_top).  Negative while the gas, marched down from the top, stays
+            # below y_in over the whole height; positive (by the unused height) once it reaches
+            # y_in early: continuous and monotone in u
+            force_top = math.exp(u)
+            s = solve_ivp(rates, (0.0, H), start(ystar_top + force_top), events=reached, **options(force_top))
             if s.status == 1:
                 assert s.t_events is not None
                 return (H - float(s.t_events[0][0])) / H
             return float(s.y[0, -1]) - target
 
-        upper = yi - 1e-9 * (yi - ystar_top)  # just below y_in, so the event is seen after the start
-        yo = float(brentq(residual, ystar_top, upper, xtol=1e-15, rtol=1e-13, maxiter=200))
-        sol = solve_ivp(rates, (0.0, H), start(yo), **opts)
+        lowest = math.log(1e-301)
+        if residual(lowest) >= 0.0:
+            raise InputValueError(
+                f"height={H!r} brings the leaving gas to within 1e-301 of y*={ystar_top!r}, the gas in "
+                "equilibrium with the entering liquid: the column is far taller than any separation "
+                "needs; pass a smaller height, or size the column for a y_out instead"
+            )
+        highest = math.log((yi - ystar_top) * (1.0 - 1e-9))  # just below y_in: the event is seen
+        u = float(brentq(residual, lowest, highest, xtol=1e-13, rtol=1e-13, maxiter=200))
+        yo = ystar_top + math.exp(u)
+        sol = solve_ivp(rates, (0.0, H), start(yo), **options(yo - ystar_top))
 
     depth = np.linspace(0.0, H, int(points))
     assert sol.sol is not None  # dense output was asked for

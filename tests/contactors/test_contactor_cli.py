@@ -91,3 +91,22 @@ def test_a_flooded_column_is_refused(capsys, tmp_path):
     path.write_text(spec, encoding="utf-8")
     assert main(["column", str(path)]) == 2
     assert "floods" in capsys.readouterr().err
+
+
+def test_table_keeps_warnings_and_design_notes_in_the_report(capsys, tmp_path):
+    # near loading: the caution must reach a saved report (stdout), not only the terminal (stderr)
+    path = tmp_path / "busy.toml"
+    path.write_text(EXAMPLE_SPEC.replace("flow_mol_per_s = 12.0", "flow_mol_per_s = 17.5"), encoding="utf-8")
+    assert main(["column", str(path)]) == 0
+    out = capsys.readouterr().out
+    assert "Warnings:\n  packed_column: the gas load is 81 %" in out
+    assert "not the pressure drop or the flooding point" in out
+    assert "design margin" in out
+    assert "isothermal liquid" in out  # the example gives no heat of absorption
+    hot = tmp_path / "hot.toml"
+    heat = ("heat_of_absorption_J_per_mol = 0.0", "heat_of_absorption_J_per_mol = 3.5e4")
+    hot.write_text(EXAMPLE_SPEC.replace(*heat), encoding="utf-8")
+    assert main(["column", str(hot), "--json"]) == 0
+    notes = json.loads(capsys.readouterr().out)["notes"]
+    assert not any("isothermal" in n for n in notes)
+    assert any("pressure drop" in n for n in notes)

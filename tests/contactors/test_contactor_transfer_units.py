@@ -2,6 +2,7 @@
 
 from __future__ import annotations
 
+import itertools
 import math
 
 import numpy as np
@@ -172,3 +173,71 @@ def test_film_transfer_units_give_the_same_height_as_the_overall(curved):
 def test_film_units_tend_to_overall_when_the_liquid_film_vanishes():
     N = c.film_transfer_units(0.02, 0.001, 0.0, 1.8, 1.2, 1e9)
     assert pytest.approx(c.transfer_units(0.02, 0.001, 0.0, 1.2, 1.5), rel=1e-6) == N
+
+
+# --- very small outlet fractions: the ln(1/y_out) tail ----------------------------------------
+
+TINY_OUTLETS = [1e-3, 1e-30, 1e-60, 1e-100, 1e-200, 1e-300]
+
+
+@pytest.mark.parametrize("y_out", TINY_OUTLETS)
+@pytest.mark.parametrize("x_in", [0.0, 1e-305], ids=["clean-liquid", "trace-in-liquid"])
+def test_numerical_units_follow_the_analytic_form_down_to_1e_300(y_out, x_in):
+    # the Colburn form has the tail in closed form; the quadrature must reach it to 1e-6
+    analytic = colburn(0.02, y_out, x_in, 1.2, 1.5)
+    assert c.numerical_transfer_units(0.02, y_out, x_in, 1.8, 1.2) == pytest.approx(analytic, rel=1e-6)
+    curve = c.numerical_transfer_units(0.02, y_out, x_in, 1.8, lambda x: 1.2 * x)
+    assert curve == pytest.approx(analytic, rel=1e-6)
+
+
+@pytest.mark.parametrize("y_out", [1e-60, 1e-300])
+def test_film_units_reach_the_tail_too(y_out):
+    N_OG = colburn(0.02, y_out, 0.0, 1.2, 1.5)
+    assert c.film_transfer_units(0.02, y_out, 0.0, 1.8, 1.2, 1e9) == pytest.approx(N_OG, rel=1e-6)
+    G, L, m, kya, kxa = 20.0, 36.0, 1.2, 50.0, 2000.0
+    HG, HL, A = G / kya, L / kxa, L / (m * G)
+    Z = N_OG * (HG + HL / A)  # Z = N_G H_G = N_L H_L = N_OG H_OG (Treybal 3rd ed., Ch. 8)
+    for eq in (m, lambda x: m * x):
+        assert c.film_transfer_units(0.02, y_out, 0.0, L / G, eq, kxa / kya) * HG == pytest.approx(
+            Z, rel=1e-6
+        )
+        NL = c.film_transfer_units(0.02, y_out, 0.0, L / G, eq, kxa / kya, phase="liquid")
+        assert pytest.approx(Z, rel=1e-6) == NL * HL
+
+
+def test_concentrated_units_reach_the_tail_decade_by_decade():
+    # independent: the textbook integrand in y itself, one quadrature per decade of y
+    y1, y2, m, LG = 0.02, 1e-300, 1.2, 1.8
+
+    def dn(y):
+        X = (y / (1 - y) - y2 / (1 - y2)) / LG
+        ys = m * X / (1 + X)
+        one_minus = 1 - y
+        lm = (y - ys) / math.log1p((y - ys) / one_minus) if y > 1e-8 else one_minus  # log mean
+        return lm / (one_minus * (y - ys))
+
+    edges = np.geomspace(y2, y1, 303)
+    expected = sum(quad(dn, a, b, epsrel=1e-12)[0] for a, b in itertools.pairwise(edges))
+    got = c.numerical_transfer_units(y1, y2, 0.0, LG, m, concentrated=True)
+    assert got == pytest.approx(expected, rel=1e-6)
+
+
+@pytest.mark.parametrize("y_out", [1e-20, 1e-60, 1e-300])
+def test_integrator_sizes_and_rates_down_to_1e_300(y_out):
+    G, L, Kya, m = 20.0, 36.0, 40.0, 1.2
+    p = c.column_profile(0.02, 0.0, G, L, Kya, m, y_out=y_out)
+    assert pytest.approx(colburn(0.02, y_out, 0.0, m, L / (m * G)), rel=1e-6) == p.N_OG
+    if y_out > 1e-300:  # rating at the exact 1e-300 height stands on the refusal limit below
+        q = c.column_profile(0.02, 0.0, G, L, Kya, m, height=p.height)
+        assert q.y_out == pytest.approx(y_out, rel=1e-6)
+
+
+def test_outlets_below_the_normal_doubles_are_refused_by_name():
+    with pytest.raises(InputValueError, match="y_out=1e-310"):
+        c.numerical_transfer_units(0.02, 1e-310, 0.0, 1.8, 1.2)
+    with pytest.raises(InputValueError, match="y_out=1e-310"):
+        c.film_transfer_units(0.02, 1e-310, 0.0, 1.8, 1.2, 40.0)
+    with pytest.raises(InputValueError, match="y_out=1e-310"):
+        c.column_profile(0.02, 0.0, 20.0, 36.0, 40.0, 1.2, y_out=1e-310)
+    with pytest.raises(InputValueError, match=r"height=.*far taller"):
+        c.column_profile(0.02, 0.0, 20.0, 36.0, 40.0, 1.2, height=2500.0)
