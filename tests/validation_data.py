@@ -15,7 +15,18 @@ Rows left out on purpose:
   solutes in ethyl acetate (Benitez Table A.2): the liquid property models of chloroform and
   ethyl acetate do not load yet, so these rows cannot be computed;
 * methanol-air at 298 K (quoted beside a Fuller example in Coulson & Richardson Vol. 6): the
-  number equals a Fuller estimate, not a measurement.
+  number equals a Fuller estimate, not a measurement;
+* water in n-hexadecane: Su et al. (J. Chem. Phys. 132, 044506, 2010) give 1.15e-5 cm^2/s, about
+  a quarter of the 4.2e-5 cm^2/s of Schatzberg (J. Polym. Sci. C 10, 87, 1965; from memory).  Two
+  sources a factor of about 3.6 apart cannot test a method (Hayduk-Minhas's n-paraffin form gives
+  5.4e-5 cm^2/s, Wilke-Chang 0.8e-5, Tyn-Calus 0.66e-5);
+* solutes in squalane, pristane and isocetane (Kowert, J. Phys. Chem. B 2011 and 2018): the liquid
+  viscosity models of these branched alkanes give 0.5-0.7 mPa s at 298 K, against about 30 mPa s
+  measured for squalane at 296 K (Kowert 2011, abstract), so the rows would test the property
+  model, not the diffusivity methods.
+
+The viscous-solvent set is small: one row is all that could be read from a source at hand
+(water in 1-octanol, 7.3 mPa s).  Glycols, glycerol and heavier alcohols are still missing.
 """
 
 from __future__ import annotations
@@ -170,6 +181,7 @@ GAS_PAIRS: list[tuple[str, str, float, float, float, str, str]] = [
     ("n-butane", "neopentane", 437.8, ATM, 0.0839e-4, "hydrocarbon pairs", BSL),
     ("isobutane", "neopentane", 298.1, ATM, 0.0362e-4, "hydrocarbon pairs", BSL),
     ("isobutane", "neopentane", 378.2, ATM, 0.0580e-4, "hydrocarbon pairs", BSL),
+    ("isobutane", "neopentane", 437.7, ATM, 0.0786e-4, "hydrocarbon pairs", BSL),
 ]
 
 #: Cussler, Diffusion: Mass Transfer in Fluid Systems, 3rd ed., Table 5.2-1 (dilute in water).
@@ -179,6 +191,17 @@ CUSSLER = "Cussler 3rd ed. Table 5.2-1 (from memory)"
 BENITEZ = "Benitez, Appendix Table A.2"
 #: Geankoplis, Transport Processes and Separation Process Principles, 4th ed., Table 6.3-1.
 GEANKOPLIS = "Geankoplis 4th ed. Table 6.3-1, dilute (from memory)"
+#: Benitez Table A.2, water as solvent, read from the same reproduction: the two rows below agree
+#: with Cussler 3rd ed. Table 5.2-1 (from memory), which the file cited for them before.
+BENITEZ_WATER = "Benitez, Appendix Table A.2 (water; also Cussler Table 5.2-1, from memory)"
+#: Winkelmann, Diffusion in Gases, Liquids and Electrolytes, Landolt-Boernstein New Series IV/15B2
+#: (Springer 2018), one chapter per pair, read from the chapter pages; each row names the
+#: measurement the chapter lists (the lowest solute concentration given).
+LB = "Winkelmann, Landolt-Boernstein IV/15B2 (2018)"
+#: Su, Duncan, Momaya, Jutila & Needham, J. Chem. Phys. 132, 044506 (2010), abstract: water in
+#: n-alcohols by single-microdroplet dissolution.  The abstract gives no temperature; the
+#: measurements were made at room temperature, entered here as 298.15 K (from memory).
+SU = "Su et al., J. Chem. Phys. 132, 044506 (2010), abstract; T 298 K (from memory)"
 
 LIQUID_SYSTEMS: list[tuple[str, str, float, float, str, str]] = [
     # --- organic solutes in water ---
@@ -202,15 +225,15 @@ LIQUID_SYSTEMS: list[tuple[str, str, float, float, str, str]] = [
     ("aniline", "water", 293.15, 0.92e-9, "organic solutes in water", CUSSLER),
     # --- dissolved gases in water ---
     ("oxygen", "water", 298.15, 2.10e-9, "gases in water", CUSSLER),
-    ("carbon dioxide", "water", 298.15, 1.92e-9, "gases in water", CUSSLER),
+    ("carbon dioxide", "water", 298.0, 1.92e-9, "gases in water", BENITEZ_WATER),
     ("nitrogen", "water", 298.15, 1.88e-9, "gases in water", CUSSLER),
-    ("methane", "water", 298.15, 1.49e-9, "gases in water", CUSSLER),
+    ("methane", "water", 298.0, 1.49e-9, "gases in water", BENITEZ_WATER),
     ("ethane", "water", 298.15, 1.20e-9, "gases in water", CUSSLER),
     ("propane", "water", 298.15, 0.97e-9, "gases in water", CUSSLER),
     ("ammonia", "water", 298.15, 1.64e-9, "gases in water", CUSSLER),
     ("hydrogen", "water", 298.15, 4.50e-9, "gases in water", CUSSLER),
-    # --- solutes in organic solvents ---
     ("chlorine", "water", 298.0, 1.25e-9, "gases in water", BENITEZ),
+    # --- solutes in organic solvents ---
     # acetic acid and benzoic acid in benzene: the same values in Geankoplis (from memory)
     ("acetic acid", "benzene", 298.0, 2.09e-9, "solutes in organic solvents", BENITEZ),
     ("benzoic acid", "benzene", 298.0, 1.38e-9, "solutes in organic solvents", BENITEZ),
@@ -244,4 +267,30 @@ LIQUID_SYSTEMS: list[tuple[str, str, float, float, str, str]] = [
         "solutes in organic solvents",
         "Poling et al. 5th ed. Table 11-5 (from memory)",
     ),
+    (
+        "benzene",
+        "n-dodecane",
+        298.15,
+        1.550e-9,
+        "solutes in organic solvents",
+        f"{LB}: Albright & Aoyagi, J. Chem. Phys. 64, 81 (1976), x = 0.0229",
+    ),
+    (
+        "biphenyl",
+        "benzene",
+        298.15,
+        1.554e-9,
+        "solutes in organic solvents",
+        f"{LB}: Mills, J. Phys. Chem. 67, 600 (1963), tracer at 0.00013 mol/L",
+    ),
+    (
+        "n-hexane",
+        "benzene",
+        295.35,
+        2.13e-9,
+        "solutes in organic solvents",
+        f"{LB}: Varoqui, Daune & Freund, J. Chim. Phys. 58, 394 (1961), x = 0.0045",
+    ),
+    # --- solutes in viscous solvents (here above 2.5 mPa s) ---
+    ("water", "1-octanol", 298.15, 0.364e-9, "viscous solvents", SU),
 ]
