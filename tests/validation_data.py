@@ -11,9 +11,6 @@ Rows left out on purpose:
 
 * naphthalene-air (Incropera & DeWitt Table A.8, 300 K): published values differ by about 35 %
   between sources, which cannot test a 5 % method;
-* acetone, benzene, ethanol, diethyl ether, ethyl acetate and MEK in chloroform, and six
-  solutes in ethyl acetate (Benitez Table A.2): the liquid property models of chloroform and
-  ethyl acetate do not load yet, so these rows cannot be computed;
 * methanol-air at 298 K (quoted beside a Fuller example in Coulson & Richardson Vol. 6): the
   number equals a Fuller estimate, not a measurement;
 * ammonia-air at 298 K, 0.28 cm^2/s (Incropera Table A.8, from memory): Welty's 0.198 cm^2/s at
@@ -296,6 +293,19 @@ LIQUID_SYSTEMS: list[tuple[str, str, float, float, str, str]] = [
         "solutes in organic solvents",
         f"{LB}: Varoqui, Daune & Freund, J. Chim. Phys. 58, 394 (1961), x = 0.0045",
     ),
+    # chloroform and ethyl acetate as solvents (Benitez Table A.2, read as above)
+    ("acetone", "chloroform", 298.0, 2.35e-9, "solutes in organic solvents", BENITEZ),
+    ("benzene", "chloroform", 288.0, 2.51e-9, "solutes in organic solvents", BENITEZ),
+    ("ethanol", "chloroform", 288.0, 2.20e-9, "solutes in organic solvents", BENITEZ),
+    ("diethyl ether", "chloroform", 298.0, 2.13e-9, "solutes in organic solvents", BENITEZ),
+    ("ethyl acetate", "chloroform", 298.0, 2.02e-9, "solutes in organic solvents", BENITEZ),
+    ("methyl ethyl ketone", "chloroform", 298.0, 2.13e-9, "solutes in organic solvents", BENITEZ),
+    ("acetic acid", "ethyl acetate", 293.0, 2.18e-9, "solutes in organic solvents", BENITEZ),
+    ("acetone", "ethyl acetate", 293.0, 3.18e-9, "solutes in organic solvents", BENITEZ),
+    ("ethyl benzoate", "ethyl acetate", 293.0, 1.85e-9, "solutes in organic solvents", BENITEZ),
+    ("methyl ethyl ketone", "ethyl acetate", 303.0, 2.93e-9, "solutes in organic solvents", BENITEZ),
+    ("nitrobenzene", "ethyl acetate", 293.0, 2.25e-9, "solutes in organic solvents", BENITEZ),
+    ("water", "ethyl acetate", 298.0, 3.20e-9, "solutes in organic solvents", BENITEZ),
     # --- solutes in viscous solvents (here above 2.5 mPa s) ---
     ("water", "1-octanol", 298.15, 0.364e-9, "viscous solvents", SU),
 ]
