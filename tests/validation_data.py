@@ -85,7 +85,7 @@ GAS_PAIRS: list[tuple[str, str, float, float, float, str, str]] = [
     ("carbon dioxide", "oxygen", 273.15, ATM, 0.139e-4, "permanent gases", PERRY),
     # between BSL's CO2-N2 values at 288.2 K (0.158) and 298.2 K (0.165) below
     ("carbon dioxide", "nitrogen", 293.0, ATM, 0.16e-4, "permanent gases", INCROPERA),
-    # the same pair as the 273 K row above, at 294 K and 2 atm: consistent with it by T^1.75/P
+    # H2-N2 again, at 294 K and 2 atm: consistent with BSL's 273.2 K row below by T^1.75/P
     (
         "hydrogen",
         "nitrogen",
