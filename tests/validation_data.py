@@ -53,6 +53,12 @@ BSL = "Bird, Stewart & Lightfoot 2nd ed. Table 17.1-1 (1 atm)"
 #: Table A.1, which lists D*P in m^2 Pa/s (divided here by 101325 Pa for D at 1 atm).  Read from a
 #: reproduction of the appendix (scribd.com document 379518623).
 WELTY = "Welty, Wicks & Wilson 3rd ed., via Benitez Table A.1 (D*P)"
+#: Welty, Wicks, Wilson & Rorrer, Fundamentals of Momentum, Heat and Mass Transfer, Appendix J,
+#: Table J.1 "Binary mass diffusivities in gases" (after Reid & Sherwood 1966), D*P in
+#: cm^2 atm/s (divided here by 1 atm).  Read from a reproduction of its pages 691-692
+#: (scribd.com document 357993864), which does not show the edition; its rows shared with
+#: Benitez Table A.1 (WELTY above) carry the same numbers.
+WELTY_J = "Welty et al., Appendix J Table J.1 (D*P, cm^2 atm/s)"
 #: Poling, Prausnitz & O'Connell 5th ed. Table 11-2 lists D*P in bar cm^2/s: rows at P = 1 bar.
 POLING = "Poling et al. 5th ed. Table 11-2, D*P at 1 bar (from memory)"
 
@@ -184,6 +190,32 @@ GAS_PAIRS: list[tuple[str, str, float, float, float, str, str]] = [
     ("isobutane", "neopentane", 298.1, ATM, 0.0362e-4, "hydrocarbon pairs", BSL),
     ("isobutane", "neopentane", 378.2, ATM, 0.0580e-4, "hydrocarbon pairs", BSL),
     ("isobutane", "neopentane", 437.7, ATM, 0.0786e-4, "hydrocarbon pairs", BSL),
+    # --- Welty et al. Table J.1: pairs not read from another table above ---
+    ("carbon dioxide", "air", 273.0, ATM, 0.136e-4, "permanent gases", WELTY_J),
+    ("carbon dioxide", "methane", 273.0, ATM, 0.153e-4, "permanent gases", WELTY_J),
+    ("carbon dioxide", "nitrous oxide", 298.0, ATM, 0.117e-4, "permanent gases", WELTY_J),
+    ("carbon monoxide", "ethylene", 273.0, ATM, 0.151e-4, "permanent gases", WELTY_J),
+    ("carbon monoxide", "hydrogen", 273.0, ATM, 0.651e-4, "permanent gases", WELTY_J),
+    ("carbon monoxide", "nitrogen", 288.0, ATM, 0.192e-4, "permanent gases", WELTY_J),
+    ("carbon monoxide", "oxygen", 273.0, ATM, 0.185e-4, "permanent gases", WELTY_J),
+    ("argon", "neon", 293.0, ATM, 0.329e-4, "permanent gases", WELTY_J),
+    ("helium", "argon", 273.0, ATM, 0.641e-4, "permanent gases", WELTY_J),
+    ("helium", "neon", 293.0, ATM, 1.23e-4, "permanent gases", WELTY_J),
+    ("helium", "hydrogen", 293.0, ATM, 1.64e-4, "permanent gases", WELTY_J),
+    ("hydrogen", "argon", 293.0, ATM, 0.770e-4, "permanent gases", WELTY_J),
+    ("nitrogen", "hydrogen", 288.0, ATM, 0.743e-4, "permanent gases", WELTY_J),
+    ("oxygen", "ethylene", 293.0, ATM, 0.182e-4, "permanent gases", WELTY_J),
+    ("water", "helium", 298.0, ATM, 0.908e-4, "polar vapours", WELTY_J),
+    ("water", "hydrogen", 293.0, ATM, 0.850e-4, "polar vapours", WELTY_J),
+    ("ammonia", "hydrogen", 293.0, ATM, 0.849e-4, "polar vapours", WELTY_J),
+    ("ammonia", "ethylene", 293.0, ATM, 0.177e-4, "polar vapours", WELTY_J),
+    ("chlorine", "air", 273.0, ATM, 0.124e-4, "polar vapours", WELTY_J),
+    ("bromine", "air", 293.0, ATM, 0.091e-4, "polar vapours", WELTY_J),
+    ("aniline", "air", 298.0, ATM, 0.0726e-4, "organic vapours", WELTY_J),
+    ("benzene", "helium", 298.0, ATM, 0.384e-4, "organic vapours", WELTY_J),
+    ("ethanol", "helium", 298.0, ATM, 0.494e-4, "organic vapours", WELTY_J),
+    ("methanol", "carbon dioxide", 298.6, ATM, 0.105e-4, "organic vapours", WELTY_J),
+    ("diethyl ether", "carbon dioxide", 273.0, ATM, 0.0541e-4, "organic vapours", WELTY_J),
 ]
 
 #: Cussler, Diffusion: Mass Transfer in Fluid Systems, 3rd ed., Table 5.2-1 (dilute in water).
