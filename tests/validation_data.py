@@ -11,11 +11,21 @@ Rows left out on purpose:
 
 * naphthalene-air (Incropera & DeWitt Table A.8, 300 K): published values differ by about 35 %
   between sources, which cannot test a 5 % method;
-* acetone, benzene, ethanol, diethyl ether, ethyl acetate and MEK in chloroform, and six
-  solutes in ethyl acetate (Benitez Table A.2): the liquid property models of chloroform and
-  ethyl acetate do not load yet, so these rows cannot be computed;
 * methanol-air at 298 K (quoted beside a Fuller example in Coulson & Richardson Vol. 6): the
-  number equals a Fuller estimate, not a measurement.
+  number equals a Fuller estimate, not a measurement;
+* ammonia-air at 298 K, 0.28 cm^2/s (Incropera Table A.8, from memory): Welty's 0.198 cm^2/s at
+  273 K, read, scales to about 0.23 at 298 K; the Welty row is kept;
+* water in n-hexadecane: Su et al. (J. Chem. Phys. 132, 044506, 2010) give 1.15e-5 cm^2/s, about
+  a quarter of the 4.2e-5 cm^2/s of Schatzberg (J. Polym. Sci. C 10, 87, 1965; from memory).  Two
+  sources a factor of about 3.6 apart cannot test a method (Hayduk-Minhas's n-paraffin form gives
+  5.4e-5 cm^2/s, Wilke-Chang 0.8e-5, Tyn-Calus 0.66e-5);
+* solutes in squalane, pristane and isocetane (Kowert, J. Phys. Chem. B 2011 and 2018): the liquid
+  viscosity models of these branched alkanes give 0.5-0.7 mPa s at 298 K, against about 30 mPa s
+  measured for squalane at 296 K (Kowert 2011, abstract), so the rows would test the property
+  model, not the diffusivity methods.
+
+The viscous-solvent set is small: one row is all that could be read from a source at hand
+(water in 1-octanol, 7.3 mPa s).  Glycols, glycerol and heavier alcohols are still missing.
 """
 
 from __future__ import annotations
@@ -43,6 +53,12 @@ BSL = "Bird, Stewart & Lightfoot 2nd ed. Table 17.1-1 (1 atm)"
 #: Table A.1, which lists D*P in m^2 Pa/s (divided here by 101325 Pa for D at 1 atm).  Read from a
 #: reproduction of the appendix (scribd.com document 379518623).
 WELTY = "Welty, Wicks & Wilson 3rd ed., via Benitez Table A.1 (D*P)"
+#: Welty, Wicks, Wilson & Rorrer, Fundamentals of Momentum, Heat and Mass Transfer, Appendix J,
+#: Table J.1 "Binary mass diffusivities in gases" (after Reid & Sherwood 1966), D*P in
+#: cm^2 atm/s (divided here by 1 atm).  Read from a reproduction of its pages 691-692
+#: (scribd.com document 357993864), which does not show the edition; its rows shared with
+#: Benitez Table A.1 (WELTY above) carry the same numbers.
+WELTY_J = "Welty et al., Appendix J Table J.1 (D*P, cm^2 atm/s)"
 #: Poling, Prausnitz & O'Connell 5th ed. Table 11-2 lists D*P in bar cm^2/s: rows at P = 1 bar.
 POLING = "Poling et al. 5th ed. Table 11-2, D*P at 1 bar (from memory)"
 
@@ -65,14 +81,17 @@ GAS_PAIRS: list[tuple[str, str, float, float, float, str, str]] = [
     ("methane", "helium", 293.15, ATM, 0.650e-4, "permanent gases", CRC),
     ("methane", "nitrogen", 293.15, ATM, 0.208e-4, "permanent gases", CRC),
     ("methane", "oxygen", 293.15, ATM, 0.220e-4, "permanent gases", CRC),
-    # Incropera Table A.8 lists these at 273 K or 293 K, not 298 K
-    ("hydrogen", "oxygen", 273.0, ATM, 0.70e-4, "permanent gases", INCROPERA),
-    ("hydrogen", "nitrogen", 273.0, ATM, 0.68e-4, "permanent gases", INCROPERA),
-    ("hydrogen", "carbon dioxide", 273.0, ATM, 0.55e-4, "permanent gases", INCROPERA),
-    ("carbon dioxide", "oxygen", 273.0, ATM, 0.14e-4, "permanent gases", INCROPERA),
-    ("oxygen", "nitrogen", 273.0, ATM, 0.18e-4, "permanent gases", INCROPERA),
+    # Incropera Table A.8 (at 273 K or 293 K, not 298 K): its H2-O2, H2-N2, O2-N2, water-air and
+    # benzene-air rows are left out as duplicates of values read from Welty and BSL below (the
+    # first four agree with them within 1.5 %; benzene-air, 0.088 cm^2/s, is 9 % below Welty's);
+    # H2-CO2 and CO2-O2 are taken from the sources read instead (Welty: 0.550; Perry: 0.139).
+    ("carbon dioxide", "hydrogen", 273.0, ATM, 5.572 / ATM, "permanent gases", WELTY),
+    # Perry's CO2 row reads .138 .550 .139 0.096 0.153 with blank columns: .139 is taken as the O2
+    # column since 0.096 (N2O) and 0.153 (CH4) match BSL and Welty, and Incropera gives 0.14
+    ("carbon dioxide", "oxygen", 273.15, ATM, 0.139e-4, "permanent gases", PERRY),
+    # between BSL's CO2-N2 values at 288.2 K (0.158) and 298.2 K (0.165) below
     ("carbon dioxide", "nitrogen", 293.0, ATM, 0.16e-4, "permanent gases", INCROPERA),
-    # the same pair as the 273 K row above, at 294 K and 2 atm: consistent with it by T^1.75/P
+    # H2-N2 again, at 294 K and 2 atm: consistent with BSL's 273.2 K row below by T^1.75/P
     (
         "hydrogen",
         "nitrogen",
@@ -96,8 +115,9 @@ GAS_PAIRS: list[tuple[str, str, float, float, float, str, str]] = [
     # --- water and polar inorganic vapours ---
     ("water", "air", 293.15, ATM, 0.242e-4, "polar vapours", CRC),
     ("water", "air", 373.15, ATM, 0.399e-4, "polar vapours", CRC),
-    ("water", "air", 298.0, ATM, 0.26e-4, "polar vapours", INCROPERA),
-    ("ammonia", "air", 298.0, ATM, 0.28e-4, "polar vapours", INCROPERA),
+    # Incropera's ammonia-air, 0.28 cm^2/s at 298 K (from memory), is left out: Welty's 0.198
+    # at 273 K (read, below) scales to about 0.23 at 298 K.
+    ("ammonia", "air", 273.0, ATM, 2.006 / ATM, "polar vapours", WELTY),
     ("water", "air", 313.0, BAR, 0.292e-4, "polar vapours", POLING),
     ("water", "nitrogen", 308.0, ATM, 0.259e-4, "polar vapours", BSL),
     ("water", "oxygen", 352.0, ATM, 0.357e-4, "polar vapours", BSL),
@@ -107,7 +127,6 @@ GAS_PAIRS: list[tuple[str, str, float, float, float, str, str]] = [
     ("acetic acid", "air", 273.15, ATM, 0.1064e-4, "organic vapours", PERRY),
     ("acetone", "air", 273.15, ATM, 0.109e-4, "organic vapours", PERRY),
     ("benzene", "air", 273.15, ATM, 0.077e-4, "organic vapours", PERRY),
-    ("benzene", "air", 298.0, ATM, 0.88e-5, "organic vapours", INCROPERA),
     ("1-butanol", "air", 273.15, ATM, 0.0703e-4, "organic vapours", PERRY),
     ("1-butanol", "air", 303.15, ATM, 0.088e-4, "organic vapours", PERRY),
     ("2-methyl-1-propanol", "air", 273.15, ATM, 0.0727e-4, "organic vapours", PERRY),
@@ -170,6 +189,33 @@ GAS_PAIRS: list[tuple[str, str, float, float, float, str, str]] = [
     ("n-butane", "neopentane", 437.8, ATM, 0.0839e-4, "hydrocarbon pairs", BSL),
     ("isobutane", "neopentane", 298.1, ATM, 0.0362e-4, "hydrocarbon pairs", BSL),
     ("isobutane", "neopentane", 378.2, ATM, 0.0580e-4, "hydrocarbon pairs", BSL),
+    ("isobutane", "neopentane", 437.7, ATM, 0.0786e-4, "hydrocarbon pairs", BSL),
+    # --- Welty et al. Table J.1: pairs not read from another table above ---
+    ("carbon dioxide", "air", 273.0, ATM, 0.136e-4, "permanent gases", WELTY_J),
+    ("carbon dioxide", "methane", 273.0, ATM, 0.153e-4, "permanent gases", WELTY_J),
+    ("carbon dioxide", "nitrous oxide", 298.0, ATM, 0.117e-4, "permanent gases", WELTY_J),
+    ("carbon monoxide", "ethylene", 273.0, ATM, 0.151e-4, "permanent gases", WELTY_J),
+    ("carbon monoxide", "hydrogen", 273.0, ATM, 0.651e-4, "permanent gases", WELTY_J),
+    ("carbon monoxide", "nitrogen", 288.0, ATM, 0.192e-4, "permanent gases", WELTY_J),
+    ("carbon monoxide", "oxygen", 273.0, ATM, 0.185e-4, "permanent gases", WELTY_J),
+    ("argon", "neon", 293.0, ATM, 0.329e-4, "permanent gases", WELTY_J),
+    ("helium", "argon", 273.0, ATM, 0.641e-4, "permanent gases", WELTY_J),
+    ("helium", "neon", 293.0, ATM, 1.23e-4, "permanent gases", WELTY_J),
+    ("helium", "hydrogen", 293.0, ATM, 1.64e-4, "permanent gases", WELTY_J),
+    ("hydrogen", "argon", 293.0, ATM, 0.770e-4, "permanent gases", WELTY_J),
+    ("nitrogen", "hydrogen", 288.0, ATM, 0.743e-4, "permanent gases", WELTY_J),
+    ("oxygen", "ethylene", 293.0, ATM, 0.182e-4, "permanent gases", WELTY_J),
+    ("water", "helium", 298.0, ATM, 0.908e-4, "polar vapours", WELTY_J),
+    ("water", "hydrogen", 293.0, ATM, 0.850e-4, "polar vapours", WELTY_J),
+    ("ammonia", "hydrogen", 293.0, ATM, 0.849e-4, "polar vapours", WELTY_J),
+    ("ammonia", "ethylene", 293.0, ATM, 0.177e-4, "polar vapours", WELTY_J),
+    ("chlorine", "air", 273.0, ATM, 0.124e-4, "polar vapours", WELTY_J),
+    ("bromine", "air", 293.0, ATM, 0.091e-4, "polar vapours", WELTY_J),
+    ("aniline", "air", 298.0, ATM, 0.0726e-4, "organic vapours", WELTY_J),
+    ("benzene", "helium", 298.0, ATM, 0.384e-4, "organic vapours", WELTY_J),
+    ("ethanol", "helium", 298.0, ATM, 0.494e-4, "organic vapours", WELTY_J),
+    ("methanol", "carbon dioxide", 298.6, ATM, 0.105e-4, "organic vapours", WELTY_J),
+    ("diethyl ether", "carbon dioxide", 273.0, ATM, 0.0541e-4, "organic vapours", WELTY_J),
 ]
 
 #: Cussler, Diffusion: Mass Transfer in Fluid Systems, 3rd ed., Table 5.2-1 (dilute in water).
@@ -179,6 +225,17 @@ CUSSLER = "Cussler 3rd ed. Table 5.2-1 (from memory)"
 BENITEZ = "Benitez, Appendix Table A.2"
 #: Geankoplis, Transport Processes and Separation Process Principles, 4th ed., Table 6.3-1.
 GEANKOPLIS = "Geankoplis 4th ed. Table 6.3-1, dilute (from memory)"
+#: Benitez Table A.2, water as solvent, read from the same reproduction: the two rows below agree
+#: with Cussler 3rd ed. Table 5.2-1 (from memory), which the file cited for them before.
+BENITEZ_WATER = "Benitez, Appendix Table A.2 (water; also Cussler Table 5.2-1, from memory)"
+#: Winkelmann, Diffusion in Gases, Liquids and Electrolytes, Landolt-Boernstein New Series IV/15B2
+#: (Springer 2018), one chapter per pair, read from the chapter pages; each row names the
+#: measurement the chapter lists (the lowest solute concentration given).
+LB = "Winkelmann, Landolt-Boernstein IV/15B2 (2018)"
+#: Su, Duncan, Momaya, Jutila & Needham, J. Chem. Phys. 132, 044506 (2010), abstract: water in
+#: n-alcohols by single-microdroplet dissolution.  The abstract gives no temperature; the
+#: measurements were made at room temperature, entered here as 298.15 K (from memory).
+SU = "Su et al., J. Chem. Phys. 132, 044506 (2010), abstract; T 298 K (from memory)"
 
 LIQUID_SYSTEMS: list[tuple[str, str, float, float, str, str]] = [
     # --- organic solutes in water ---
@@ -202,15 +259,15 @@ LIQUID_SYSTEMS: list[tuple[str, str, float, float, str, str]] = [
     ("aniline", "water", 293.15, 0.92e-9, "organic solutes in water", CUSSLER),
     # --- dissolved gases in water ---
     ("oxygen", "water", 298.15, 2.10e-9, "gases in water", CUSSLER),
-    ("carbon dioxide", "water", 298.15, 1.92e-9, "gases in water", CUSSLER),
+    ("carbon dioxide", "water", 298.0, 1.92e-9, "gases in water", BENITEZ_WATER),
     ("nitrogen", "water", 298.15, 1.88e-9, "gases in water", CUSSLER),
-    ("methane", "water", 298.15, 1.49e-9, "gases in water", CUSSLER),
+    ("methane", "water", 298.0, 1.49e-9, "gases in water", BENITEZ_WATER),
     ("ethane", "water", 298.15, 1.20e-9, "gases in water", CUSSLER),
     ("propane", "water", 298.15, 0.97e-9, "gases in water", CUSSLER),
     ("ammonia", "water", 298.15, 1.64e-9, "gases in water", CUSSLER),
     ("hydrogen", "water", 298.15, 4.50e-9, "gases in water", CUSSLER),
-    # --- solutes in organic solvents ---
     ("chlorine", "water", 298.0, 1.25e-9, "gases in water", BENITEZ),
+    # --- solutes in organic solvents ---
     # acetic acid and benzoic acid in benzene: the same values in Geankoplis (from memory)
     ("acetic acid", "benzene", 298.0, 2.09e-9, "solutes in organic solvents", BENITEZ),
     ("benzoic acid", "benzene", 298.0, 1.38e-9, "solutes in organic solvents", BENITEZ),
@@ -244,4 +301,43 @@ LIQUID_SYSTEMS: list[tuple[str, str, float, float, str, str]] = [
         "solutes in organic solvents",
         "Poling et al. 5th ed. Table 11-5 (from memory)",
     ),
+    (
+        "benzene",
+        "n-dodecane",
+        298.15,
+        1.550e-9,
+        "solutes in organic solvents",
+        f"{LB}: Albright & Aoyagi, J. Chem. Phys. 64, 81 (1976), x = 0.0229",
+    ),
+    (
+        "biphenyl",
+        "benzene",
+        298.15,
+        1.554e-9,
+        "solutes in organic solvents",
+        f"{LB}: Mills, J. Phys. Chem. 67, 600 (1963), tracer at 0.00013 mol/L",
+    ),
+    (
+        "n-hexane",
+        "benzene",
+        295.35,
+        2.13e-9,
+        "solutes in organic solvents",
+        f"{LB}: Varoqui, Daune & Freund, J. Chim. Phys. 58, 394 (1961), x = 0.0045",
+    ),
+    # chloroform and ethyl acetate as solvents (Benitez Table A.2, read as above)
+    ("acetone", "chloroform", 298.0, 2.35e-9, "solutes in organic solvents", BENITEZ),
+    ("benzene", "chloroform", 288.0, 2.51e-9, "solutes in organic solvents", BENITEZ),
+    ("ethanol", "chloroform", 288.0, 2.20e-9, "solutes in organic solvents", BENITEZ),
+    ("diethyl ether", "chloroform", 298.0, 2.13e-9, "solutes in organic solvents", BENITEZ),
+    ("ethyl acetate", "chloroform", 298.0, 2.02e-9, "solutes in organic solvents", BENITEZ),
+    ("methyl ethyl ketone", "chloroform", 298.0, 2.13e-9, "solutes in organic solvents", BENITEZ),
+    ("acetic acid", "ethyl acetate", 293.0, 2.18e-9, "solutes in organic solvents", BENITEZ),
+    ("acetone", "ethyl acetate", 293.0, 3.18e-9, "solutes in organic solvents", BENITEZ),
+    ("ethyl benzoate", "ethyl acetate", 293.0, 1.85e-9, "solutes in organic solvents", BENITEZ),
+    ("methyl ethyl ketone", "ethyl acetate", 303.0, 2.93e-9, "solutes in organic solvents", BENITEZ),
+    ("nitrobenzene", "ethyl acetate", 293.0, 2.25e-9, "solutes in organic solvents", BENITEZ),
+    ("water", "ethyl acetate", 298.0, 3.20e-9, "solutes in organic solvents", BENITEZ),
+    # --- solutes in viscous solvents (here above 2.5 mPa s) ---
+    ("water", "1-octanol", 298.15, 0.364e-9, "viscous solvents", SU),
 ]

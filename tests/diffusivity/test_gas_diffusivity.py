@@ -79,19 +79,36 @@ _IDS = [f"{a}-{b}-{T:g}K-{P / 1e5:.2f}bar" for a, b, T, P, *_ in GAS_PAIRS]
 #: Largest deviation any single row may show, per method: about three times the method's
 #: published average error, leaving room for the scatter of measured data (the averages are held
 #: tighter below).  Chapman-Enskog's polar rows lie outside its class and warn; they are held to
-#: a slightly wider limit (nitrobenzene-air is 28 % low).  Fuller's limit is wider for one set:
-#: the light hydrocarbon pairs of Bird, Stewart & Lightfoot Table 17.1-1 (Gotoh et al. 1974) rise
-#: more steeply with T than T^1.75, and Fuller is 35 % high for propane-isobutane at 298 K.
-_ROW_LIMIT = {"fuller": 0.36, "chapman-enskog": 0.30, "wilke-lee": 0.26, "brokaw": 0.25}
+#: a slightly wider limit (nitrobenzene-air is 28 % low).
+_ROW_LIMIT = {"fuller": 0.30, "chapman-enskog": 0.30, "wilke-lee": 0.26, "brokaw": 0.25}
+#: Fuller's 30 % is for polar and associating solutes: Fuller et al. (1969) fitted mostly
+#: non-polar pairs and larger scatter is stated for polar ones (Poling et al. 2001, Section 11-4,
+#: from memory); water-carbon dioxide is 27 % high, methanol- and ethanol-carbon dioxide 25 %
+#: and 23 % (Welty, Wicks & Wilson).  Its non-polar rows stay within 20 %.
+#:
+#: Wider limits for one method on one pair class, each with its reason; every such row still
+#: counts in the averages below.
+#:
+#: * Fuller, light hydrocarbon pairs: the branched C3-C5 pairs of Bird, Stewart & Lightfoot Table
+#:   17.1-1 (Gotoh et al. 1974) are up to 35 % high at 298 K (propane-isobutane 35 %,
+#:   isobutane-neopentane 23 %, propane-neopentane 22 %) and 14-17 % high at 378 K: their
+#:   measured values rise more steeply with T than Fuller's T^1.75.  The largest,
+#:   propane-isobutane at 298 K (0.0439 cm^2/s), was checked against the table (a reproduction of
+#:   page 517): it is transcribed correctly, though it rises more steeply to 378 K (as T^2.6) than
+#:   the other pairs of the same source (T^1.9-2.1).
+_CLASS_ROW_LIMIT = {("fuller", "hydrocarbon pairs"): 0.36}
 #: Average absolute deviation over the rows a method applies to.
 _AAD_LIMIT = {"fuller": 0.07, "chapman-enskog": 0.08, "wilke-lee": 0.08, "brokaw": 0.07}
 #: Per-set averages where a method is at home (Poling et al. 2001 Table 11-2 states about 5 % for
-#: Fuller and 7-8 % for Chapman-Enskog on such pairs, from memory).
+#: Fuller and 7-8 % for Chapman-Enskog on such pairs, from memory).  Fuller's organic-vapour
+#: limit was 8 % on 38 rows; the five vapours in helium and carbon dioxide of Welty et al. Table
+#: J.1 (14-25 % off, where Chapman-Enskog is within 7 %) take the average to 8.5 % on 42 rows,
+#: so the limit is now 9 %: the rows are kept rather than left out to hold the old limit.
 _SET_AAD_LIMIT = {
     ("fuller", "permanent gases"): 0.04,
     ("chapman-enskog", "permanent gases"): 0.06,
     ("brokaw", "polar vapours"): 0.12,
-    ("fuller", "organic vapours"): 0.08,
+    ("fuller", "organic vapours"): 0.09,
 }
 
 
@@ -112,7 +129,8 @@ def _estimate(method, solute, medium, T, P):
 def test_against_measured_pairs(method, solute, medium, T, P, measured, group, source):
     D = _estimate(method, solute, medium, T, P)
     if D is not None:
-        assert pytest.approx(measured, rel=_ROW_LIMIT[method]) == D, source
+        limit = _CLASS_ROW_LIMIT.get((method, group), _ROW_LIMIT[method])
+        assert pytest.approx(measured, rel=limit) == D, source
 
 
 @pytest.mark.parametrize("method", list(GAS_METHODS))

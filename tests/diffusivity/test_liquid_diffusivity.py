@@ -51,6 +51,12 @@ _IDS = [f"{a}-in-{b}-{T:g}K" for a, b, T, *_ in LIQUID_SYSTEMS]
 #: One-row limits are about three times each method's published average error (dissolved
 #: hydrogen, far below every correlation's fitting range, is the widest row).
 _ROW_LIMIT = {"wilke-chang": 0.55, "hayduk-minhas": 0.55, "tyn-calus": 0.55}
+#: Wilke-Chang with an organic acid as solute in an organic solvent: the equation carries no
+#: rule for the acid's association (Tyn-Calus treats it as a dimer), and it is 27-33 % high for
+#: acetic and benzoic acid in benzene and acetone and 69 % high for acetic acid in ethyl acetate
+#: (Benitez Table A.2).  The rows stay in the averages.
+_ACIDS = {"acetic acid", "benzoic acid"}
+_ACID_ROW_LIMIT = {"wilke-chang": 0.75}
 _AAD_LIMIT = {"wilke-chang": 0.22, "hayduk-minhas": 0.16, "tyn-calus": 0.14}
 _METHODS = list(_ROW_LIMIT)
 
@@ -59,7 +65,10 @@ _METHODS = list(_ROW_LIMIT)
 @pytest.mark.parametrize(("solute", "solvent", "T", "measured", "group", "source"), LIQUID_SYSTEMS, ids=_IDS)
 def test_against_measured_systems(method, solute, solvent, T, measured, group, source):
     D = mt.liquid_diffusivity(solute, solvent, T, method=method)
-    assert pytest.approx(measured, rel=_ROW_LIMIT[method]) == D, source
+    limit = _ROW_LIMIT[method]
+    if solute in _ACIDS and solvent != "water":
+        limit = _ACID_ROW_LIMIT.get(method, limit)
+    assert pytest.approx(measured, rel=limit) == D, source
 
 
 @pytest.mark.parametrize("method", _METHODS)
@@ -67,6 +76,42 @@ def test_average_absolute_deviation(method):
     dev = [abs(mt.liquid_diffusivity(a, b, T, method=method) / D - 1) for a, b, T, D, *_ in LIQUID_SYSTEMS]
     assert len(dev) >= 25
     assert np.mean(dev) < _AAD_LIMIT[method]
+
+
+#: Per-set averages where the correlations are meant to work (organic solutes, no dissolved
+#: gases): Poling et al. (2001) Section 11-9 report average errors of about 10-20 % for these
+#: correlations on such systems (from memory).  Dissolved gases and the one-row viscous-solvent set
+#: have no set limit: the row limits above hold them.  Wilke-Chang is at the top of that range
+#: in organic solvents (20 %: 27-48 % high on five of the six chloroform rows of Benitez Table A.2).
+_SET_AAD_LIMIT = {
+    ("wilke-chang", "organic solutes in water"): 0.15,
+    ("hayduk-minhas", "organic solutes in water"): 0.12,
+    ("tyn-calus", "organic solutes in water"): 0.10,
+    ("wilke-chang", "solutes in organic solvents"): 0.22,
+    ("hayduk-minhas", "solutes in organic solvents"): 0.15,
+    ("tyn-calus", "solutes in organic solvents"): 0.12,
+}
+
+
+@pytest.mark.parametrize(
+    ("method", "group"), list(_SET_AAD_LIMIT), ids=[f"{m}-{g}" for m, g in _SET_AAD_LIMIT]
+)
+def test_average_absolute_deviation_per_set(method, group):
+    dev = [
+        abs(mt.liquid_diffusivity(a, b, T, method=method) / D - 1)
+        for a, b, T, D, g, _ in LIQUID_SYSTEMS
+        if g == group
+    ]
+    assert len(dev) >= 10
+    assert np.mean(dev) < _SET_AAD_LIMIT[(method, group)]
+
+
+def test_viscous_solvent_set_is_present():
+    # the set the README reports on: a solvent of at least 2.5 mPa s at the row's temperature
+    rows = [(b, T) for _, b, T, _, g, _ in LIQUID_SYSTEMS if g == "viscous solvents"]
+    assert rows
+    for solvent, T in rows:
+        assert mt.liquid_model(solvent).viscosity(T) > 2.5e-3
 
 
 def test_special_cases_are_applied_and_reported():
