@@ -1,7 +1,10 @@
 r"""Carrier-gas and solvent-liquid properties over arrays of temperature.
 
 Each property comes from ``thermo``'s temperature-dependent model for the
-species (the method ``thermo`` ranks first).  The model is resolved once per
+species (the method ``thermo`` ranks first; for a liquid, where that method's
+range stops short of the liquid range, carried on by its next ranked methods,
+joined where both apply and checked for continuity: see :data:`JOIN_RTOL`).
+The model is resolved once per
 species, sampled at Chebyshev points over the range its method covers, and
 replaced by a Chebyshev interpolant whose accuracy against the ``thermo``
 model is verified when it is built (relative error below
@@ -580,7 +583,10 @@ class LiquidModel:
 
     Built by :func:`liquid_model`.  The range of every curve is limited to
     the liquid range (melting point to critical point) as well as to the
-    range of the underlying ``thermo`` method.
+    ranges of the underlying ``thermo`` methods: thermo's chosen method,
+    carried on towards both ends by its next ranked methods where they agree
+    at the join within :data:`JOIN_RTOL` (each curve's ``source`` names every
+    method, its range and its difference at the join).
     """
 
     species: Species
