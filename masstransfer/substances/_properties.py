@@ -412,12 +412,14 @@ def _extended(
     reproduced exactly beyond the fade.  Joins are repeated until both ends
     are reached or no method qualifies; the source names every method, its
     range and its difference at the join.  If the joined curve cannot be
-    interpolated, ``base`` is returned.
+    interpolated, the joins are undone, last first, until it can (at worst
+    ``base`` is returned).
     """
     tol = math.log1p(JOIN_RTOL)
     parts: list[_Part] = [(base.T_min, base.T_max, log_base)]
     notes: list[str] = []
     joins: list[float] = []
+    order: list[bool] = []  # direction of each join, in the order made
     used: set[str] = set()
 
     def composite(T: float) -> float:
@@ -476,6 +478,7 @@ def _extended(
                 return g(T) + s * _fade((T - (e - w)) / w if d else ((e + w) - T) / w)
 
             pct = 100.0 * math.expm1(abs(shift))
+            order.append(downward)
             if downward:
                 parts.insert(0, (lo, edge, part))
                 notes.append(f"below {edge:.2f} K method {name} down to {lo:.2f} K")
@@ -483,21 +486,23 @@ def _extended(
                 parts.append((edge, hi, part))
                 notes.append(f"above {edge:.2f} K method {name} up to {hi:.2f} K")
             notes[-1] += f" (differing by {pct:.1f} % at the join, faded out over {width:.3g} K)"
-    if not notes:
-        return base
-    source = f"{base.source} from {base.T_min:.2f} to {base.T_max:.2f} K; " + "; ".join(notes)
-    try:
-        return _fit(
-            base.quantity,
-            base.unit,
-            source,
-            lambda T: math.exp(composite(T)),
-            parts[0][0],
-            parts[-1][1],
-            joins,
-        )
-    except _ModelFailedError:
-        return base
+    while notes:
+        source = f"{base.source} from {base.T_min:.2f} to {base.T_max:.2f} K; " + "; ".join(notes)
+        try:
+            return _fit(
+                base.quantity,
+                base.unit,
+                source,
+                lambda T: math.exp(composite(T)),
+                parts[0][0],
+                parts[-1][1],
+                joins,
+            )
+        except _ModelFailedError:  # the last method joined spoils the fit: do without it
+            parts.pop(0 if order.pop() else -1)
+            notes.pop()
+            del joins[-2:]
+    return base
 
 
 def _liquid_core(sp: Species) -> tuple[float, float]:

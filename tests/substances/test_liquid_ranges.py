@@ -189,3 +189,53 @@ def test_joined_curve_states_its_methods_and_is_continuous():
     assert abs(math.log(hi / lo)) < 0.003 * slope + 1e-9
     with pytest.raises(mt.errors.OutOfRangeError, match=r"outside .* K, the range of the vapour"):
         lm.vapor_pressure(curve.T_min - 1.0)
+
+
+class _Models:
+    """A stand-in for a thermo property with ranked methods (invented models, for the joining logic)."""
+
+    ranked_methods = ("PREFERRED", "DISAGREES", "LOWER", "UPPER")
+
+    def __init__(self, upper_breaks: bool) -> None:
+        self.method = "PREFERRED"
+        self.all_methods = set(self.ranked_methods)
+        self.T_limits = {
+            "PREFERRED": (300.0, 400.0),
+            "DISAGREES": (150.0, 400.0),  # 30 % above the preferred one: never joined
+            "LOWER": (200.0, 350.0),  # 2 % above it
+            "UPPER": (380.0, 600.0),  # 1 % below it
+        }
+        self.upper_breaks = upper_breaks
+
+    def calculate(self, T: float, method: str) -> float:
+        base = 1e5 * math.exp(10.0 - 3000.0 / T)
+        if method == "UPPER" and self.upper_breaks and 550.0 < T < 590.0:
+            raise ValueError("outside its data")
+        return base * {"PREFERRED": 1.0, "DISAGREES": 1.3, "LOWER": 1.02, "UPPER": 0.99}[method]
+
+
+def test_joins_take_the_first_agreeing_method_and_fade_the_difference():
+    from masstransfer.substances._properties import _thermo_curve
+
+    models = _Models(upper_breaks=False)
+    curve = _thermo_curve(models, "test quantity", "Pa", 200.0, 600.0, (298.15, 298.15), extend=True)
+    assert (curve.T_min, curve.T_max) == (200.0, 600.0)
+    assert "DISAGREES" not in curve.source
+    assert "below 300.00 K method LOWER" in curve.source
+    assert "above 400.00 K method UPPER" in curve.source
+    # the preferred model is untouched over its range, the others beyond the 10 K fade
+    for T, m in ((350.0, "PREFERRED"), (250.0, "LOWER"), (500.0, "UPPER")):
+        assert curve(T) == pytest.approx(models.calculate(T, m), rel=1e-6)
+    # inside the fade the value lies between the two models
+    lo, hi = sorted((models.calculate(295.0, "PREFERRED"), models.calculate(295.0, "LOWER")))
+    assert lo < curve(295.0) < hi
+
+
+def test_a_join_that_spoils_the_fit_is_undone():
+    from masstransfer.substances._properties import _thermo_curve
+
+    models = _Models(upper_breaks=True)  # UPPER fails between 550 and 590 K, inside its range
+    curve = _thermo_curve(models, "test quantity", "Pa", 200.0, 600.0, (298.15, 298.15), extend=True)
+    assert (curve.T_min, curve.T_max) == (200.0, 400.0)
+    assert "UPPER" not in curve.source
+    assert "below 300.00 K method LOWER" in curve.source
