@@ -39,7 +39,7 @@ from .._validation import (
 )
 from ..constants import DEBYE
 from ..errors import EnvelopeWarning, InputValueError, MissingConstantError
-from ..substances._species import Origin, Species, species
+from ..substances._species import Origin, Species, ambiguity_warnings, rewarn_ambiguity, species
 from ._common import normalise_method
 from ._phase import PhaseLimits, check_vapour, medium_state, phase_limits
 from ._records import (
@@ -780,8 +780,8 @@ def _used(sp: Species, name: str, value: float | None = None) -> ConstantUsed:
     v = getattr(sp, name) if value is None else value
     if v is None:
         return ConstantUsed(None, "absent")
-    origin = sp.origins.get(name)
-    src = sp.sources.get(name) or (origin.value if origin is not None else "user")
+    text, origin = sp._source_of(name)
+    src = text or (origin.value if origin is not None else "user")
     return ConstantUsed(float(v), src)
 
 
@@ -798,7 +798,8 @@ def _prepare_fuller(a: Species, b: Species) -> Prepared:
 
 def _fuller_source(sp: Species) -> str:
     if sp.fuller_volume is not None:
-        return sp.sources.get("fuller_volume") or sp.origins["fuller_volume"].value
+        text, origin = sp._source_of("fuller_volume")
+        return text or (origin.value if origin is not None else "user")
     return "Fuller et al. (1969) atomic and ring increments"
 
 
@@ -1045,6 +1046,7 @@ class _Ready:
     T_hi: float
     cautions: tuple[str, ...]
     notes: tuple[str, ...]
+    ambiguous: tuple[str, ...] = ()  # ambiguity warnings, issued again on every cached call
 
 
 _READY: dict[tuple[object, object, object], _Ready] = {}
@@ -1053,6 +1055,8 @@ _READY: dict[tuple[object, object, object], _Ready] = {}
 def _check_record(
     rec: DiffusivityMethod, a: Species, b: Species, explicit: bool
 ) -> tuple[tuple[str, ...], tuple[str, ...]]:
+    if not (rec.requires or rec.excludes or rec.cautions):
+        return (), ()  # no class rules: the classes (and the dipole moments) are not read
     blocked, cautions = rec.class_verdict(classify(a), classify(b))
     if blocked and explicit:
         raise InputValueError(
@@ -1112,6 +1116,7 @@ def _ready(method: object, solute: object, medium: object) -> _Ready:
         T_hi=rec.T_range[1],
         cautions=tuple(f"{rec.name} for {a.name} in {b.name}: {c}" for c in cautions),
         notes=(*notes, *prep.notes),
+        ambiguous=ambiguity_warnings(solute, medium),
     )
     try:
         key = (method, solute, medium)
@@ -1159,9 +1164,12 @@ def binary_in_mixture(
 def ready_gas(solute: str | Species, medium: str | Species, method: str | None) -> _Ready:
     """Return the cached preparation :func:`gas_diffusivity` uses (for the report and the CLI)."""
     try:
-        return _READY[(method, solute, medium)]
+        r = _READY[(method, solute, medium)]
     except (KeyError, TypeError):
         return _ready(method, solute, medium)
+    if r.ambiguous:
+        rewarn_ambiguity(r.ambiguous)
+    return r
 
 
 @overload
@@ -1263,6 +1271,9 @@ def gas_diffusivity(
         r = _READY[(method, solute, medium)]
     except (KeyError, TypeError):
         r = _ready(method, solute, medium)
+    else:
+        if r.ambiguous:
+            rewarn_ambiguity(r.ambiguous)
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
     if not isinstance(Tv, float | np.ndarray) or not isinstance(Pv, float | np.ndarray):

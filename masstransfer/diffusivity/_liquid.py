@@ -27,7 +27,7 @@ from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import AVOGADRO, BOLTZMANN
 from ..errors import EnvelopeWarning, InputValueError
-from ..substances._species import Origin, Species, species
+from ..substances._species import Origin, Species, ambiguity_warnings, rewarn_ambiguity, species
 from ._common import normalise_method
 from ._phase import PhaseLimits, check_liquid, phase_limits
 from ._records import ConstantUsed, DiffusivityMethod, Prepared, SpeciesClass, classify
@@ -805,6 +805,7 @@ class _ReadyLiquid:
     solvent: Species
     cautions: tuple[str, ...]
     notes: tuple[str, ...]
+    ambiguous: tuple[str, ...] = ()  # ambiguity warnings, issued again on every cached call
 
 
 _READY: dict[tuple[object, object, object], _ReadyLiquid] = {}
@@ -814,9 +815,13 @@ def ready_liquid(solute: str | Species, solvent: str | Species, method: str | No
     """Return the cached preparation :func:`liquid_diffusivity` uses (for the report and the CLI)."""
     key = (method, solute, solvent)
     try:
-        return _READY[key]
+        cached = _READY[key]
     except (KeyError, TypeError):
         pass
+    else:
+        if cached.ambiguous:
+            rewarn_ambiguity(cached.ambiguous)
+        return cached
     from ._gas import prepare_pair
 
     a, b = species(solute), species(solvent)
@@ -831,6 +836,7 @@ def ready_liquid(solute: str | Species, solvent: str | Species, method: str | No
         solvent=b,
         cautions=tuple(f"{rec.name} for {a.name} in {b.name}: {c}" for c in cautions),
         notes=(*notes, *prep.notes),
+        ambiguous=ambiguity_warnings(solute, solvent),
     )
     if len(_READY) > 4096:
         _READY.clear()

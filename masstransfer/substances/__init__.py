@@ -10,6 +10,8 @@ from __future__ import annotations
 
 from ._properties import (
     INTERPOLATION_RTOL,
+    JOIN_RTOL,
+    JOIN_WINDOW,
     KINK_RTOL,
     LIQUID_TR_MAX,
     PARACHOR_CGS_PER_SI,
@@ -22,6 +24,8 @@ from ._species import Origin, le_bas_volume
 
 __all__ = [
     "INTERPOLATION_RTOL",
+    "JOIN_RTOL",
+    "JOIN_WINDOW",
     "KINK_RTOL",
     "LIQUID_TR_MAX",
     "PARACHOR_CGS_PER_SI",

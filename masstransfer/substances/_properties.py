@@ -1,7 +1,10 @@
 r"""Carrier-gas and solvent-liquid properties over arrays of temperature.
 
 Each property comes from ``thermo``'s temperature-dependent model for the
-species (the method ``thermo`` ranks first).  The model is resolved once per
+species (the method ``thermo`` ranks first; for a liquid, where that method's
+range stops short of the liquid range, carried on by its next ranked methods,
+joined where both apply and checked for continuity: see :data:`JOIN_RTOL`).
+The model is resolved once per
 species, sampled at Chebyshev points over the range its method covers, and
 replaced by a Chebyshev interpolant whose accuracy against the ``thermo``
 model is verified when it is built (relative error below
@@ -28,7 +31,7 @@ from __future__ import annotations
 import bisect
 import functools
 import math
-from collections.abc import Callable, Mapping
+from collections.abc import Callable, Mapping, Sequence
 from dataclasses import dataclass
 from typing import Any
 
@@ -47,6 +50,8 @@ from ._structure import Molecule
 
 __all__ = [
     "INTERPOLATION_RTOL",
+    "JOIN_RTOL",
+    "JOIN_WINDOW",
     "GasModel",
     "LiquidModel",
     "PropertyCurve",
@@ -223,6 +228,7 @@ def _fit(
     func: Callable[[float], float],
     T_min: float,
     T_max: float,
+    joins: Sequence[float] = (),
 ) -> PropertyCurve:
     """Interpolate ``func`` (positive) in log space, splitting the range where needed.
 
@@ -231,14 +237,17 @@ def _fit(
     range, where :data:`KINK_RTOL` is accepted (the kinks of tabulated and
     spline models).  Where even that fails in the upper half of the range
     (a singular slope at the top), the curve ends below the failing piece.
-    The worst deviation found is kept as ``max_error``.
+    The worst deviation found is kept as ``max_error``.  ``joins`` are
+    temperatures inside the range where ``func`` changes form (the joins of
+    a curve built from several methods); pieces start and end there.
     """
     what = f"the {quantity} model ({source})"
     if not (T_max > T_min):
         raise _ModelFailedError(f"{what} covers no temperature range")
     pieces: list[tuple[float, float, FloatArray]] = []
     worst_all = 0.0
-    todo = [(T_min, T_max, 0)]
+    edges = [T_min, *sorted(t for t in set(joins) if T_min < t < T_max), T_max]
+    todo = [(edges[i], edges[i + 1], 0) for i in range(len(edges) - 2, -1, -1)]
     while todo:
         lo, hi, depth = todo.pop()
         coef, worst = _fit_piece(func, lo, hi, what)
@@ -285,6 +294,7 @@ def _thermo_curve(
     T_low: float,
     T_high: float,
     core: tuple[float, float],
+    extend: bool = False,
 ) -> PropertyCurve:
     """Fit the best of thermo's methods for ``prop`` over [T_low, T_high].
 
@@ -295,6 +305,12 @@ def _thermo_curve(
     it, the method covering most of it is taken.  A method
     that fails to evaluate or to interpolate is skipped for the next.  The
     curve spans the chosen method's range within [T_low, T_high].
+
+    With ``extend`` (liquid curves), thermo's own choice comes first even
+    where it does not cover the core, and a range that stops short of T_low
+    or T_high is carried on by the next of thermo's ranked methods
+    (:func:`_extended`); the first such curve that covers the core is taken,
+    trying the methods in thermo's order and then in the order above.
     """
     methods = _ranked(prop)
     if not methods:
@@ -311,21 +327,182 @@ def _thermo_curve(
             return float(lo <= c_lo <= hi and hi > lo)
         return max(0.0, min(hi, c_hi) - max(lo, c_lo)) / (c_hi - c_lo)
 
-    order = sorted(methods, key=lambda m: -coverage(m))  # a stable sort keeps thermo's order
+    def log_model(m: str) -> Callable[[float], float]:
+        def f(T: float) -> float:
+            return math.log(float(prop.calculate(T, m)))
+
+        return f
+
+    by_core = sorted(methods, key=lambda m: -coverage(m))  # a stable sort keeps thermo's order
+    # joined curves start from thermo's own choice and carry it on with its ranking; only when
+    # no joined curve reaches the core is the method covering the core taken instead
+    order = methods + by_core if extend else by_core
     reasons: list[str] = []
+    fallback: PropertyCurve | None = None
+    tried: set[str] = set()
     for m in order:
+        if m in tried:
+            continue
+        tried.add(m)
         lo, hi = clipped(m)
 
         def f(T: float, m: str = m) -> float:
             return float(prop.calculate(T, m))
 
+        source = f"thermo {type(prop).__name__}, method {m}"
         try:
-            return _fit(quantity, unit, f"thermo {type(prop).__name__}, method {m}", f, lo, hi)
+            curve = _fit(quantity, unit, source, f, lo, hi)
         except _ModelFailedError as exc:
             reasons.append(str(exc))
+            continue
+        if not extend:
+            return curve
+        if curve.T_min > T_low + _MIN_GAIN or curve.T_max < T_high - _MIN_GAIN:
+            ranked = [(n, *clipped(n), log_model(n)) for n in methods if n != m]
+            curve = _extended(curve, log_model(m), ranked, T_low, T_high)
+        if curve.T_min <= c_lo and c_hi <= curve.T_max:
+            return curve
+        if fallback is None:
+            fallback = curve
+    if fallback is not None:
+        return fallback
     raise MissingConstantError(
         f"none of thermo's models for the {quantity} can be used: " + "; ".join(reasons)
     )
+
+
+#: Largest relative difference at which a further method may carry a curve on past the range
+#: of the one before it.  Published vapour-pressure correlations of the same liquid differ by
+#: several per cent near the lower ends of their ranges (below about 1 kPa), which is where the
+#: joins fall; a method differing by more than this is taken to describe something else.
+JOIN_RTOL = 0.10
+#: Width of the overlap over which a join is checked, and of the band beyond the join over
+#: which the difference at the join is faded out [K].
+JOIN_WINDOW = 10.0
+#: Shortest extension worth a join [K].
+_MIN_GAIN = 0.5
+
+
+def _fade(t: float) -> float:
+    """Quintic step: 0 for t <= 0, 1 for t >= 1, with zero slope and curvature at both ends."""
+    t = min(max(t, 0.0), 1.0)
+    return t * t * t * (10.0 + t * (-15.0 + 6.0 * t))
+
+
+_Part = tuple[float, float, Callable[[float], float]]
+
+
+def _extended(
+    base: PropertyCurve,
+    log_base: Callable[[float], float],
+    ranked: list[tuple[str, float, float, Callable[[float], float]]],
+    T_low: float,
+    T_high: float,
+) -> PropertyCurve:
+    """Carry ``base`` towards ``T_low`` and ``T_high`` with further ranked methods.
+
+    ``log_base`` is the log of the model ``base`` was fitted to.  Below the
+    range reached so far, the first of ``ranked`` (name, lowest and highest
+    temperature, log of the model) that reaches lower, overlaps it,
+    and agrees with it within :data:`JOIN_RTOL` over the overlap (at most
+    :data:`JOIN_WINDOW` wide) is joined at the edge of that range; the same
+    above.  The difference at the join is faded out over :data:`JOIN_WINDOW`
+    beyond it (a quintic step in log space), so the curve is continuous, the
+    chosen method is untouched over its own range and each further method is
+    reproduced exactly beyond the fade.  Joins are repeated until both ends
+    are reached or no method qualifies; the source names every method, its
+    range and its difference at the join.  If the joined curve cannot be
+    interpolated, the joins are undone, last first, until it can (at worst
+    ``base`` is returned).
+    """
+    tol = math.log1p(JOIN_RTOL)
+    parts: list[_Part] = [(base.T_min, base.T_max, log_base)]
+    notes: list[str] = []
+    joins: list[float] = []
+    order: list[bool] = []  # direction of each join, in the order made
+    used: set[str] = set()
+
+    def composite(T: float) -> float:
+        for lo, hi, g in parts:
+            if lo <= T <= hi:
+                return g(T)
+        raise _ModelFailedError(f"T={T} K outside the joined parts")  # pragma: no cover
+
+    for downward in (True, False):
+        while True:
+            edge = parts[0][0] if downward else parts[-1][1]
+            if (edge <= T_low + _MIN_GAIN) if downward else (edge >= T_high - _MIN_GAIN):
+                break
+            inner = parts[0][1] if downward else parts[-1][0]
+            found = None
+            for name, lo, hi, g in ranked:
+                if name in used:
+                    continue
+                reach = lo < edge - _MIN_GAIN if downward else hi > edge + _MIN_GAIN
+                span = (
+                    min(JOIN_WINDOW, hi - edge, inner - edge)
+                    if downward
+                    else min(JOIN_WINDOW, edge - lo, edge - inner)
+                )
+                if not reach or span < 0.0:
+                    continue
+                side = 1.0 if downward else -1.0
+                try:
+                    diffs = [
+                        g(edge + side * span * q) - composite(edge + side * span * q)
+                        for q in (0.0, 0.25, 0.5, 0.75, 1.0)
+                    ]
+                    far = lo if downward else hi
+                    width = min(JOIN_WINDOW, abs(edge - far))
+                    probe = [g(edge + (far - edge) * q) for q in (0.25, 0.5, 1.0)]
+                except Exception:  # a model failing to evaluate is skipped for the next
+                    continue
+                if not all(math.isfinite(d) for d in diffs + probe) or max(abs(d) for d in diffs) > tol:
+                    continue
+                found = (name, lo, hi, g, -diffs[0], width)
+                break
+            if found is None:
+                break
+            name, lo, hi, g, shift, width = found
+            used.add(name)
+            joins += [edge, edge - width if downward else edge + width]
+
+            def part(
+                T: float,
+                g: Callable[[float], float] = g,
+                e: float = edge,
+                w: float = width,
+                s: float = shift,
+                d: bool = downward,
+            ) -> float:
+                return g(T) + s * _fade((T - (e - w)) / w if d else ((e + w) - T) / w)
+
+            pct = 100.0 * math.expm1(abs(shift))
+            order.append(downward)
+            if downward:
+                parts.insert(0, (lo, edge, part))
+                notes.append(f"below {edge:.2f} K method {name} down to {lo:.2f} K")
+            else:
+                parts.append((edge, hi, part))
+                notes.append(f"above {edge:.2f} K method {name} up to {hi:.2f} K")
+            notes[-1] += f" (differing by {pct:.1f} % at the join, faded out over {width:.3g} K)"
+    while notes:
+        source = f"{base.source} from {base.T_min:.2f} to {base.T_max:.2f} K; " + "; ".join(notes)
+        try:
+            return _fit(
+                base.quantity,
+                base.unit,
+                source,
+                lambda T: math.exp(composite(T)),
+                parts[0][0],
+                parts[-1][1],
+                joins,
+            )
+        except _ModelFailedError:  # the last method joined spoils the fit: do without it
+            parts.pop(0 if order.pop() else -1)
+            notes.pop()
+            del joins[-2:]
+    return base
 
 
 def _liquid_core(sp: Species) -> tuple[float, float]:
@@ -411,7 +588,10 @@ class LiquidModel:
 
     Built by :func:`liquid_model`.  The range of every curve is limited to
     the liquid range (melting point to critical point) as well as to the
-    range of the underlying ``thermo`` method.
+    ranges of the underlying ``thermo`` methods: thermo's chosen method,
+    carried on towards both ends by its next ranked methods where they agree
+    at the join within :data:`JOIN_RTOL` (each curve's ``source`` names every
+    method, its range and its difference at the join).
     """
 
     species: Species
@@ -693,10 +873,14 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
     anchor = _liquid_core(sp)
     return LiquidModel(
         species=sp,
-        molar_volume=_thermo_curve(vl, f"molar volume of {name}", "m^3/mol", T_low, T_high, anchor),
-        mu=_thermo_curve(mu, f"viscosity of {name}", "Pa s", T_low, T_crit, anchor),
-        k=_thermo_curve(k, f"thermal conductivity of {name}", "W/(m K)", T_low, T_crit, anchor),
-        cp_molar=_thermo_curve(cp, f"heat capacity of {name}", "J/(mol K)", T_low, T_high, anchor),
+        molar_volume=_thermo_curve(
+            vl, f"molar volume of {name}", "m^3/mol", T_low, T_high, anchor, extend=True
+        ),
+        mu=_thermo_curve(mu, f"viscosity of {name}", "Pa s", T_low, T_crit, anchor, extend=True),
+        k=_thermo_curve(k, f"thermal conductivity of {name}", "W/(m K)", T_low, T_crit, anchor, extend=True),
+        cp_molar=_thermo_curve(
+            cp, f"heat capacity of {name}", "J/(mol K)", T_low, T_high, anchor, extend=True
+        ),
         psat=_optional_curve(vp, f"vapour pressure of {name}", "Pa", T_low, T_crit, anchor),
         hvap=_optional_curve(hv, f"enthalpy of vaporisation of {name}", "J/mol", T_low, T_high, anchor),
     )
@@ -733,7 +917,7 @@ def _optional_curve(
     prop: Any, quantity: str, unit: str, T_low: float, T_high: float, anchor: tuple[float, float]
 ) -> PropertyCurve | None:
     try:
-        return _thermo_curve(prop, quantity, unit, T_low, T_high, anchor)
+        return _thermo_curve(prop, quantity, unit, T_low, T_high, anchor, extend=True)
     except MissingConstantError:
         return None
 

@@ -320,6 +320,14 @@ class Species:
             return None
         return _molecule(self.smiles)
 
+    def _source_of(self, name: str) -> tuple[str | None, Origin | None]:
+        """(source text, origin) of constant ``name``; an identity constant's without reading the rest."""
+        d = object.__getattribute__(self, "__dict__")
+        if "_pending" in d and name in d.get("_early_sources", {}):
+            text, origin = d["_early_sources"][name]
+            return text, origin
+        return self.sources.get(name), self.origins.get(name)
+
     def require(self, name: str, method: str) -> float:
         """Return constant ``name``, or raise naming the method that needs it."""
         value = getattr(self, name)
@@ -584,15 +592,46 @@ def species(identifier: str | Species) -> Species:
             _UNKNOWN.pop(next(iter(_UNKNOWN)))
         _UNKNOWN[text] = str(exc)
         raise
-    alternatives = _names.AMBIGUOUS.get(text.lower())
-    if alternatives is not None:
-        others = ", ".join(f"{n} ({c})" for n, c in alternatives if c != sp.CAS)
-        warn_caller(
-            f"species {text!r} names several substances; it was resolved to {sp.identity}. "
-            f"Others it may mean: {others}. Pass the name or CAS number of the one you mean",
-            AmbiguousSpeciesWarning,
-        )
+    message = _ambiguity(text, sp)
+    if message is not None:
+        warn_caller(message, AmbiguousSpeciesWarning)
     return sp
+
+
+def _ambiguity(text: str, sp: Species) -> str | None:
+    """Return the warning for an identifier that names several substances, or None."""
+    alternatives = _names.AMBIGUOUS.get(text.lower())
+    if alternatives is None:
+        return None
+    others = ", ".join(f"{n} ({c})" for n, c in alternatives if c != sp.CAS)
+    return (
+        f"species {text!r} names several substances; it was resolved to {sp.identity}. "
+        f"Others it may mean: {others}. Pass the name or CAS number of the one you mean"
+    )
+
+
+def ambiguity_warnings(*identifiers: object) -> tuple[str, ...]:
+    """Return the ambiguity warnings that resolving ``identifiers`` issues (for caching callers).
+
+    A dispatcher that keeps its preparation per identifier does not call :func:`species` again;
+    it stores these messages with its entry and re-issues them on every call
+    (:func:`rewarn_ambiguity`), so each call using an ambiguous name warns, whatever came first.
+    """
+    out = []
+    for identifier in identifiers:
+        if isinstance(identifier, str):
+            text = identifier.strip()
+            if text.lower() in _names.AMBIGUOUS:
+                message = _ambiguity(text, _resolve(text))
+                if message is not None:
+                    out.append(message)
+    return tuple(out)
+
+
+def rewarn_ambiguity(messages: tuple[str, ...]) -> None:
+    """Issue stored ambiguity warnings again, attributed to the caller's code."""
+    for message in messages:
+        warn_caller(message, AmbiguousSpeciesWarning)
 
 
 #: Identifiers found to be unknown, with their message (bounded; oldest forgotten first).
@@ -746,6 +785,11 @@ _STAGE_A = frozenset(
 _RESTATED = ("sources", "origins")
 
 
+#: Source texts of a database species' identity constants.
+_FROM_CHEMICALS = "chemicals"
+_FULLER_SPECIAL = "Fuller et al. (1969) special-molecule volume"
+
+
 def _lazy_species(meta: _Meta) -> Species:
     """Create a database species whose constants are read from the databases on first use.
 
@@ -769,6 +813,12 @@ def _lazy_species(meta: _Meta) -> Species:
     }
     for k, v in eager.items():
         object.__setattr__(sp, k, v)
+    # the sources of the identity constants, the same as the completed record states, so that a
+    # method using only these does not read the other constants to report where they came from
+    early = {"molar_mass": (_FROM_CHEMICALS, Origin.DATABASE)}
+    if fuller_v is not None:
+        early["fuller_volume"] = (_FULLER_SPECIAL, Origin.TABULATED)
+    object.__setattr__(sp, "_early_sources", early)
     object.__setattr__(sp, "_pending", meta)
     return sp
 
@@ -787,6 +837,7 @@ def _complete(sp: Species, *, stage_a: bool) -> None:
                 object.__setattr__(sp, name, getattr(full, name))
         if all(f.name in d for f in dataclasses.fields(Species)):
             del d["_pending"]
+            d.pop("_early_sources", None)
 
 
 @functools.lru_cache(maxsize=1)
@@ -831,7 +882,7 @@ def _from_chemicals(meta: _Meta, with_vb: bool = True) -> Species:
     cas: str = meta.CAS
     src: dict[str, str] = {}
     mw = float(meta.MW) / 1000.0
-    src["molar_mass"] = "chemicals"
+    src["molar_mass"] = _FROM_CHEMICALS
 
     def get(fn: Any, name: str) -> float | None:
         try:
@@ -883,7 +934,7 @@ def _from_chemicals(meta: _Meta, with_vb: bool = True) -> Species:
 
     fuller_v = data.FULLER_SPECIAL_VOLUMES.get(cas)
     if fuller_v is not None:
-        src["fuller_volume"] = "Fuller et al. (1969) special-molecule volume"
+        src["fuller_volume"] = _FULLER_SPECIAL
         org["fuller_volume"] = Origin.TABULATED
 
     return Species(
