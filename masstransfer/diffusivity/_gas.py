@@ -1252,20 +1252,8 @@ def gas_diffusivity(
     0.361
 
     """
-    if type(T) is float and type(P) is float:  # scalar fast path: plain floats in the SI range
-        try:
-            r = _READY[(method, solute, medium)]
-        except (KeyError, TypeError):
-            r = _ready(method, solute, medium)
-        if (
-            r.fast
-            and r.Tc <= T <= r.T_hi
-            and r.T_lo <= T
-            and VACUUM_LIMIT <= P <= LOW_PRESSURE_LIMIT
-            and not r.cautions
-        ):
-            return r.fast * T**1.75 / P  # the bounds above also exclude NaN and infinity
-    elif has_quantity((T, P), {}):  # pint: units
+    scalar = type(T) is float and type(P) is float
+    if not scalar and has_quantity((T, P), {}):  # pint: units
         return call_with_quantities(gas_diffusivity, (solute, medium, T, P, method), {})
     try:
         r = _READY[(method, solute, medium)]
@@ -1274,6 +1262,17 @@ def gas_diffusivity(
     else:
         if r.ambiguous:
             rewarn_ambiguity(r.ambiguous)
+    if scalar:  # fast path: plain floats inside every range, nothing to warn
+        t: float = T  # type: ignore[assignment]
+        p: float = P  # type: ignore[assignment]
+        if (
+            r.fast
+            and r.Tc <= t <= r.T_hi
+            and r.T_lo <= t
+            and VACUUM_LIMIT <= p <= LOW_PRESSURE_LIMIT
+            and not r.cautions
+        ):
+            return r.fast * t**1.75 / p  # type: ignore[no-any-return]  # bounds exclude NaN, inf
     Tv = check_positive("T", T)
     Pv = check_positive("P", P)
     if not isinstance(Tv, float | np.ndarray) or not isinstance(Pv, float | np.ndarray):
