@@ -49,3 +49,18 @@ def test_single_piece_matches_numpy_chebval_bit_for_bit(width):
     assert curve(300.0) == pytest.approx(
         float(np.exp(chebyshev.chebval((600.0 - 900.0) / 400.0, curve.coefficients[0]))), rel=1e-15
     )
+
+
+def test_evaporation_rate_is_unchanged_by_the_fast_curve_paths(monkeypatch):
+    from masstransfer import humidity
+    from masstransfer.substances import _properties
+
+    T = np.linspace(300.0, 420.0, 4001)
+    kwargs = {"T": T, "h": 30.0, "y": 0.02}
+    fast = humidity.evaporation_rate("water", "air", **kwargs)
+    # the plain forms: numpy's chebval, and every piecewise curve through the per-point gather
+    monkeypatch.setattr(_properties, "_chebval", lambda x, c: chebyshev.chebval(x, c))
+    monkeypatch.setattr(_properties, "_PIECE_LOOP_MAX", -1)
+    plain = humidity.evaporation_rate("water", "air", **kwargs)
+    for field in ("T_surface", "mass_flux", "k_c", "q_latent"):
+        np.testing.assert_allclose(getattr(fast, field), getattr(plain, field), rtol=1e-12, err_msg=field)
