@@ -27,7 +27,7 @@ from ._validation import warn_caller
 __all__ = ["BLOCK", "blocked_shape", "blockwise"]
 
 #: States per block: 65536 float64 values are 512 kB per array; the arrays a chain keeps alive
-#: at once stay within the last-level cache (16384 to 65536 measured alike in ``benchmarks/run.py``).
+#: at once stay within the last-level cache (blocks of 16384 to 65536 states measured alike).
 BLOCK = 65536
 
 _R = TypeVar("_R")
