@@ -6,7 +6,7 @@ its ratio to one worker, and the peak memory of each worker from the worker's ow
 highest resident memory its system monitor sampled, and the operating system's high-water mark
 of the process).  The grid (h, T, P and the flux, float64) totals several GB, and its result
 alone is larger than a worker's limit, so it is never materialised: design_grid's axes are
-broadcast views, each task computes one block of 2**19 states, and only running reductions
+broadcast views, each task computes one block of 2**17 states, and only running reductions
 (maximum and mean flux) leave the workers.  Writes ``benchmarks/sweep.md``.  Like every
 benchmark here, the ratios are the result, not the times.
 """
@@ -27,7 +27,7 @@ from distributed import Client, LocalCluster
 from masstransfer import sweep
 
 MEMORY_LIMIT = 500_000_000  # bytes per worker
-BLOCK_STATES = 1 << 19
+BLOCK_STATES = 1 << 17
 
 
 def _peak_memory(dask_worker) -> tuple[float, int]:
