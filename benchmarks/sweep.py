@@ -46,9 +46,11 @@ def run(states: float, workers: int) -> tuple[float, list[tuple[float, int]], fl
     n_h = 200
     n_p = 5
     n_t = max(2, int(states // (n_h * n_p)))
+    # the long axis first: a block then spans few of its values, so each task carries only a
+    # short slice of it (a long axis last would put a long slice into every task)
     grid = sweep.design_grid(
-        h=np.linspace(5.0, 200.0, n_h),
         T=np.linspace(280.0, 350.0, n_t),
+        h=np.linspace(5.0, 200.0, n_h),
         P=np.linspace(0.8e5, 2.0e5, n_p),
         block_states=BLOCK_STATES,
     )
@@ -96,7 +98,7 @@ def main() -> None:
     n_states = rows[0][4] / 8
     lines = [
         f"Measured {stamp} on {platform.machine()}, {os.cpu_count()} cores (shared with other work), "
-        f"Python {platform.python_version()}; grid of {n_states:.3g} states (h x T x P) in blocks of "
+        f"Python {platform.python_version()}; grid of {n_states:.3g} states (T x h x P) in blocks of "
         f"{BLOCK_STATES} states,",
         "chain h -> k_c -> evaporation flux (water into air), reduced to the maximum and mean flux. "
         f"Materialised, the grid's inputs and result would take {4 * n_states * 8 / 1e9:.1f} GB "
