@@ -565,8 +565,8 @@ def peak_memory_ratio(n: int, label: str = "names in: mass_transfer_from_heat (w
     tracemalloc.stop()
     fields = [r] if isinstance(r, np.ndarray) else [v for v in vars(r).values() if isinstance(v, np.ndarray)]
     produced = sum(v.nbytes for v in fields if not any(v is a for a in args))
-    used = 3 if "mass_transfer_coefficient" in label else 2 if "names" in label else 1
-    return peak / (sum(a.nbytes for a in args[:used]) + produced)
+    used = (0, 2) if "mass_transfer_coefficient" in label else (0, 1) if "names" in label else (1,)
+    return peak / (sum(args[i].nbytes for i in used) + produced)
 
 
 def scaling_plot(path: Path, costs: dict[str, tuple[list[int], list[float]]] | None = None) -> None:
@@ -607,7 +607,7 @@ def scaling_plot(path: Path, costs: dict[str, tuple[list[int], list[float]]] | N
     ax2.set_ylim(0.0, 2.0)
     ax2.set_xlabel("states per call (array length)")
     ax2.set_ylabel("cost per state / cost per state at 10^6 states")
-    ax2.set_title("cost per state against 10^6 states: flat means linear in the array length")
+    ax2.set_title("cost per state over its 10^6 value (flat: linear cost)")
     ax2.legend(fontsize=8)
     fig.tight_layout()
     fig.savefig(path, dpi=110)
