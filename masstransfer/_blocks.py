@@ -20,13 +20,14 @@ from typing import Any, TypeVar
 
 import numpy as np
 
+from ._frozen import adopting
 from ._typing import FloatOrArray
 from ._validation import warn_caller
 
 __all__ = ["BLOCK", "blocked_shape", "blockwise"]
 
-#: States per block: 16384 float64 values are 128 kB per array, so the dozen arrays a chain
-#: keeps alive at once fit in a 1-2 MB level-2 cache (measured in ``benchmarks/run.py``).
+#: States per block: 65536 float64 values are 512 kB per array; the arrays a chain keeps alive
+#: at once stay within the last-level cache (blocks of 16384 to 65536 states measured alike).
 BLOCK = 65536
 
 _R = TypeVar("_R")
@@ -55,6 +56,7 @@ def blockwise(call: Callable[..., _R], arrays: dict[str, FloatOrArray], shape: t
     ops = [np.asarray(arrays[n], dtype=float) for n in names]
     total = math.prod(shape)
     outputs: dict[str, np.ndarray[Any, np.dtype[np.float64]]] = {}
+    flat: dict[str, np.ndarray[Any, np.dtype[np.float64]]] = {}
     first: Any = None
     texts: dict[str, None] = {}
     offset = 0
@@ -79,8 +81,9 @@ def blockwise(call: Callable[..., _R], arrays: dict[str, FloatOrArray], shape: t
                         continue
                     if isinstance(v, np.ndarray) and v.shape == (n,):
                         if f.name not in outputs:
-                            outputs[f.name] = np.empty(total)
-                        outputs[f.name][offset : offset + n] = v
+                            outputs[f.name] = np.empty(shape)
+                            flat[f.name] = outputs[f.name].reshape(total)  # a view: C order
+                        flat[f.name][offset : offset + n] = v
                     elif f.name == "warnings":
                         texts.update(dict.fromkeys(v))
                 offset += n
@@ -89,8 +92,11 @@ def blockwise(call: Callable[..., _R], arrays: dict[str, FloatOrArray], shape: t
         if (str(w.message), w.category) not in seen:
             seen.add((str(w.message), w.category))
             warn_caller(str(w.message), w.category)
-    changes: dict[str, Any] = {k: v.reshape(shape) for k, v in outputs.items()}
+    changes: dict[str, Any] = dict(outputs)
     changes.update({n: v for n, v in arrays.items() if hasattr(first, n)})
     if hasattr(first, "warnings"):
         changes["warnings"] = tuple(texts)
-    return dataclasses.replace(first, **changes)  # type: ignore[no-any-return]
+    # the outputs were allocated here and nothing else refers to them: the result takes them as
+    # they are (made read-only) rather than copying them; the caller's inputs are still copied
+    with adopting(*outputs.values()):
+        return dataclasses.replace(first, **changes)  # type: ignore[no-any-return]

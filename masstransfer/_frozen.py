@@ -15,13 +15,18 @@ and hashing covers every field, so two results are equal exactly when nothing in
 
 from __future__ import annotations
 
+import contextlib
+import contextvars
 import dataclasses
 from collections.abc import Iterator, Mapping
 from typing import Any, TypeVar
 
 import numpy as np
 
-__all__ = ["FrozenMapping", "FrozenResult", "freeze"]
+__all__ = ["FrozenMapping", "FrozenResult", "adopting", "freeze"]
+
+#: Ids of arrays that :func:`freeze` may take without copying (see :func:`adopting`).
+_ADOPTED: contextvars.ContextVar[frozenset[int]] = contextvars.ContextVar("_ADOPTED", default=frozenset())
 
 K = TypeVar("K")
 V = TypeVar("V")
@@ -72,9 +77,27 @@ class FrozenMapping(Mapping[K, V]):
         return (type(self), (dict(self._data),))
 
 
+@contextlib.contextmanager
+def adopting(*arrays: np.ndarray[Any, Any]) -> Iterator[None]:
+    """Within the block, :func:`freeze` makes ``arrays`` read-only in place instead of copying them.
+
+    For arrays the library has just allocated and hands to a result without keeping any other
+    reference (the full-size outputs of a blockwise evaluation): copying them would only
+    double the memory and the time.  Every other array is still copied.
+    """
+    token = _ADOPTED.set(_ADOPTED.get() | {id(a) for a in arrays})
+    try:
+        yield
+    finally:
+        _ADOPTED.reset(token)
+
+
 def freeze(value: Any) -> Any:
     """Return an immutable equivalent of ``value`` (arrays copied read-only, mappings frozen)."""
     if isinstance(value, np.ndarray):
+        if id(value) in _ADOPTED.get() and value.base is None:
+            value.setflags(write=False)
+            return value
         out = np.array(value, copy=True)
         out.setflags(write=False)
         return out

@@ -482,7 +482,11 @@ def _lazy_call(
             f"{name}: array arguments do not broadcast together: {listed}; "
             "pass arrays of one shape, or scalars"
         ) from None
-    block = functools.partial(_apply_block, fn, args, kwargs, slots)
+    # every task carries the partial: the array slots go in empty (each task gets its own
+    # blocks), or each would carry the whole arrays and their graphs
+    bare_args = tuple(None if i in slots else v for i, v in enumerate(args))
+    bare_kwargs = {k: (None if k in slots else v) for k, v in kwargs.items()}
+    block = functools.partial(_apply_block, fn, bare_args, bare_kwargs, slots)
     ndim = arrays[0].ndim
     return da.map_blocks(block, *arrays, dtype=float, meta=np.empty((0,) * ndim, dtype=float))
 

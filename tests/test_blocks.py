@@ -79,3 +79,31 @@ def test_result_is_a_frozen_dataclass_of_arrays():
     arrays = [f.name for f in dataclasses.fields(r) if isinstance(getattr(r, f.name), np.ndarray)]
     assert {"k_c", "k_G", "k_y", "rho", "cp", "k", "mu", "D", "Pr", "Sc", "Le", "h", "T"} <= set(arrays)
     assert not any(getattr(r, a).flags.writeable for a in ("k_c", "D"))  # frozen, like every result
+
+
+def test_blocked_outputs_are_taken_without_a_copy_but_inputs_are_copied():
+    n = 2 * _blocks.BLOCK + 7
+    h, T = np.full(n, 20.0), np.linspace(300.0, 340.0, n)
+    r = mt.mass_transfer_from_heat(h, "water", "air", T)
+    assert r.k_c.base is None  # the array written block by block, not a copy of it
+    assert not r.k_c.flags.writeable
+    with pytest.raises(ValueError, match="read-only"):
+        r.k_c[0] = 1.0
+    before = r.T.copy()
+    T[:] = 400.0  # the caller's later edits do not reach the result
+    np.testing.assert_array_equal(r.T, before)
+
+
+def test_adopting_leaves_other_arrays_copied():
+    from masstransfer._frozen import adopting, freeze
+
+    mine, theirs = np.arange(3.0), np.arange(3.0)
+    with adopting(mine):
+        assert freeze(mine) is mine
+        assert freeze(theirs) is not theirs
+        assert freeze(mine[1:]) is not mine  # a view is copied
+    assert not mine.flags.writeable
+    assert theirs.flags.writeable
+    assert freeze(np.arange(2.0)) is not None
+    fresh = np.arange(2.0)
+    assert freeze(fresh) is not fresh  # outside the block, every array is copied

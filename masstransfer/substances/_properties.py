@@ -161,6 +161,8 @@ class PropertyCurve:
         assert b is not None
         if coef.shape[0] == 1:
             x = (2.0 * T - (b[0] + b[1])) / (b[1] - b[0])
+            if isinstance(x, np.ndarray) and x.ndim:
+                return _chebval(x, coef[0])
             return _cheb.chebval(x, coef[0])  # type: ignore[no-any-return]
         if isinstance(T, float):
             i = min(max(bisect.bisect_right(b.tolist(), T) - 1, 0), coef.shape[0] - 1)
@@ -168,6 +170,20 @@ class PropertyCurve:
             return float(_cheb.chebval(x, coef[i]))
         Ta = np.asarray(T, dtype=float)
         idx = np.clip(np.searchsorted(b, Ta, side="right") - 1, 0, coef.shape[0] - 1)
+        present = np.flatnonzero(np.bincount(idx.ravel(), minlength=coef.shape[0]))
+        if Ta.ndim and present.size <= _PIECE_LOOP_MAX:
+            # few pieces in use: each piece's own coefficients (its zero padding left out)
+            out = np.empty_like(Ta)
+            for i in present.tolist():
+                mask = None if present.size == 1 else idx == i
+                xi = Ta if mask is None else Ta[mask]
+                lo_i, hi_i = float(b[i]), float(b[i + 1])
+                xi = (2.0 * xi - (lo_i + hi_i)) / (hi_i - lo_i)
+                vi = _clenshaw_piece(xi, coef[i])
+                if mask is None:
+                    return vi
+                out[mask] = vi
+            return out
         lo, hi = b[idx], b[idx + 1]
         x = (2.0 * Ta - (lo + hi)) / (hi - lo)
         # Clenshaw's recurrence with each point's own coefficients, one degree at a time
@@ -191,6 +207,59 @@ class PropertyCurve:
                 f"T={shown!r} K is outside {self.T_min:.2f}-{self.T_max:.2f} K, the range of the "
                 f"{self.quantity} model ({self.source}); pass T within that range"
             )
+
+
+#: Most pieces of a curve an array may fall in for the piece-by-piece evaluation; beyond, the
+#: coefficients are gathered per point.
+_PIECE_LOOP_MAX = 8
+
+
+def _chebval(x: FloatArray, c: FloatArray) -> FloatArray:
+    """``numpy.polynomial.chebyshev.chebval(x, c)`` for an array ``x``, in three work arrays.
+
+    The same Clenshaw recurrence, operation for operation (so the same bits), written into
+    buffers reused from one degree to the next instead of fresh temporaries.
+    """
+    n = len(c)
+    if n < 3:
+        return np.asarray(_cheb.chebval(x, c), dtype=float)
+    x2 = 2 * x
+    c1 = x2 * c[-1]
+    c1 += c[-2]
+    c0: Any = c[-3] - c[-1]
+    spare: FloatArray | None = None
+    for i in range(4, n + 1):
+        new = np.subtract(c[-i], c1, out=spare)
+        c1 *= x2
+        c1 += c0
+        spare = c0 if isinstance(c0, np.ndarray) else None
+        c0 = new
+    c1 *= x
+    c1 += c0
+    return np.asarray(c1, dtype=float)
+
+
+def _clenshaw_piece(x: FloatArray, c: FloatArray) -> FloatArray:
+    """One piece's polynomial at ``x``: the recurrence of the per-point path, with scalar coefficients.
+
+    Trailing zero coefficients (a piece padded to the width of the widest) contribute exact
+    zeros to the recurrence and are skipped.
+    """
+    nonzero = np.flatnonzero(c)
+    top = int(nonzero[-1]) if nonzero.size else 0
+    x2 = 2.0 * x
+    b1 = np.zeros_like(x)
+    b2 = np.zeros_like(x)
+    spare = np.empty_like(x)
+    for j in range(top, 0, -1):
+        np.multiply(x2, b1, out=spare)
+        spare += c[j]
+        spare -= b2
+        b1, b2, spare = spare, b1, b2
+    out = x * b1
+    out += c[0]
+    out -= b2
+    return out
 
 
 class _ModelFailedError(Exception):

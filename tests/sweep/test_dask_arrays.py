@@ -101,3 +101,19 @@ def test_check_helpers_are_lazy_on_dask():
         checked = check_positive("T", x)
     with pytest.raises(errors.InputValueError, match="not positive"):
         checked.compute(scheduler="sync")
+
+
+def test_lazy_tasks_carry_their_blocks_not_the_whole_arrays():
+    import pickle
+
+    import dask.array as da
+
+    import masstransfer as mt
+
+    T = da.from_array(np.linspace(280.0, 350.0, 200_000), chunks=10_000)  # 1.6 MB of values
+    lazy = mt.surface.reynolds(1.0, T * 1e-3, 1.5e-5)
+    graph = dict(lazy.__dask_graph__())
+    mapped = [v for k, v in graph.items() if k[0] == lazy.name]
+    assert len(mapped) == 20
+    assert max(len(pickle.dumps(v)) for v in mapped) < 50_000  # no task holds the 1.6 MB input
+    np.testing.assert_allclose(lazy.compute(), 1.0 * np.linspace(280.0, 350.0, 200_000) * 1e-3 / 1.5e-5)
