@@ -9,7 +9,6 @@ functions, on first use.  The entry points :func:`masstransfer.species`,
 from __future__ import annotations
 
 from ._properties import (
-    BOILING_POINT_RTOL,
     INTERPOLATION_RTOL,
     JOIN_RTOL,
     JOIN_WINDOW,
@@ -24,7 +23,6 @@ from ._properties import (
 from ._species import Origin, le_bas_volume
 
 __all__ = [
-    "BOILING_POINT_RTOL",
     "INTERPOLATION_RTOL",
     "JOIN_RTOL",
     "JOIN_WINDOW",

@@ -41,7 +41,7 @@ from numpy.polynomial import chebyshev as _cheb
 from .. import _tables as data
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_positive, check_shapes, finish, guard, warn_caller
-from ..constants import ATM, DEBYE, R_GAS
+from ..constants import DEBYE, R_GAS
 from ..errors import EnvelopeWarning, InputValueError, MissingConstantError, OutOfRangeError
 from ._cache import load_curves, store_curves
 from ._databases import loading, thermo_models
@@ -49,7 +49,6 @@ from ._species import Species, species
 from ._structure import Molecule
 
 __all__ = [
-    "BOILING_POINT_RTOL",
     "INTERPOLATION_RTOL",
     "JOIN_RTOL",
     "JOIN_WINDOW",
@@ -365,7 +364,6 @@ def _thermo_curve(
     T_high: float,
     core: tuple[float, float],
     extend: bool = False,
-    check: Callable[[PropertyCurve], str | None] | None = None,
 ) -> PropertyCurve:
     """Fit the best of thermo's methods for ``prop`` over [T_low, T_high].
 
@@ -382,9 +380,6 @@ def _thermo_curve(
     or T_high is carried on by the next of thermo's ranked methods
     (:func:`_extended`); the first such curve that covers the core is taken,
     trying the methods in thermo's order and then in the order above.
-
-    ``check`` returns why a fitted curve contradicts a known fact (None if it does not); such a
-    curve is passed over like a method that fails.
     """
     methods = _ranked(prop)
     if not methods:
@@ -434,10 +429,6 @@ def _thermo_curve(
         if curve.T_min > T_low + _MIN_GAIN or curve.T_max < T_high - _MIN_GAIN:
             ranked = [(n, *clipped(n), log_model(n)) for n in methods if n != m]
             curve = _extended(curve, log_model(m), ranked, T_low, T_high)
-        wrong = None if check is None else check(curve)
-        if wrong is not None:
-            reasons.append(f"{source}: {wrong}")
-            continue
         if curve.T_min <= c_lo and c_hi <= curve.T_max:
             return curve
         if fallback is None:
@@ -959,9 +950,7 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
         cp_molar=_thermo_curve(
             cp, f"heat capacity of {name}", "J/(mol K)", T_low, T_high, anchor, extend=True
         ),
-        psat=_optional_curve(
-            vp, f"vapour pressure of {name}", "Pa", T_low, T_crit, anchor, _boiling_point_check(sp.Tb)
-        ),
+        psat=_optional_curve(vp, f"vapour pressure of {name}", "Pa", T_low, T_crit, anchor),
         hvap=_optional_curve(hv, f"enthalpy of vaporisation of {name}", "J/mol", T_low, T_high, anchor),
     )
 
@@ -994,42 +983,12 @@ def _surface_tension(sp: Species) -> PropertyCurve | None:
 
 
 def _optional_curve(
-    prop: Any,
-    quantity: str,
-    unit: str,
-    T_low: float,
-    T_high: float,
-    anchor: tuple[float, float],
-    check: Callable[[PropertyCurve], str | None] | None = None,
+    prop: Any, quantity: str, unit: str, T_low: float, T_high: float, anchor: tuple[float, float]
 ) -> PropertyCurve | None:
     try:
-        return _thermo_curve(prop, quantity, unit, T_low, T_high, anchor, extend=True, check=check)
+        return _thermo_curve(prop, quantity, unit, T_low, T_high, anchor, extend=True)
     except MissingConstantError:
         return None
-
-
-#: Largest relative departure from one atmosphere that a vapour-pressure curve may show at the
-#: liquid's normal boiling point, the one vapour pressure known for every liquid in the
-#: databases.  Published correlations of measured data meet it within a few per cent; an
-#: estimate from critical constants that misses it by more describes another liquid.
-BOILING_POINT_RTOL = 0.10
-
-
-def _boiling_point_check(Tb: float | None) -> Callable[[PropertyCurve], str | None]:
-    """Build the ``check`` of a vapour-pressure curve: 1 atm at the normal boiling point ``Tb``."""
-
-    def check(curve: PropertyCurve) -> str | None:
-        if Tb is None or not curve.T_min <= Tb <= curve.T_max:
-            return None
-        p = float(curve(Tb))
-        if abs(p / ATM - 1.0) <= BOILING_POINT_RTOL:
-            return None
-        return (
-            f"gives {p / 1e3:.4g} kPa at the normal boiling point {Tb:g} K, not 101.3 kPa "
-            f"within {BOILING_POINT_RTOL:.0%}"
-        )
-
-    return check
 
 
 #: Temperature at which the parachor is evaluated when the liquid exists there [K].
