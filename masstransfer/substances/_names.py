@@ -62,7 +62,6 @@ ALIASES: Final = MappingProxyType(
         "HAC": "64-19-7",  # acetic acid; common practice
         "MCH": "108-87-2",  # methylcyclohexane; common practice
         "EDC": "107-06-2",  # ethylene dichloride, 1,2-dichloroethane; common practice
-        "DCE": "107-06-2",  # 1,2-dichloroethane; common practice
         "VCM": "75-01-4",  # vinyl chloride monomer; common practice
         "VAM": "108-05-4",  # vinyl acetate monomer; common practice
         "MMA": "80-62-6",  # methyl methacrylate; common practice
@@ -70,11 +69,26 @@ ALIASES: Final = MappingProxyType(
         "ODCB": "95-50-1",  # ortho-dichlorobenzene; common practice
         "ECH": "106-89-8",  # epichlorohydrin; common practice
         "DMDS": "624-92-0",  # dimethyl disulfide; common practice
-        "TBA": "75-65-0",  # tert-butanol (tert-butyl alcohol); common practice
         "IBA": "78-83-1",  # isobutanol (isobutyl alcohol); common practice
-        "NBA": "71-36-3",  # n-butanol (n-butyl alcohol); common practice
         "BUOH": "71-36-3",  # n-butanol; common practice
         # commercial isomer mixtures: the straight chain, with the ambiguity warning below
+        # condensed structural formulas, which the database reads as a bare formula and resolves
+        # to an isomer (C2H5OH as dimethyl ether)
+        "C2H5OH": "64-17-5",  # ethanol; common practice
+        "CH3CH2OH": "64-17-5",  # ethanol; common practice
+        "CH3OH": "67-56-1",  # methanol; common practice
+        "CH3COOH": "64-19-7",  # acetic acid; common practice
+        "HCOOH": "64-18-6",  # formic acid; common practice
+        "CH3COCH3": "67-64-1",  # acetone; common practice
+        "CH3CHO": "75-07-0",  # acetaldehyde; common practice
+        "HCHO": "50-00-0",  # formaldehyde; common practice
+        "CH3CN": "75-05-8",  # acetonitrile; common practice
+        "C6H5CH3": "108-88-3",  # toluene; common practice
+        "C6H5OH": "108-95-2",  # phenol; common practice
+        "PHOH": "108-95-2",  # phenol; common practice
+        "C6H5NH2": "62-53-3",  # aniline; common practice
+        "CH3COOC2H5": "141-78-6",  # ethyl acetate; common practice
+        "C2H5OC2H5": "60-29-7",  # diethyl ether; common practice
         "HEXANES": "110-54-3",  # n-hexane for "hexanes"; common practice
         "HEPTANES": "142-82-5",  # n-heptane for "heptanes"; common practice
     }
@@ -88,6 +102,13 @@ UNCLEAR_ABBREVIATIONS: Final = MappingProxyType(
         "DIPA": (("diisopropanolamine", "110-97-4"), ("diisopropylamine", "108-18-9")),
         "AMP": (("2-amino-2-methyl-1-propanol", "124-68-5"), ("adenosine monophosphate", "61-19-8")),
         "TCA": (("1,1,1-trichloroethane", "71-55-6"), ("trichloroacetic acid", "76-03-9")),
+        "DCE": (
+            ("1,2-dichloroethane", "107-06-2"),
+            ("1,1-dichloroethene", "75-35-4"),
+            ("cis-1,2-dichloroethene", "156-59-2"),
+        ),
+        "NBA": (("n-butanol", "71-36-3"), ("n-butyl acetate", "123-86-4")),
+        "TBA": (("tert-butanol", "75-65-0"), ("tert-butylamine", "75-64-9")),
     }
 )
 

@@ -598,11 +598,30 @@ def species(identifier: str | Species) -> Species:
     return sp
 
 
+def _ambiguous_key(text: str) -> str | None:
+    """Return the key of :data:`_names.AMBIGUOUS` that ``text`` falls under, or None.
+
+    A generic name by its text; a formula (also a condensed one such as ``C3H7OH``, unless the
+    alias table names its substance) by its Hill formula.
+    """
+    key = text.lower()
+    if key in _names.AMBIGUOUS:
+        return key
+    if text.upper() in _names.ALIASES or not _FORMULA.fullmatch(text):
+        return None
+    atoms = _formula_atoms(text)
+    if not atoms:
+        return None
+    hill = _hill(atoms).lower()
+    return hill if hill in _names.AMBIGUOUS else None
+
+
 def _ambiguity(text: str, sp: Species) -> str | None:
     """Return the warning for an identifier that names several substances, or None."""
-    alternatives = _names.AMBIGUOUS.get(text.lower())
-    if alternatives is None:
+    key = _ambiguous_key(text)
+    if key is None:
         return None
+    alternatives = _names.AMBIGUOUS[key]
     others = ", ".join(f"{n} ({c})" for n, c in alternatives if c != sp.CAS)
     return (
         f"species {text!r} names several substances; it was resolved to {sp.identity}. "
@@ -621,7 +640,7 @@ def ambiguity_warnings(*identifiers: object) -> tuple[str, ...]:
     for identifier in identifiers:
         if isinstance(identifier, str):
             text = identifier.strip()
-            if text.lower() in _names.AMBIGUOUS:
+            if _ambiguous_key(text) is not None:
                 message = _ambiguity(text, _resolve(text))
                 if message is not None:
                     out.append(message)
@@ -735,8 +754,27 @@ def _lookup(key: str, original: str | None = None) -> Species:
     )
 
 
-#: Two to six letters, two or more of them capitals ("BZ", "TEA", "AcOH"): an abbreviation.
-_ABBREVIATION = re.compile(r"(?=(?:[^A-Z]*[A-Z]){2})[A-Za-z]{2,6}")
+#: Shorthand: two to four capitals ("BZ", "TEA", "LPG"), or up to six letters mixing two or more
+#: capitals with lower case ("AcOH", "PhOH"). All-capital words of five or six letters are
+#: taken as names typed in capitals ("STEAM", "ETHER").
+_ABBREVIATION = re.compile(r"[A-Z]{2,4}|(?=(?:[^A-Z]*[A-Z]){2})(?=.*[a-z])[A-Za-z]{3,6}")
+
+
+def _same_formula_any_case(query: str, formula: str) -> bool:
+    """Whether ``query`` is ``formula`` written in any letter case ("HCL" for ClH, "NACL")."""
+    atoms = _formula_atoms(formula)
+    if not atoms:
+        return False
+    symbols = sorted(atoms, key=len, reverse=True)
+    pattern = "|".join(re.escape(e.upper()) for e in symbols)
+    parts = re.findall(rf"({pattern})(\d*)", query.upper())
+    if "".join(e + n for e, n in parts) != query.upper():
+        return False
+    counts: dict[str, int] = {}
+    by_upper = {e.upper(): e for e in symbols}
+    for e, n in parts:
+        counts[by_upper[e]] = counts.get(by_upper[e], 0) + (int(n) if n else 1)
+    return counts == atoms
 
 
 def _abbreviation_guess(query: str, meta: Any) -> bool:
@@ -744,11 +782,12 @@ def _abbreviation_guess(query: str, meta: Any) -> bool:
 
     Abbreviations mean different substances in different trades, and the database's synonym
     lists mix them ("BZ", "TEA", "PG"); only those in the alias table are trusted.  A formula
-    that matches the hit's formula ("CS2", "HCN") and an all-capital full name ("WATER") pass.
+    that matches the hit's formula in any letter case ("CS2", "HCL") and the hit's own name in
+    capitals pass.
     """
-    if not _ABBREVIATION.fullmatch(query) or query.lower() in _names.AMBIGUOUS:
+    if not _ABBREVIATION.fullmatch(query) or _ambiguous_key(query) is not None:
         return False
-    if _FORMULA.fullmatch(query) and _formula_atoms(query) == _formula_atoms(str(meta.formula or "")):
+    if _same_formula_any_case(query, str(meta.formula or "")):
         return False
     own = {_norm(str(n)) for n in (meta.common_name, meta.iupac_name) if n}
     return _norm(query) not in own

@@ -35,6 +35,17 @@ from masstransfer.errors import AmbiguousSpeciesWarning, UnknownSpeciesError
         ("hexanes", "110-54-3"),  # n-hexane, with the ambiguity warning
         ("HCN", "74-90-8"),  # a formula that looks like an abbreviation
         ("WATER", "7732-18-5"),  # an all-capital name
+        ("STEAM", "7732-18-5"),
+        ("GLYCOL", "107-21-1"),
+        ("HCL", "7647-01-0"),  # a formula typed in capitals
+        ("NACL", "7647-14-5"),
+        # condensed structural formulas: the database alone reads them as a bare formula and
+        # returns an isomer (C2H5OH as dimethyl ether, CH3COOH as methyl formate)
+        ("C2H5OH", "64-17-5"),
+        ("CH3CH2OH", "64-17-5"),
+        ("CH3COOH", "64-19-7"),
+        ("CH3COCH3", "67-64-1"),
+        ("CH3CHO", "75-07-0"),
         ("CAS 67-64-1", "67-64-1"),
         ("CAS-No. 67-64-1", "67-64-1"),
         # full names, including one the database finds only lower-cased
@@ -56,6 +67,9 @@ def test_names_abbreviations_and_cas_prefix_resolve(query, cas):
         ("DIPA", ("diisopropanolamine", "diisopropylamine")),
         ("AMP", ("2-amino-2-methyl-1-propanol",)),
         ("TCA", ("1,1,1-trichloroethane", "trichloroacetic acid")),
+        ("DCE", ("1,2-dichloroethane", "1,1-dichloroethene")),  # process vs. remediation usage
+        ("NBA", ("n-butanol", "n-butyl acetate")),
+        ("TBA", ("tert-butanol", "tert-butylamine")),
     ],
 )
 def test_abbreviation_with_several_meanings_is_refused_naming_them(query, words):
@@ -232,3 +246,9 @@ def test_hand_built_species_works_with_every_liquid_method():
         assert 1e-10 < D < 5e-9
     D = mt.liquid_diffusivity(s, "toluene", 298.15, method="tyn-calus")
     assert 1e-10 < D < 1e-8
+
+
+def test_a_condensed_formula_of_several_isomers_warns_like_its_molecular_formula():
+    with pytest.warns(AmbiguousSpeciesWarning, match="C3H7OH") as rec:
+        mt.species("C3H7OH")
+    assert "isopropanol" in str(rec[0].message) or "1-propanol" in str(rec[0].message)
