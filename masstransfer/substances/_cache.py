@@ -34,7 +34,7 @@ from .._version import __version__
 __all__ = ["cache_directory", "load_curves", "store_curves"]
 
 #: Bumped whenever the stored layout or the fitting changes.
-FORMAT = 4
+FORMAT = 6
 
 
 def _versions() -> str:

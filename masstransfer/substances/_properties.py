@@ -30,6 +30,7 @@ from __future__ import annotations
 
 import bisect
 import functools
+import itertools
 import math
 from collections.abc import Callable, Mapping, Sequence
 from dataclasses import dataclass
@@ -364,6 +365,8 @@ def _thermo_curve(
     T_high: float,
     core: tuple[float, float],
     extend: bool = False,
+    join_rtol: float | None = None,
+    direction: int = 0,
 ) -> PropertyCurve:
     """Fit the best of thermo's methods for ``prop`` over [T_low, T_high].
 
@@ -428,7 +431,8 @@ def _thermo_curve(
             return curve
         if curve.T_min > T_low + _MIN_GAIN or curve.T_max < T_high - _MIN_GAIN:
             ranked = [(n, *clipped(n), log_model(n)) for n in methods if n != m]
-            curve = _extended(curve, log_model(m), ranked, T_low, T_high)
+            rtol = JOIN_RTOL if join_rtol is None else join_rtol
+            curve = _extended(curve, log_model(m), ranked, T_low, T_high, rtol, direction)
         if curve.T_min <= c_lo and c_hi <= curve.T_max:
             return curve
         if fallback is None:
@@ -445,6 +449,9 @@ def _thermo_curve(
 #: several per cent near the lower ends of their ranges (below about 1 kPa), which is where the
 #: joins fall; a method differing by more than this is taken to describe something else.
 JOIN_RTOL = 0.10
+#: Largest difference at a join of two liquid molar-volume methods (the volume changes by about
+#: 0.1 %/K, so a larger step, faded over :data:`JOIN_WINDOW`, would reverse its trend).
+_VOLUME_JOIN_RTOL = 0.02
 #: Width of the overlap over which a join is checked, and of the band beyond the join over
 #: which the difference at the join is faded out [K].
 JOIN_WINDOW = 10.0
@@ -461,12 +468,48 @@ def _fade(t: float) -> float:
 _Part = tuple[float, float, Callable[[float], float]]
 
 
+def _keeps_trend(
+    g: Callable[[float], float],
+    inner: Callable[[float], float],
+    edge: float,
+    width: float,
+    shift: float,
+    downward: bool,
+    direction: int,
+) -> bool:
+    """Whether a join at ``edge`` faded over ``width`` keeps the property rising or falling.
+
+    The log of the joined curve is sampled every 0.25 K through the fade band and 1 K into the
+    curve it joins; every step must go the way ``direction`` says.
+    """
+    n = max(8, math.ceil(width / 0.25))
+    if downward:
+        Ts = [edge - width + width * i / n for i in range(n + 1)] + [edge + 0.5, edge + 1.0]
+    else:
+        Ts = [edge - 1.0, edge - 0.5] + [edge + width * i / n for i in range(n + 1)]
+    try:
+        values = []
+        for T in Ts:
+            inside = (edge < T) if downward else (edge > T)
+            if inside:
+                values.append(inner(T))
+            else:
+                t = (T - (edge - width)) / width if downward else ((edge + width) - T) / width
+                values.append(g(T) + shift * _fade(t))
+    except Exception:  # a model failing to evaluate there: no join
+        return False
+    steps = [b - a for a, b in itertools.pairwise(values)]
+    return all(direction * d >= 0.0 for d in steps)
+
+
 def _extended(
     base: PropertyCurve,
     log_base: Callable[[float], float],
     ranked: list[tuple[str, float, float, Callable[[float], float]]],
     T_low: float,
     T_high: float,
+    rtol: float = JOIN_RTOL,
+    direction: int = 0,
 ) -> PropertyCurve:
     """Carry ``base`` towards ``T_low`` and ``T_high`` with further ranked methods.
 
@@ -483,8 +526,14 @@ def _extended(
     range and its difference at the join.  If the joined curve cannot be
     interpolated, the joins are undone, last first, until it can (at worst
     ``base`` is returned).
+
+    ``rtol`` is the largest difference accepted at a join (at most :data:`JOIN_RTOL`; smaller
+    for a property that changes little with temperature, such as the molar volume). A method
+    whose range extends the curve by less than :data:`JOIN_WINDOW` is not joined (the fade
+    would be steep), and with ``direction`` +1 or -1 (the property rises or falls with
+    temperature) a join whose fade would reverse that trend anywhere is not made.
     """
-    tol = math.log1p(JOIN_RTOL)
+    tol = math.log1p(rtol)
     parts: list[_Part] = [(base.T_min, base.T_max, log_base)]
     notes: list[str] = []
     joins: list[float] = []
@@ -527,6 +576,10 @@ def _extended(
                 except Exception:  # a model failing to evaluate is skipped for the next
                     continue
                 if not all(math.isfinite(d) for d in diffs + probe) or max(abs(d) for d in diffs) > tol:
+                    continue
+                if abs(edge - far) < JOIN_WINDOW:
+                    continue
+                if direction and not _keeps_trend(g, composite, edge, width, -diffs[0], downward, direction):
                     continue
                 found = (name, lo, hi, g, -diffs[0], width)
                 break
@@ -942,16 +995,30 @@ def _build_liquid_model(sp: Species) -> LiquidModel:
     anchor = _liquid_core(sp)
     return LiquidModel(
         species=sp,
+        # joins: the molar volume changes by about 0.1 %/K, so a join may differ by at most 2 %
+        # (common practice); the volume rises, the viscosity, latent heat fall with T throughout
         molar_volume=_thermo_curve(
-            vl, f"molar volume of {name}", "m^3/mol", T_low, T_high, anchor, extend=True
+            vl,
+            f"molar volume of {name}",
+            "m^3/mol",
+            T_low,
+            T_high,
+            anchor,
+            extend=True,
+            join_rtol=_VOLUME_JOIN_RTOL,
+            direction=1,
         ),
-        mu=_thermo_curve(mu, f"viscosity of {name}", "Pa s", T_low, T_crit, anchor, extend=True),
+        mu=_thermo_curve(
+            mu, f"viscosity of {name}", "Pa s", T_low, T_crit, anchor, extend=True, direction=-1
+        ),
         k=_thermo_curve(k, f"thermal conductivity of {name}", "W/(m K)", T_low, T_crit, anchor, extend=True),
         cp_molar=_thermo_curve(
             cp, f"heat capacity of {name}", "J/(mol K)", T_low, T_high, anchor, extend=True
         ),
-        psat=_optional_curve(vp, f"vapour pressure of {name}", "Pa", T_low, T_crit, anchor),
-        hvap=_optional_curve(hv, f"enthalpy of vaporisation of {name}", "J/mol", T_low, T_high, anchor),
+        psat=_optional_curve(vp, f"vapour pressure of {name}", "Pa", T_low, T_crit, anchor, direction=1),
+        hvap=_optional_curve(
+            hv, f"enthalpy of vaporisation of {name}", "J/mol", T_low, T_high, anchor, direction=-1
+        ),
     )
 
 
@@ -983,10 +1050,16 @@ def _surface_tension(sp: Species) -> PropertyCurve | None:
 
 
 def _optional_curve(
-    prop: Any, quantity: str, unit: str, T_low: float, T_high: float, anchor: tuple[float, float]
+    prop: Any,
+    quantity: str,
+    unit: str,
+    T_low: float,
+    T_high: float,
+    anchor: tuple[float, float],
+    direction: int = 0,
 ) -> PropertyCurve | None:
     try:
-        return _thermo_curve(prop, quantity, unit, T_low, T_high, anchor, extend=True)
+        return _thermo_curve(prop, quantity, unit, T_low, T_high, anchor, extend=True, direction=direction)
     except MissingConstantError:
         return None
 

@@ -239,3 +239,54 @@ def test_a_join_that_spoils_the_fit_is_undone():
     assert (curve.T_min, curve.T_max) == (200.0, 400.0)
     assert "UPPER" not in curve.source
     assert "below 300.00 K method LOWER" in curve.source
+
+
+def _trend_breaks(curve, direction: int, T_lo: float, T_hi: float) -> list[float]:  # type: ignore[no-untyped-def]
+    """Temperatures where ``curve`` steps against ``direction`` (sampled about every 0.1 K)."""
+    import numpy as np
+
+    lo, hi = max(curve.T_min, T_lo), min(curve.T_max, T_hi)
+    if hi <= lo:
+        return []
+    T = np.linspace(lo, hi, max(2, int((hi - lo) / 0.1)))
+    y = np.asarray(curve(T))
+    bad = direction * np.diff(y) < -1e-12 * np.abs(y[:-1])
+    return [float(t) for t in T[:-1][bad]]
+
+
+@pytest.mark.parametrize("name", LIQUIDS)
+def test_joined_curves_keep_the_physical_trend_across_every_join(name):
+    # the molar volume and the vapour pressure rise with temperature, the viscosity and the
+    # latent heat fall, for every liquid of the list from its melting to its normal boiling
+    # point (common practice; water's volume only above its density maximum at 3.98 C); a join
+    # between two methods must not reverse that, however the methods differ
+    model = mt.liquid_model(name)
+    sp = mt.species(name)
+    assert sp.Tb is not None
+    for what, curve, direction in (
+        ("molar volume", model.molar_volume, 1),
+        ("viscosity", model.mu, -1),
+        ("vapour pressure", model.psat, 1),
+        ("latent heat", model.hvap, -1),
+    ):
+        if curve is None or "above" not in curve.source and "below" not in curve.source:
+            continue  # a single method: its own trend is thermo's
+        T_lo = 277.15 if (name == "water" and what == "molar volume") else 0.0
+        breaks = _trend_breaks(curve, direction, T_lo, sp.Tb)
+        assert not breaks, f"{name}: {what} reverses its trend near {breaks[:3]} K ({curve.source})"
+
+
+@pytest.mark.parametrize(
+    ("name", "T_lo", "T_hi"),
+    [
+        # a 6.5 % step in density was faded over 278-288 K here; the join is no longer made and
+        # the curve starts at 288.15 K, where its fit of measured data does
+        ("triethylene glycol", 288.15, 298.15),
+        ("diethylene glycol", 278.15, 288.15),
+    ],
+)
+def test_liquid_density_changes_like_a_liquid_near_room_temperature(name, T_lo, T_hi):
+    # glycols expand by well under 0.1 %/K near room temperature (common practice)
+    rho = mt.liquid_model(name).density
+    change = abs(rho(T_hi) / rho(T_lo) - 1.0) / (T_hi - T_lo)
+    assert change < 2e-3
