@@ -269,7 +269,7 @@ def test_joined_curves_keep_the_physical_trend_across_every_join(name):
         ("vapour pressure", model.psat, 1),
         ("latent heat", model.hvap, -1),
     ):
-        if curve is None or "above" not in curve.source and "below" not in curve.source:
+        if curve is None or ("above" not in curve.source and "below" not in curve.source):
             continue  # a single method: its own trend is thermo's
         T_lo = 277.15 if (name == "water" and what == "molar volume") else 0.0
         breaks = _trend_breaks(curve, direction, T_lo, sp.Tb)
