@@ -64,7 +64,7 @@ _REQUESTED: contextvars.ContextVar[dict[str, str] | None] = contextvars.ContextV
 )
 #: Below this, a temperature given without a unit is more likely degrees Celsius than kelvin [K].
 _LOW_KELVIN = 200.0
-_BARE_LOW_T: contextvars.ContextVar[tuple[float, ...]] = contextvars.ContextVar(
+_BARE_LOW_T: contextvars.ContextVar[tuple[tuple[str, float], ...]] = contextvars.ContextVar(
     "masstransfer_cli_bare_low_T", default=()
 )
 _INSTALL = "values with units need pint: pip install 'masstransfer[units]'"
@@ -78,7 +78,7 @@ def _registry() -> Any:
     return pint.get_application_registry()  # type: ignore[no-untyped-call]
 
 
-def _reader(si_unit: str) -> Callable[[str], float]:
+def _reader(si_unit: str, option: str = "") -> Callable[[str], float]:
     """Build an argparse ``type``: a plain number in ``si_unit``, or a number with any compatible unit."""
 
     def read(text: str) -> float:
@@ -88,7 +88,7 @@ def _reader(si_unit: str) -> Callable[[str], float]:
             pass
         else:
             if si_unit == "K" and value < _LOW_KELVIN:  # kept for the hint if the input is refused
-                _BARE_LOW_T.set((*_BARE_LOW_T.get(), value))
+                _BARE_LOW_T.set((*_BARE_LOW_T.get(), (option, value)))
             return value
         m = _NUMBER.match(text)
         if m is None:
@@ -134,7 +134,8 @@ def install(parser: argparse.ArgumentParser) -> None:
         for action in sub._actions:
             unit = _VALUE_OPTIONS.get(action.dest)
             if unit is not None and action.type is float:
-                action.type = _reader(unit)
+                option = action.option_strings[0] if action.option_strings else action.dest
+                action.type = _reader(unit, option)
                 takes_values = True
                 if action.help:
                     action.help += f" (or with a unit, e.g. {_EXAMPLES[unit]})"
@@ -166,10 +167,18 @@ def kelvin_hint() -> str:
     low = _BARE_LOW_T.get()
     if not low:
         return ""
-    t = low[0]
+    return f" (note: {_kelvin_words(*low[0])})"
+
+
+def kelvin_caution() -> str:
+    """Return a caution for an accepted run in which a temperature was a bare number below 200 K."""
+    return "; ".join(_kelvin_words(option, t) for option, t in _BARE_LOW_T.get())
+
+
+def _kelvin_words(option: str, t: float) -> str:
     return (
-        f" (note: -T {t:g} without a unit is read as {t:g} K; for {t:g} degrees Celsius write "
-        f"-T '{t:g} degC' or -T {t + 273.15:g})"
+        f"{option} {t:g} without a unit is read as {t:g} K; for {t:g} degrees Celsius write "
+        f"{option} '{t:g} degC' or {option} {t + 273.15:g}"
     )
 
 

@@ -23,7 +23,7 @@ from typing import Any, NoReturn
 import numpy as np
 
 from . import _cli_column, _cli_humidity, _cli_units
-from .errors import MassTransferError
+from .errors import MassTransferError, UnknownSpeciesError
 
 __all__ = ["main"]
 
@@ -381,6 +381,9 @@ def main(argv: Sequence[str] | None = None) -> int:
         except MassTransferError as exc:
             return _emit_error(exc, as_json)
     notes = list(dict.fromkeys(f"{w.category.__name__}: {w.message}" for w in caught))
+    kelvin = _cli_units.kelvin_caution()
+    if kelvin:
+        notes.append(kelvin)
     if as_json and notes:
         data = json.loads(out)
         if isinstance(data, dict):
@@ -392,7 +395,9 @@ def main(argv: Sequence[str] | None = None) -> int:
 
 def _emit_error(exc: MassTransferError, as_json: bool) -> int:
     """Report a rejected input: one line on stderr, or a JSON object on stdout with ``--json``."""
-    message = _cli_message(str(exc)) + _cli_units.kelvin_hint()
+    message = _cli_message(str(exc))
+    if not isinstance(exc, UnknownSpeciesError):  # a refused value or state, not a name
+        message += _cli_units.kelvin_hint()
     if as_json:
         _emit(json.dumps({"error": {"type": type(exc).__name__, "message": message}}, indent=2), [])
     else:

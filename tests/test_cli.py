@@ -116,3 +116,38 @@ def test_evaporate_reads_units_on_every_physical_option(capsys):
     ]  # fmt: skip
     assert main(units) == 0
     assert json.loads(capsys.readouterr().out) == si
+
+
+def test_the_kelvin_hint_names_the_option_that_was_bare(capsys):
+    argv = ["evaporate", "water", "air", "-T", "298.15", "--dew-point", "10", "--h", "20"]
+    assert main(argv) == 2
+    err = capsys.readouterr().err
+    assert "--dew-point 10 without a unit is read as 10 K" in err
+    assert "-T 298.15 without" not in err
+
+
+def test_an_accepted_bare_low_temperature_is_cautioned(capsys):
+    # a radiant temperature of 20 K is possible, but 20 degrees Celsius is the likelier meaning
+    argv = [
+        "evaporate",
+        "water",
+        "air",
+        "-T",
+        "300",
+        "--rh",
+        "0.5",
+        "--h",
+        "20",
+        "--radiant-temperature",
+        "20",
+    ]
+    assert main(argv) == 0
+    assert "--radiant-temperature '20 degC'" in capsys.readouterr().err
+    assert main([*argv, "--json"]) == 0
+    data = json.loads(capsys.readouterr().out)
+    assert any("--radiant-temperature 20 without a unit" in w for w in data["warnings"])
+
+
+def test_no_kelvin_hint_on_an_unknown_name(capsys):
+    assert main(["diffusivity", "tolune", "air", "-T", "25"]) == 2
+    assert "degC" not in capsys.readouterr().err
