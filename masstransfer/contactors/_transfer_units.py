@@ -14,8 +14,8 @@ from typing import Any, overload
 import numpy as np
 
 from .._typing import ArrayLike, FloatArray, FloatOrArray
-from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, scalar
-from ..errors import InputTypeError, InputValueError, UnknownMethodError
+from .._validation import check_nonnegative, check_positive, check_shapes, finish, guard, scalar, warn_caller
+from ..errors import EnvelopeWarning, InputTypeError, InputValueError, UnknownMethodError
 from ._common import float_array as _arr
 
 __all__ = [
@@ -374,6 +374,9 @@ def _inert_log_mean(y: float, ystar: float) -> float:
 
 #: Below this driving force at the top a double has lost its full precision (the smallest normal).
 _TINY = float(np.finfo(float).tiny)
+#: Smallest driving force at the top, relative to y_out, that double precision resolves to
+#: about eight digits (y_out - y* loses the digits y_out and y* share).
+_RESOLVED = 1e-8
 
 
 def _top_force(driving: Callable[[float], float], yo: float, yi: float) -> float:
@@ -383,6 +386,18 @@ def _top_force(driving: Callable[[float], float], yo: float, yi: float) -> float
     close to a very small y_out is seen as well as one in the body of the column.
     """
     d0 = driving(yo)
+    if d0 <= 0.0:
+        raise InputValueError(
+            f"y_out={yo!r} is not above y*={yo - d0!r}, the gas in equilibrium with the entering "
+            "liquid: the column would need an infinite height; ask for a higher y_out or feed a "
+            "cleaner liquid"
+        )
+    if d0 < _RESOLVED * yo:
+        raise InputValueError(
+            f"y_out={yo!r} lies within a relative {d0 / yo:.2g} of y*={yo - d0!r}, the gas in "
+            "equilibrium with the entering liquid, so the driving force at the top cannot be "
+            f"resolved in double precision; ask for y_out at least {_RESOLVED:g} (relative) above y*"
+        )
     span = yi - yo
     near_top = yo + np.geomspace(max(d0, _TINY), span + max(d0, _TINY), 201) - max(d0, _TINY)
     grid = np.unique(np.concatenate([np.linspace(yo, yi, 201), np.clip(near_top, yo, yi)]))
@@ -415,8 +430,16 @@ def _quad_from_top(integrand: Callable[[float], float], yo: float, yi: float, d0
         w = math.exp(u)
         return w * integrand(yo + (w - d0))
 
-    value, _ = quad(in_log, math.log(d0), math.log(yi - yo + d0), epsabs=0.0, epsrel=1e-11, limit=200)
-    return float(value)
+    out = quad(
+        in_log, math.log(d0), math.log(yi - yo + d0), epsabs=0.0, epsrel=1e-11, limit=200, full_output=1
+    )
+    if len(out) > 3:  # quad's own warning, returned instead of issued: say it in the library's words
+        warn_caller(
+            f"transfer units by quadrature reached a relative error of about "
+            f"{abs(out[1] / out[0]) if out[0] else math.inf:.2g}, not 1e-11 ({out[3].splitlines()[0]})",
+            EnvelopeWarning,
+        )
+    return float(out[0])
 
 
 @guard(check_output=False)
