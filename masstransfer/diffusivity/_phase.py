@@ -103,8 +103,9 @@ def check_vapour(lim: PhaseLimits, T: FloatOrArray, P: FloatOrArray, solute: str
         i = int(np.argmax(condensed.ravel()))
         t, p, ps = float(Ta.ravel()[i]), float(Pa.ravel()[i]), float(psat.ravel()[i])
         raise OutOfRangeError(
-            f"medium {lim.name!r} is not a vapour at T={t:g} K and P={p:g} Pa (its vapour pressure "
-            f"there is about {ps:.3g} Pa, below P), so a gas-phase diffusivity does not apply; for "
+            f"medium {lim.name!r} is not a vapour at T={t:g} K and P={p:g} Pa (its vapour pressure, "
+            f"estimated from its boiling and critical points, is roughly {ps:.2g} Pa there, below P), "
+            "so a gas-phase diffusivity does not apply; for "
             f"{solute!r} dissolved in liquid {lim.name!r} use masstransfer.liquid_diffusivity, or "
             "raise T or lower P for the vapour"
         )
@@ -134,8 +135,9 @@ def check_liquid(lim: PhaseLimits, T: FloatOrArray, P: FloatOrArray, solute: str
         i = int(np.argmax(boiling.ravel()))
         t, p, ps = float(Ta.ravel()[i]), float(Pa.ravel()[i]), float(psat.ravel()[i])
         raise OutOfRangeError(
-            f"solvent {lim.name!r} boils at T={t:g} K and P={p:g} Pa (its vapour pressure there is "
-            f"about {ps:.3g} Pa), so a liquid diffusivity does not apply; pass the system pressure "
+            f"solvent {lim.name!r} boils at T={t:g} K and P={p:g} Pa (its vapour pressure, estimated "
+            f"from its boiling and critical points, is roughly {ps:.2g} Pa there), so a liquid "
+            "diffusivity does not apply; pass the system pressure "
             f"P= if the liquid is held under pressure, or use masstransfer.gas_diffusivity for "
             f"{solute!r} in {lim.name!r} vapour"
         )
