@@ -64,13 +64,17 @@ _METHODS = list(_ROW_LIMIT)
 @pytest.mark.parametrize("method", _METHODS)
 @pytest.mark.parametrize(("solute", "solvent", "T", "measured", "group", "source"), LIQUID_SYSTEMS, ids=_IDS)
 def test_against_measured_systems(method, solute, solvent, T, measured, group, source):
-    D = mt.liquid_diffusivity(solute, solvent, T, method=method)
     limit = _ROW_LIMIT[method]
-    if solute in _ACIDS and solvent != "water":
-        limit = _ACID_ROW_LIMIT.get(method, limit)
+    if solute in _ACIDS and solvent != "water" and method in _ACID_ROW_LIMIT:
+        limit = _ACID_ROW_LIMIT[method]
+        with pytest.warns(mt.errors.EnvelopeWarning, match="carboxylic acid"):  # the user is told
+            D = mt.liquid_diffusivity(solute, solvent, T, method=method)
+    else:
+        D = mt.liquid_diffusivity(solute, solvent, T, method=method)
     assert pytest.approx(measured, rel=limit) == D, source
 
 
+@pytest.mark.filterwarnings("ignore:wilke-chang for .*carboxylic acid:masstransfer.errors.EnvelopeWarning")
 @pytest.mark.parametrize("method", _METHODS)
 def test_average_absolute_deviation(method):
     dev = [abs(mt.liquid_diffusivity(a, b, T, method=method) / D - 1) for a, b, T, D, *_ in LIQUID_SYSTEMS]
@@ -93,6 +97,7 @@ _SET_AAD_LIMIT = {
 }
 
 
+@pytest.mark.filterwarnings("ignore:wilke-chang for .*carboxylic acid:masstransfer.errors.EnvelopeWarning")
 @pytest.mark.parametrize(
     ("method", "group"), list(_SET_AAD_LIMIT), ids=[f"{m}-{g}" for m, g in _SET_AAD_LIMIT]
 )
