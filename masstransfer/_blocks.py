@@ -20,15 +20,17 @@ from typing import Any, TypeVar
 
 import numpy as np
 
-from ._frozen import adopting
+from ._frozen import adopting, transient
 from ._typing import FloatOrArray
 from ._validation import warn_caller
 
 __all__ = ["BLOCK", "blocked_shape", "blockwise"]
 
-#: States per block: 65536 float64 values are 512 kB per array; the arrays a chain keeps alive
-#: at once stay within the last-level cache (blocks of 16384 to 65536 states measured alike).
-BLOCK = 65536
+#: States per block: 16000 float64 values are 125 kB per array, so each temporary of a block stays
+#: below glibc's default mmap threshold (128 KiB) and is reused from the heap instead of being mapped and
+#: faulted in afresh, and the dozen a chain keeps alive at once fit in the second-level cache
+#: (measured against 8192, 16384, 32768 and 65536 states: see benchmarks/results.md).
+BLOCK = 16000
 
 _R = TypeVar("_R")
 
@@ -69,7 +71,7 @@ def blockwise(call: Callable[..., _R], arrays: dict[str, FloatOrArray], shape: t
             order="C",
             buffersize=BLOCK,
         )
-        with it:
+        with it, transient():  # block results are read here and dropped: no copies of their arrays
             for chunk in it:
                 n = chunk[0].shape[0]
                 result = call(**dict(zip(names, chunk, strict=True)), **fixed)

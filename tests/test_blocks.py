@@ -107,3 +107,30 @@ def test_adopting_leaves_other_arrays_copied():
     assert theirs.flags.writeable
     fresh = np.arange(2.0)
     assert freeze(fresh) is not fresh  # outside the block, every array is copied
+
+
+def test_transient_results_take_arrays_read_only_without_copies():
+    from masstransfer._frozen import freeze, transient
+
+    a = np.arange(4.0)
+    with transient():
+        assert freeze(a) is a  # a block's result: read here, dropped before the block ends
+        assert freeze(a[1:]).base is a
+    assert not a.flags.writeable  # read-only in place: a later in-place change fails loudly
+    with pytest.raises(ValueError, match="read-only"):
+        a[0] = 1.0
+    b = np.arange(2.0)
+    assert freeze(b) is not b  # outside the block, every array is copied again
+
+
+def test_blocked_result_shares_nothing_with_its_block_results():
+    n = 2 * _blocks.BLOCK + 5
+    h, T = np.full(n, 25.0), np.linspace(300.0, 330.0, n)
+    r = mt.mass_transfer_from_heat(h, "water", "air", T)
+    owned = [getattr(r, f) for f in ("k_c", "rho", "cp", "k", "mu", "D", "Pr", "Sc", "Le", "h", "T")]
+    for i, x in enumerate(owned):
+        assert x.base is None
+        assert not x.flags.writeable
+        assert not any(np.shares_memory(x, y) for y in owned[i + 1 :])
+        assert not np.shares_memory(x, h)
+        assert not np.shares_memory(x, T)
