@@ -554,7 +554,7 @@ def per_state_costs(max_states: float) -> dict[str, tuple[list[int], list[float]
     small = [n for n in sizes if n <= 10**7]
     out: dict[str, tuple[list[int], list[float]]] = {}
     for label, fn in _series().items():
-        data = {n: (*_names_in(n), np.linspace(0.5, 0.8, n)) for n in small}
+        data = {n: (*_names_in(n), np.linspace(0.6, 0.8, n)) for n in small}
         for n in small:
             fn(*data[n])  # warm up
         costs = dict.fromkeys(sizes, float("inf"))
@@ -564,7 +564,7 @@ def per_state_costs(max_states: float) -> dict[str, tuple[list[int], list[float]
                 costs[n] = min(costs[n], best(lambda fn=fn, a=data[n]: fn(*a), reps, repeat=1) / n)
         del data
         for n in sizes[len(small) :]:
-            args = (*_names_in(n), np.linspace(0.5, 0.8, n))
+            args = (*_names_in(n), np.linspace(0.6, 0.8, n))
             costs[n] = best(lambda fn=fn, a=args: fn(*a), 1, repeat=2) / n
             del args
         out[label] = (sizes, [costs[n] for n in sizes])
@@ -572,12 +572,68 @@ def per_state_costs(max_states: float) -> dict[str, tuple[list[int], list[float]
     return out
 
 
+#: glibc's allocator told to keep freed memory for reuse instead of returning it to the kernel
+#: (no mmap for large arrays, no trimming of the heap): fresh result arrays then reuse pages
+#: already faulted in by earlier calls.
+KEPT_MEMORY = {"MALLOC_MMAP_MAX_": "0", "MALLOC_TRIM_THRESHOLD_": str(1 << 40)}
+
+
+def per_state_costs_in(env: dict[str, str], max_states: float) -> dict[str, tuple[list[int], list[float]]]:
+    """:func:`per_state_costs` measured in a fresh process with ``env`` added to its environment."""
+    import json
+
+    out = subprocess.run(
+        [sys.executable, __file__, "decades", repr(max_states)],
+        env={**os.environ, **env},
+        capture_output=True,
+        text=True,
+        check=True,
+    ).stdout
+    data = json.loads(out.strip().splitlines()[-1])
+    return {label: (sizes, costs) for label, (sizes, costs) in data.items()}
+
+
+def first_touch_cost(n: int = 10**7, repeat: int = 7) -> tuple[float, float]:
+    """Cost per float64 element [s] of filling a freshly allocated array, and of refilling one in use."""
+    kept = np.empty(n)
+    kept.fill(0.0)
+
+    def fresh() -> None:
+        a = np.empty(n)
+        a.fill(1.0)
+
+    def again() -> None:
+        kept.fill(1.0)
+
+    return best(fresh, 1, repeat) / n, best(again, 1, repeat) / n
+
+
+def block_size_costs(
+    n: int = 10**6, sizes: tuple[int, ...] = (8192, 16000, 32768, 65536)
+) -> dict[int, float]:
+    """Cost per state [s] of the names-in chain on ``n`` states for each block length, alternated."""
+    from masstransfer import _blocks
+
+    default = _blocks.BLOCK
+    h, T = _names_in(n)
+    costs = dict.fromkeys(sizes, float("inf"))
+    try:
+        for _ in range(5):
+            for b in sizes:
+                _blocks.BLOCK = b
+                t = best(lambda: mt.mass_transfer_from_heat(h, "water", "air", T), 1, 1)
+                costs[b] = min(costs[b], t / n)
+    finally:
+        _blocks.BLOCK = default
+    return costs
+
+
 def peak_memory_ratio(n: int, label: str = "names in: mass_transfer_from_heat (water in air)") -> float:
     """Peak memory of one call on ``n`` states over its inputs and outputs [bytes/bytes], numpy's count."""
     import tracemalloc
 
     fn = _series()[label]
-    args = (*_names_in(n), np.linspace(0.5, 0.8, n))
+    args = (*_names_in(n), np.linspace(0.6, 0.8, n))
     fn(*(a[:10] for a in args))
     tracemalloc.start()
     r = fn(*args)
@@ -589,7 +645,11 @@ def peak_memory_ratio(n: int, label: str = "names in: mass_transfer_from_heat (w
     return peak / (sum(args[i].nbytes for i in used) + produced)
 
 
-def scaling_plot(path: Path, costs: dict[str, tuple[list[int], list[float]]] | None = None) -> None:
+def scaling_plot(
+    path: Path,
+    costs: dict[str, tuple[list[int], list[float]]] | None = None,
+    kept: dict[str, tuple[list[int], list[float]]] | None = None,
+) -> None:
     """Time per call against size (10 to 10^7), and cost per state from 10^4 up (names in, numbers in)."""
     import matplotlib
 
@@ -620,9 +680,18 @@ def scaling_plot(path: Path, costs: dict[str, tuple[list[int], list[float]]] | N
     ax.set_ylabel("time per call [s]")
     ax.set_title(f"masstransfer scaling, {datetime.date.today().isoformat()}, {platform.machine()}")
     ax.legend(fontsize=8)
-    for label, (n_states, per_state) in (costs or {}).items():
-        ref = per_state[n_states.index(10**6)] if 10**6 in n_states else per_state[0]
-        ax2.semilogx(n_states, np.asarray(per_state) / ref, marker="o", ms=3, label=label)
+    for style, suffix, table in (("-", "", costs), ("--", ", allocator keeping freed memory", kept)):
+        for i, (label, (n_states, per_state)) in enumerate((table or {}).items()):
+            ref = per_state[n_states.index(10**6)] if 10**6 in n_states else per_state[0]
+            ax2.semilogx(
+                n_states,
+                np.asarray(per_state) / ref,
+                style,
+                color=f"C{i}",
+                marker="o",
+                ms=3,
+                label=label + suffix,
+            )
     ax2.axhspan(1 / 1.3, 1.3, color="0.9", label="within 1.3x of the 10^6 value")
     ax2.set_ylim(0.0, 2.0)
     ax2.set_xlabel("states per call (array length)")
@@ -634,6 +703,11 @@ def scaling_plot(path: Path, costs: dict[str, tuple[list[int], list[float]]] | N
 
 
 def main() -> None:
+    if sys.argv[1:2] == ["decades"]:  # one process's decade costs, as JSON (see per_state_costs_in)
+        import json
+
+        print(json.dumps(per_state_costs(float(sys.argv[2]))))
+        return
     if sys.argv[1:] == ["cold-start"]:  # only the fresh-process rows; results.md is left alone
         for name, ours, base, base_name in bench_cold_start():
             print(f"| {name} | {ours:.3g} s | {base_name} | {base:.3g} s | {ours / base:.3g} |")
@@ -668,22 +742,45 @@ def main() -> None:
             f"| {name} | {ours * 1e6:.3g} µs | {base_name} | {base * 1e6:.3g} µs | {ours / base:.3g} |"
         )
     max_states = float(os.environ.get("MASSTRANSFER_BENCH_MAX_STATES", "1e8"))
-    costs = per_state_costs(max_states)
+    costs = per_state_costs_in({}, max_states)
+    kept = per_state_costs_in(KEPT_MEMORY, max_states)
     sizes = next(iter(costs.values()))[0]
     lines += [
         "",
-        "Cost per state at each decade from 10^4 states (best of alternating batches; the right panel of",
-        "`scaling.png`), and in brackets its ratio to the cost per state at 10^6 states:",
+        "Cost per state at each decade from 10^4 states (best of alternating batches, each set in a fresh",
+        "process; the right panel of `scaling.png`), and in brackets its ratio to the cost per state at",
+        "10^6 states. First with the allocator as it comes, then with glibc told to keep freed memory",
+        "(`" + " ".join(f"{k}={v}" for k, v in KEPT_MEMORY.items()) + "`):",
         "",
-        "| call | "
+        "| call | allocator | "
         + " | ".join(f"10^{round(np.log10(n))} states" for n in sizes)
         + " | largest / smallest |",
-        "|---|" + "---|" * (len(sizes) + 1),
+        "|---|---|" + "---|" * (len(sizes) + 1),
     ]
-    for label, (_, per_state) in costs.items():
-        ref = per_state[sizes.index(10**6)]
-        cells = " | ".join(f"{c * 1e9:.0f} ns ({c / ref:.2f})" for c in per_state)
-        lines.append(f"| {label} | {cells} | {max(per_state) / min(per_state):.2f} |")
+    for label in costs:
+        for name, table in (("as it comes", costs), ("keeps freed memory", kept)):
+            per_state = table[label][1]
+            ref = per_state[sizes.index(10**6)]
+            cells = " | ".join(f"{c * 1e9:.0f} ns ({c / ref:.2f})" for c in per_state)
+            lines.append(f"| {label} | {name} | {cells} | {max(per_state) / min(per_state):.2f} |")
+    fresh, again = first_touch_cost()
+    blocks = block_size_costs()
+    lines += [
+        "",
+        f"Filling a freshly allocated array of 10^7 float64 values costs {fresh * 1e9:.2f} ns per value on",
+        f"this machine, refilling one already in use {again * 1e9:.2f} ns: the kernel maps and zeroes each",
+        "new page on first touch. The names-in chain returns thirteen arrays of the input's length",
+        "(the coefficients, the properties, the groups, and copies of h and T), so every state costs",
+        f"about {13 * (fresh - again) * 1e9:.0f} ns of first touches whenever those arrays come from fresh",
+        "pages, as glibc's allocator as it comes gives large arrays (always above 32 MiB, often from",
+        "128 KiB up). Any numpy code that returns the same arrays pays the same.",
+        "",
+        "Cost per state of the names-in chain on 10^6 states by block length (`masstransfer._blocks.BLOCK`):",
+        "",
+        "| block length | " + " | ".join(str(b) for b in blocks) + " |",
+        "|---|" + "---|" * len(blocks),
+        "| cost per state | " + " | ".join(f"{c * 1e9:.0f} ns" for c in blocks.values()) + " |",
+    ]
     memory = [(label, n, peak_memory_ratio(n, label)) for label in _series() for n in (10**6, sizes[-1])]
     lines += [
         "",
@@ -697,7 +794,7 @@ def main() -> None:
     text = "\n".join(lines)
     print(text)
     Path(__file__).with_name("results.md").write_text(text + "\n", encoding="utf-8")
-    scaling_plot(Path(__file__).with_name("scaling.png"), costs)
+    scaling_plot(Path(__file__).with_name("scaling.png"), costs, kept)
     print("wrote benchmarks/results.md and benchmarks/scaling.png")
 
 
