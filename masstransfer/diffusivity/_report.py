@@ -114,7 +114,8 @@ class DiffusivityReport(FrozenResult):
         ]
         for who, consts in self.constants.items():
             for name, (val, src) in consts.items():
-                lines.append(f"  {who}.{name} = {val!r} ({src})")
+                shown_val = f"{val:.6g}" if isinstance(val, float) else repr(val)
+                lines.append(f"  {who}.{name} = {shown_val} ({src})")
         lines += [f"note: {n}" for n in self.notes]
         lines += [f"warning: {w}" for w in self.warnings]
         lines.append("An estimate: check safety-relevant designs against measured data.")
