@@ -24,8 +24,13 @@ Rows left out on purpose:
   measured for squalane at 296 K (Kowert 2011, abstract), so the rows would test the property
   model, not the diffusivity methods.
 
-The viscous-solvent set is small: one row is all that could be read from a source at hand
-(water in 1-octanol, 7.3 mPa s).  Glycols, glycerol and heavier alcohols are still missing.
+The viscous-solvent set is small: three rows could be read from a source at hand, water in
+1-octanol (7.3 mPa s), oxygen in 1,2-propanediol (about 49 mPa s at 295.65 K) and water in glycerol
+(about 1000 mPa s).  The last two lie beyond the 20 mPa s up to which the correlations were
+fitted, where they warn.  Ethylene glycol and the other glycols below that limit, and heavier
+alcohols, are still missing.  Near misses, not used: oxygen in glycerol-water up to 92.5 % by mass
+glycerol (Jordan et al., J. Am. Chem. Soc. 1956, as transcribed in the repository named at NOGAMI
+below) is not a pure solvent; solutes in squalane are left out for the reason above.
 """
 
 from __future__ import annotations
@@ -236,6 +241,19 @@ LB = "Winkelmann, Landolt-Boernstein IV/15B2 (2018)"
 #: n-alcohols by single-microdroplet dissolution.  The abstract gives no temperature; the
 #: measurements were made at room temperature, entered here as 298.15 K (from memory).
 SU = "Su et al., J. Chem. Phys. 132, 044506 (2010), abstract; T 298 K (from memory)"
+#: D'Errico, Ortona, Capuano & Vitagliano, J. Chem. Eng. Data 49, 1665 (2004): water + glycerol at
+#: 25 C by Taylor dispersion and Gouy interferometry; the value for water in (pure) glycerol,
+#: 1.4e-11 m^2/s (two figures), read as quoted with that paper's DOI in the public repository
+#: soeeol/SPIV-PLIF, file analysis/a_diffusivity_solubility.m (the paper's own table was not
+#: read).  The property layer gives glycerol 1013 mPa s at 298.15 K, against about 940 mPa s
+#: measured (from memory): some 7 % of each method's deviation on this row comes from there.
+DERRICO = "D'Errico et al., J. Chem. Eng. Data 49, 1665 (2004), via soeeol/SPIV-PLIF"
+#: Nogami & Kato, Yakugaku Zasshi 82, 120 (1962): oxygen in 1,2-propanediol + water at 22.5 C by
+#: polarography, read as transcribed in the public repository soeeol/SPIV-PLIF, file
+#: fluidprop/fluidprop.m (volume fraction 1.0: 40e-11 m^2/s).  The value at volume fraction
+#: 1.0 is above the one at 0.89 (34e-11), though the viscosity rises, so allow for scatter of the
+#: order of 20 %.
+NOGAMI = "Nogami & Kato, Yakugaku Zasshi 82, 120 (1962), via soeeol/SPIV-PLIF"
 
 LIQUID_SYSTEMS: list[tuple[str, str, float, float, str, str]] = [
     # --- organic solutes in water ---
@@ -338,6 +356,9 @@ LIQUID_SYSTEMS: list[tuple[str, str, float, float, str, str]] = [
     ("methyl ethyl ketone", "ethyl acetate", 303.0, 2.93e-9, "solutes in organic solvents", BENITEZ),
     ("nitrobenzene", "ethyl acetate", 293.0, 2.25e-9, "solutes in organic solvents", BENITEZ),
     ("water", "ethyl acetate", 298.0, 3.20e-9, "solutes in organic solvents", BENITEZ),
-    # --- solutes in viscous solvents (here above 2.5 mPa s) ---
+    # --- solutes in viscous solvents (here above 2.5 mPa s at the row's temperature) ---
     ("water", "1-octanol", 298.15, 0.364e-9, "viscous solvents", SU),
+    # beyond the correlations' 20 mPa s: every method warns (and is far low) on these two
+    ("oxygen", "propylene glycol", 295.65, 4.0e-10, "viscous solvents", NOGAMI),
+    ("water", "glycerol", 298.15, 1.4e-11, "viscous solvents", DERRICO),
 ]

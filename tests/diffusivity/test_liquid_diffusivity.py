@@ -7,6 +7,7 @@ from hypothesis import strategies as st
 from validation_data import LIQUID_SYSTEMS
 
 import masstransfer as mt
+from masstransfer.diffusivity._liquid import VISCOUS_SOLVENT_LIMIT
 
 
 def test_wilke_chang_ethylbenzene_in_water():
@@ -61,10 +62,32 @@ _AAD_LIMIT = {"wilke-chang": 0.22, "hayduk-minhas": 0.16, "tyn-calus": 0.14}
 _METHODS = list(_ROW_LIMIT)
 
 
+def _beyond_range(solvent: str, T: float) -> bool:
+    """Solvent more viscous than the correlations were fitted on (they warn there)."""
+    return bool(mt.liquid_model(solvent).viscosity(T) > VISCOUS_SOLVENT_LIMIT)
+
+
+#: Rows whose solvent lies beyond the 20 mPa s the correlations were fitted on (Poling et al.
+#: 2001, Section 11-10: not for viscous solvents): oxygen in 1,2-propanediol (Nogami & Kato
+#: 1962) and water in glycerol (D'Errico et al. 2004).  Every method is 78-89 % low on them:
+#: its D ~ 1/viscosity overstates the effect of viscosity on a small solute, whose measured
+#: diffusivity falls more slowly (about as viscosity^-2/3, Hiss & Cussler, AIChE J. 19(4), 1973,
+#: doi 10.1002/aic.690190404, abstract).  That is the finding, not a tolerance: the test
+#: asserts that the user is warned, that the estimate is low, and that it stays within a factor
+#: of 10 (the band the rows show now), so a change that moves these rows is seen.  The rows stay
+#: in the README tables.
+_BEYOND_RANGE_FACTOR = 10.0
+
+
 @pytest.mark.parametrize("method", _METHODS)
 @pytest.mark.parametrize(("solute", "solvent", "T", "measured", "group", "source"), LIQUID_SYSTEMS, ids=_IDS)
 def test_against_measured_systems(method, solute, solvent, T, measured, group, source):
     limit = _ROW_LIMIT[method]
+    if _beyond_range(solvent, T):
+        with pytest.warns(mt.errors.EnvelopeWarning, match="viscous"):  # the user is told
+            D = mt.liquid_diffusivity(solute, solvent, T, method=method)
+        assert measured / _BEYOND_RANGE_FACTOR < D < measured, source
+        return
     if solute in _ACIDS and solvent != "water" and method in _ACID_ROW_LIMIT:
         limit = _ACID_ROW_LIMIT[method]
         with pytest.warns(mt.errors.EnvelopeWarning, match="carboxylic acid"):  # the user is told
@@ -77,15 +100,20 @@ def test_against_measured_systems(method, solute, solvent, T, measured, group, s
 @pytest.mark.filterwarnings("ignore:wilke-chang for .*carboxylic acid:masstransfer.errors.EnvelopeWarning")
 @pytest.mark.parametrize("method", _METHODS)
 def test_average_absolute_deviation(method):
-    dev = [abs(mt.liquid_diffusivity(a, b, T, method=method) / D - 1) for a, b, T, D, *_ in LIQUID_SYSTEMS]
+    # over the rows inside the correlations' viscosity range; the two beyond it are held above
+    dev = [
+        abs(mt.liquid_diffusivity(a, b, T, method=method) / D - 1)
+        for a, b, T, D, *_ in LIQUID_SYSTEMS
+        if not _beyond_range(b, T)
+    ]
     assert len(dev) >= 25
     assert np.mean(dev) < _AAD_LIMIT[method]
 
 
 #: Per-set averages where the correlations are meant to work (organic solutes, no dissolved
 #: gases): Poling et al. (2001) Section 11-9 report average errors of about 10-20 % for these
-#: correlations on such systems (from memory).  Dissolved gases and the one-row viscous-solvent set
-#: have no set limit: the row limits above hold them.  Wilke-Chang is at the top of that range
+#: correlations on such systems (from memory).  Dissolved gases and the three-row viscous-solvent
+#: set have no set limit: the row limits above hold them.  Wilke-Chang is at the top of that range
 #: in organic solvents (20 %: 27-48 % high on five of the six chloroform rows of Benitez Table A.2).
 _SET_AAD_LIMIT = {
     ("wilke-chang", "organic solutes in water"): 0.15,
@@ -112,11 +140,16 @@ def test_average_absolute_deviation_per_set(method, group):
 
 
 def test_viscous_solvent_set_is_present():
-    # the set the README reports on: a solvent of at least 2.5 mPa s at the row's temperature
+    # the set the README reports on: a solvent of at least 2.5 mPa s at the row's temperature,
+    # both within the correlations' range (below 20 mPa s) and beyond it
     rows = [(b, T) for _, b, T, _, g, _ in LIQUID_SYSTEMS if g == "viscous solvents"]
-    assert rows
+    assert len(rows) >= 3
     for solvent, T in rows:
         assert mt.liquid_model(solvent).viscosity(T) > 2.5e-3
+    assert any(_beyond_range(b, T) for b, T in rows)
+    assert not all(_beyond_range(b, T) for b, T in rows)
+    # no row outside this set reaches the viscous range
+    assert not any(_beyond_range(b, T) for _, b, T, _, g, _ in LIQUID_SYSTEMS if g != "viscous solvents")
 
 
 def test_special_cases_are_applied_and_reported():
