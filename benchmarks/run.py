@@ -543,12 +543,18 @@ def _series() -> dict[str, object]:
     }
 
 
+#: Cost per state [s] of the first call at the largest size, per series (see per_state_costs).
+FIRST_CALL: dict[str, float] = {}
+
+
 def per_state_costs(max_states: float) -> dict[str, tuple[list[int], list[float]]]:
     """Cost per state [s] at each decade from 10^4 states up, for the names-in chain and two numbers-in calls.
 
     Up to 10^7 states every size of a series is timed in alternation with the others, seven
     rounds of batches of about three million states each, and the best batch kept: a load
-    spike on the shared machine then falls on all sizes alike.  Larger sizes take the best of two calls.
+    spike on the shared machine then falls on all sizes alike.  Larger sizes take the best of
+    three calls; the first of them, which faults in memory the process has not used before, is
+    kept in :data:`FIRST_CALL`.
     """
     sizes = [10**e for e in range(4, round(np.log10(max_states)) + 1)]
     small = [n for n in sizes if n <= 10**7]
@@ -565,7 +571,9 @@ def per_state_costs(max_states: float) -> dict[str, tuple[list[int], list[float]
         del data
         for n in sizes[len(small) :]:
             args = (*_names_in(n), np.linspace(0.6, 0.8, n))
-            costs[n] = best(lambda fn=fn, a=args: fn(*a), 1, repeat=2) / n
+            calls = [best(lambda fn=fn, a=args: fn(*a), 1, repeat=1) / n for _ in range(3)]
+            costs[n] = min(calls)
+            FIRST_CALL[label] = calls[0]
             del args
         out[label] = (sizes, [costs[n] for n in sizes])
         print(label, [f"{c * 1e9:.0f} ns" for c in out[label][1]], flush=True)
@@ -578,8 +586,10 @@ def per_state_costs(max_states: float) -> dict[str, tuple[list[int], list[float]
 KEPT_MEMORY = {"MALLOC_MMAP_MAX_": "0", "MALLOC_TRIM_THRESHOLD_": str(1 << 40)}
 
 
-def per_state_costs_in(env: dict[str, str], max_states: float) -> dict[str, tuple[list[int], list[float]]]:
-    """:func:`per_state_costs` measured in a fresh process with ``env`` added to its environment."""
+def per_state_costs_in(
+    env: dict[str, str], max_states: float
+) -> tuple[dict[str, tuple[list[int], list[float]]], dict[str, float]]:
+    """:func:`per_state_costs` and :data:`FIRST_CALL`, measured in a fresh process with ``env`` added."""
     import json
 
     out = subprocess.run(
@@ -590,11 +600,17 @@ def per_state_costs_in(env: dict[str, str], max_states: float) -> dict[str, tupl
         check=True,
     ).stdout
     data = json.loads(out.strip().splitlines()[-1])
-    return {label: (sizes, costs) for label, (sizes, costs) in data.items()}
+    costs = {label: (sizes, per_state) for label, (sizes, per_state) in data["costs"].items()}
+    return costs, data["first"]
 
 
-def first_touch_cost(n: int = 10**7, repeat: int = 7) -> tuple[float, float]:
-    """Cost per float64 element [s] of filling a freshly allocated array, and of refilling one in use."""
+def first_touch_cost(n: int = 10**7, repeat: int = 7) -> tuple[float, float, float]:
+    """Cost per float64 value [s] of filling arrays: one in use, a fresh one, thirteen fresh at once.
+
+    The last are thirteen arrays of ``10 * n`` values filled one after another and all kept,
+    as the names-in chain's outputs on ``10 * n`` states are: memory this process, and perhaps
+    this machine, has not touched before.
+    """
     kept = np.empty(n)
     kept.fill(0.0)
 
@@ -605,24 +621,35 @@ def first_touch_cost(n: int = 10**7, repeat: int = 7) -> tuple[float, float]:
     def again() -> None:
         kept.fill(1.0)
 
-    return best(fresh, 1, repeat) / n, best(again, 1, repeat) / n
+    start = timeit.default_timer()
+    held = []
+    for _ in range(13):
+        a = np.empty(10 * n)
+        a.fill(1.0)
+        held.append(a)
+    many = (timeit.default_timer() - start) / (13 * 10 * n)
+    del held
+    return best(again, 1, repeat) / n, best(fresh, 1, repeat) / n, many
 
 
 def block_size_costs(
-    n: int = 10**6, sizes: tuple[int, ...] = (8192, 16000, 32768, 65536)
-) -> dict[int, float]:
-    """Cost per state [s] of the names-in chain on ``n`` states for each block length, alternated."""
+    sizes: tuple[int, ...] = (8192, 16000, 32768, 65536), states: tuple[int, ...] = (10**5, 10**6, 10**7)
+) -> dict[int, list[float]]:
+    """Cost per state [s] of the names-in chain for each block length at each size, alternated."""
     from masstransfer import _blocks
 
     default = _blocks.BLOCK
-    h, T = _names_in(n)
-    costs = dict.fromkeys(sizes, float("inf"))
+    data = {n: _names_in(n) for n in states}
+    costs = {b: [float("inf")] * len(states) for b in sizes}
     try:
         for _ in range(5):
             for b in sizes:
                 _blocks.BLOCK = b
-                t = best(lambda: mt.mass_transfer_from_heat(h, "water", "air", T), 1, 1)
-                costs[b] = min(costs[b], t / n)
+                for i, n in enumerate(states):
+                    h, T = data[n]
+                    reps = max(1, int(1e6 // n))
+                    t = best(lambda h=h, T=T: mt.mass_transfer_from_heat(h, "water", "air", T), reps, 1)
+                    costs[b][i] = min(costs[b][i], t / n)
     finally:
         _blocks.BLOCK = default
     return costs
@@ -706,7 +733,13 @@ def main() -> None:
     if sys.argv[1:2] == ["decades"]:  # one process's decade costs, as JSON (see per_state_costs_in)
         import json
 
-        print(json.dumps(per_state_costs(float(sys.argv[2]))))
+        costs = per_state_costs(float(sys.argv[2]))
+        print(json.dumps({"costs": costs, "first": FIRST_CALL}))
+        return
+    if sys.argv[1:] == ["blocks"]:  # block lengths compared, as JSON (run in a fresh process)
+        import json
+
+        print(json.dumps({str(b): c for b, c in block_size_costs().items()}))
         return
     if sys.argv[1:] == ["cold-start"]:  # only the fresh-process rows; results.md is left alone
         for name, ours, base, base_name in bench_cold_start():
@@ -742,14 +775,15 @@ def main() -> None:
             f"| {name} | {ours * 1e6:.3g} µs | {base_name} | {base * 1e6:.3g} µs | {ours / base:.3g} |"
         )
     max_states = float(os.environ.get("MASSTRANSFER_BENCH_MAX_STATES", "1e8"))
-    costs = per_state_costs_in({}, max_states)
-    kept = per_state_costs_in(KEPT_MEMORY, max_states)
+    costs, first = per_state_costs_in({}, max_states)
+    kept, kept_first = per_state_costs_in(KEPT_MEMORY, max_states)
     sizes = next(iter(costs.values()))[0]
     lines += [
         "",
-        "Cost per state at each decade from 10^4 states (best of alternating batches, each set in a fresh",
-        "process; the right panel of `scaling.png`), and in brackets its ratio to the cost per state at",
-        "10^6 states. First with the allocator as it comes, then with glibc told to keep freed memory",
+        "Cost per state at each decade from 10^4 states (best of alternating batches up to 10^7 states,",
+        "best of three calls above; each set in a fresh process; the right panel of `scaling.png`), and",
+        "in brackets its ratio to the cost per state at 10^6 states. First with the allocator as it",
+        "comes, then with glibc told to keep freed memory",
         "(`" + " ".join(f"{k}={v}" for k, v in KEPT_MEMORY.items()) + "`):",
         "",
         "| call | allocator | "
@@ -763,23 +797,54 @@ def main() -> None:
             ref = per_state[sizes.index(10**6)]
             cells = " | ".join(f"{c * 1e9:.0f} ns ({c / ref:.2f})" for c in per_state)
             lines.append(f"| {label} | {name} | {cells} | {max(per_state) / min(per_state):.2f} |")
-    fresh, again = first_touch_cost()
-    blocks = block_size_costs()
+    largest = f"10^{round(np.log10(sizes[-1]))}"
     lines += [
         "",
-        f"Filling a freshly allocated array of 10^7 float64 values costs {fresh * 1e9:.2f} ns per value on",
-        f"this machine, refilling one already in use {again * 1e9:.2f} ns: the kernel maps and zeroes each",
-        "new page on first touch. The names-in chain returns thirteen arrays of the input's length",
-        "(the coefficients, the properties, the groups, and copies of h and T), so every state costs",
-        f"about {13 * (fresh - again) * 1e9:.0f} ns of first touches whenever those arrays come from fresh",
-        "pages, as glibc's allocator as it comes gives large arrays (always above 32 MiB, often from",
-        "128 KiB up). Any numpy code that returns the same arrays pays the same.",
+        f"The first of the three calls on {largest} states in each process, which faults in memory the",
+        "process has not used before, cost per state:",
         "",
-        "Cost per state of the names-in chain on 10^6 states by block length (`masstransfer._blocks.BLOCK`):",
+        "| call | allocator as it comes | keeps freed memory |",
+        "|---|---|---|",
+        *(
+            f"| {label} | {first[label] * 1e9:.0f} ns | {kept_first[label] * 1e9:.0f} ns |"
+            for label in costs
+            if label in first and label in kept_first
+        ),
+    ]
+    again, fresh, many = first_touch_cost()
+    import json
+
+    blocks = json.loads(
+        subprocess.run(
+            [sys.executable, __file__, "blocks"], capture_output=True, text=True, check=True
+        ).stdout.splitlines()[-1]
+    )
+    extra = {
+        name: (firsts[label] - table[label][1][-1]) / 13
+        for name, firsts, table in (("as it comes", first, costs), ("keeping freed memory", kept_first, kept))
+        for label in firsts
+        if label.startswith("names in")
+    }
+    lines += [
         "",
-        "| block length | " + " | ".join(str(b) for b in blocks) + " |",
-        "|---|" + "---|" * len(blocks),
-        "| cost per state | " + " | ".join(f"{c * 1e9:.0f} ns" for c in blocks.values()) + " |",
+        "Filling a float64 array already in use costs "
+        f"{again * 1e9:.2f} ns per value on this machine; a freshly",
+        f"allocated array of 10^7 values {fresh * 1e9:.2f} ns (the kernel maps and zeroes each new page on",
+        f"first touch); thirteen fresh arrays of 10^8 values in this process {many * 1e9:.1f} ns. The first",
+        f"names-in call on {largest} states costs more than the best, by "
+        + " and ".join(f"{v * 1e9:.0f} ns ({k})" for k, v in extra.items()),
+        "per value of its thirteen result arrays (the coefficients, the properties, the groups, and",
+        "copies of h and T): memory a process takes for the first time can cost far more than the fill",
+        "above on this virtual machine. glibc's allocator as it comes gives large arrays fresh memory",
+        "(always above 32 MiB, often from 128 KiB up) on every call; told to keep freed memory, it",
+        "reuses what earlier calls faulted in. Any numpy code that returns the same arrays pays the same.",
+        "",
+        "Cost per state of the names-in chain by block length (`masstransfer._blocks.BLOCK`), in a",
+        "fresh process:",
+        "",
+        "| block length | 10^5 states | 10^6 states | 10^7 states |",
+        "|---|---|---|---|",
+        *(f"| {b} | " + " | ".join(f"{c * 1e9:.0f} ns" for c in v) + " |" for b, v in blocks.items()),
     ]
     memory = [(label, n, peak_memory_ratio(n, label)) for label in _series() for n in (10**6, sizes[-1])]
     lines += [
