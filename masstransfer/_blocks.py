@@ -12,6 +12,7 @@ broadcasts the inputs block by block without ever making full-size copies of the
 
 from __future__ import annotations
 
+import contextlib
 import dataclasses
 import math
 import warnings
@@ -71,10 +72,14 @@ def blockwise(call: Callable[..., _R], arrays: dict[str, FloatOrArray], shape: t
             order="C",
             buffersize=BLOCK,
         )
-        with it, transient():  # block results are read here and dropped: no copies of their arrays
+        with it:
             for chunk in it:
                 n = chunk[0].shape[0]
-                result = call(**dict(zip(names, chunk, strict=True)), **fixed)
+                # the first block runs as any call does, so whatever it builds and caches (species,
+                # property curves) is frozen by copy; later block results are read here and
+                # dropped, so their arrays are taken read-only in place, not copied
+                with contextlib.nullcontext() if first is None else transient():
+                    result = call(**dict(zip(names, chunk, strict=True)), **fixed)
                 if first is None:
                     first = result
                 for f in dataclasses.fields(result):  # type: ignore[arg-type]

@@ -134,3 +134,24 @@ def test_blocked_result_shares_nothing_with_its_block_results():
         assert not any(np.shares_memory(x, y) for y in owned[i + 1 :])
         assert not np.shares_memory(x, h)
         assert not np.shares_memory(x, T)
+
+
+def test_first_block_builds_caches_with_copies(monkeypatch):
+    # what a block builds and caches must not be frozen in place: only blocks after the first,
+    # whose caches are warm, run under transient()
+    from masstransfer import _frozen
+
+    seen = []
+    real = _blocks.blockwise
+
+    def spy(call, arrays, shape):
+        def traced(**kw):
+            seen.append(_frozen._TRANSIENT.get())
+            return call(**kw)
+
+        return real(traced, arrays, shape)
+
+    monkeypatch.setattr("masstransfer.surface._analogy.blockwise", spy)
+    n = 3 * _blocks.BLOCK + 3
+    mt.mass_transfer_from_heat(np.full(n, 20.0), "water", "air", np.linspace(300.0, 320.0, n))
+    assert seen == [False, True, True, True]
