@@ -12,7 +12,6 @@ broadcasts the inputs block by block without ever making full-size copies of the
 
 from __future__ import annotations
 
-import contextlib
 import dataclasses
 import math
 import warnings
@@ -21,16 +20,16 @@ from typing import Any, TypeVar
 
 import numpy as np
 
-from ._frozen import adopting, transient
+from ._frozen import adopting
 from ._typing import FloatOrArray
 from ._validation import warn_caller
 
 __all__ = ["BLOCK", "blocked_shape", "blockwise"]
 
-#: States per block: 16000 float64 values are 125 kB per array, so each temporary of a block stays
-#: below glibc's default mmap threshold (128 KiB) and is reused from the heap instead of being mapped and
-#: faulted in afresh, and the dozen a chain keeps alive at once fit in the second-level cache
-#: (measured against 8192, 16384, 32768 and 65536 states: see benchmarks/results.md).
+#: States per block (arrays longer than twice this are evaluated in blocks).  Chosen by
+#: measurement (benchmarks/results.md): 16000 was fastest at 10^5 states, where larger blocks
+#: leave the array unblocked or in two uneven blocks; at 10^6 and 10^7 states 65536 was as fast
+#: or up to 20 % faster in two of three runs.
 BLOCK = 16000
 
 _R = TypeVar("_R")
@@ -75,11 +74,7 @@ def blockwise(call: Callable[..., _R], arrays: dict[str, FloatOrArray], shape: t
         with it:
             for chunk in it:
                 n = chunk[0].shape[0]
-                # the first block runs as any call does, so whatever it builds and caches (species,
-                # property curves) is frozen by copy; later block results are read here and
-                # dropped, so their arrays are taken read-only in place, not copied
-                with contextlib.nullcontext() if first is None else transient():
-                    result = call(**dict(zip(names, chunk, strict=True)), **fixed)
+                result = call(**dict(zip(names, chunk, strict=True)), **fixed)
                 if first is None:
                     first = result
                 for f in dataclasses.fields(result):  # type: ignore[arg-type]

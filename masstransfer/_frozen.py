@@ -23,12 +23,10 @@ from typing import Any, TypeVar
 
 import numpy as np
 
-__all__ = ["FrozenMapping", "FrozenResult", "adopting", "freeze", "transient"]
+__all__ = ["FrozenMapping", "FrozenResult", "adopting", "freeze"]
 
 #: Ids of arrays that :func:`freeze` may take without copying (see :func:`adopting`).
 _ADOPTED: contextvars.ContextVar[frozenset[int]] = contextvars.ContextVar("_ADOPTED", default=frozenset())
-#: True while results are built only to be read and dropped (see :func:`transient`).
-_TRANSIENT: contextvars.ContextVar[bool] = contextvars.ContextVar("_TRANSIENT", default=False)
 
 K = TypeVar("K")
 V = TypeVar("V")
@@ -94,27 +92,10 @@ def adopting(*arrays: np.ndarray[Any, Any]) -> Iterator[None]:
         _ADOPTED.reset(token)
 
 
-@contextlib.contextmanager
-def transient() -> Iterator[None]:
-    """Within the block, :func:`freeze` makes every array read-only in place instead of copying it.
-
-    For results that are read once and dropped before the block ends (each block's result in
-    a blockwise evaluation, whose arrays are written straight into the full-size outputs):
-    the copies would cost more than the arithmetic.  The arrays still become read-only, so a
-    later in-place change to one of them fails loudly rather than altering a result.  Nothing
-    built inside may outlive the block: the final result is frozen again outside it.
-    """
-    token = _TRANSIENT.set(True)
-    try:
-        yield
-    finally:
-        _TRANSIENT.reset(token)
-
-
 def freeze(value: Any) -> Any:
     """Return an immutable equivalent of ``value`` (arrays copied read-only, mappings frozen)."""
     if isinstance(value, np.ndarray):
-        if _TRANSIENT.get() or (id(value) in _ADOPTED.get() and value.base is None):
+        if id(value) in _ADOPTED.get() and value.base is None:
             value.setflags(write=False)
             return value
         out = np.array(value, copy=True)
