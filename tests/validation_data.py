@@ -27,10 +27,11 @@ Rows left out on purpose:
 The viscous-solvent set is small: three rows could be read from a source at hand, water in
 1-octanol (7.3 mPa s), oxygen in 1,2-propanediol (about 49 mPa s at 295.65 K) and water in glycerol
 (about 1000 mPa s).  The last two lie beyond the 20 mPa s up to which the correlations were
-fitted, where they warn.  Ethylene glycol and the other glycols below that limit, and heavier
-alcohols, are still missing.  Near misses, not used: oxygen in glycerol-water up to 92.5 % by mass
-glycerol (Jordan et al., J. Am. Chem. Soc. 1956, as transcribed in the repository named at NOGAMI
-below) is not a pure solvent; solutes in squalane are left out for the reason above.
+fitted, where they warn.  Ethylene glycol (about 16 mPa s at 25 C, from memory), below that
+limit, and heavier alcohols are still missing.  Near misses, not used: oxygen in glycerol-water
+up to 92.5 % by mass glycerol (Jordan et al., J. Am. Chem. Soc. 1956, as transcribed in the
+repository named at NOGAMI below) is not a pure solvent; solutes in squalane are left out for the
+reason above.
 """
 
 from __future__ import annotations
@@ -241,18 +242,20 @@ LB = "Winkelmann, Landolt-Boernstein IV/15B2 (2018)"
 #: n-alcohols by single-microdroplet dissolution.  The abstract gives no temperature; the
 #: measurements were made at room temperature, entered here as 298.15 K (from memory).
 SU = "Su et al., J. Chem. Phys. 132, 044506 (2010), abstract; T 298 K (from memory)"
-#: D'Errico, Ortona, Capuano & Vitagliano, J. Chem. Eng. Data 49, 1665 (2004): water + glycerol at
-#: 25 C by Taylor dispersion and Gouy interferometry; the value for water in (pure) glycerol,
-#: 1.4e-11 m^2/s (two figures), read as quoted with that paper's DOI in the public repository
+#: D'Errico, Ortona, Capuano & Vitagliano, "Diffusion Coefficients for the Binary System
+#: Glycerol + Water at 25 C. A Velocity Correlation Study", J. Chem. Eng. Data 49, 1665 (2004),
+#: doi 10.1021/je049917u: the mutual diffusion coefficient at the glycerol end, 1.4e-11 m^2/s (two
+#: figures), read as quoted with that reference in the public research repository
 #: soeeol/SPIV-PLIF, file analysis/a_diffusivity_solubility.m (the paper's own table was not
 #: read).  The property layer gives glycerol 1013 mPa s at 298.15 K, against about 940 mPa s
 #: measured (from memory): some 7 % of each method's deviation on this row comes from there.
 DERRICO = "D'Errico et al., J. Chem. Eng. Data 49, 1665 (2004), via soeeol/SPIV-PLIF"
 #: Nogami & Kato, Yakugaku Zasshi 82, 120 (1962): oxygen in 1,2-propanediol + water at 22.5 C by
-#: polarography, read as transcribed in the public repository soeeol/SPIV-PLIF, file
-#: fluidprop/fluidprop.m (volume fraction 1.0: 40e-11 m^2/s).  The value at volume fraction
-#: 1.0 is above the one at 0.89 (34e-11), though the viscosity rises, so allow for scatter of the
-#: order of 20 %.
+#: polarography, read as transcribed in the public research repository soeeol/SPIV-PLIF, file
+#: fluidprop/fluidprop.m (volume fraction 1.0: 40e-11 m^2/s).  As transcribed, the value at
+#: volume fraction 1.0 is above the one at 0.89 (34e-11), though the viscosity rises, and that
+#: repository applies a solubility correction to such polarographic values: the row is less
+#: certain than its two figures suggest.
 NOGAMI = "Nogami & Kato, Yakugaku Zasshi 82, 120 (1962), via soeeol/SPIV-PLIF"
 
 LIQUID_SYSTEMS: list[tuple[str, str, float, float, str, str]] = [

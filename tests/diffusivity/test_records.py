@@ -361,3 +361,15 @@ def test_available_methods_infers_a_liquid_solvent():
     assert [m.method for m in mt.diffusivity.available_methods("toluene", "air")] == list(
         mt.diffusivity.GAS_METHODS
     )
+
+
+def test_report_text_shows_constants_to_six_significant_digits():
+    import re
+
+    text = mt.diffusivity_report("acetone", "water", 298.15).summary()
+    constants = [line for line in text.splitlines() if line.startswith("  ") and " = " in line]
+    assert constants
+    for line in constants:
+        value = line.split(" = ", 1)[1].split(" (", 1)[0]
+        digits = re.sub(r"[eE][-+]?\d+$", "", value).replace(".", "").replace("-", "").lstrip("0")
+        assert len(digits) <= 6, line
