@@ -745,6 +745,7 @@ def main() -> None:
         for name, ours, base, base_name in bench_cold_start():
             print(f"| {name} | {ours:.3g} s | {base_name} | {base:.3g} s | {ours / base:.3g} |")
         return
+    load_start = os.getloadavg()  # the machine is shared: its load is part of the result
     rows = [
         bench_array_fuller(),
         bench_scalar_vs_bare(),
@@ -834,10 +835,10 @@ def main() -> None:
         f"names-in call on {largest} states costs more than the best, by "
         + " and ".join(f"{v * 1e9:.0f} ns ({k})" for k, v in extra.items()),
         "per value of its thirteen result arrays (the coefficients, the properties, the groups, and",
-        "copies of h and T): memory a process takes for the first time can cost far more than the fill",
-        "above on this virtual machine. glibc's allocator as it comes gives large arrays fresh memory",
-        "(always above 32 MiB, often from 128 KiB up) on every call; told to keep freed memory, it",
-        "reuses what earlier calls faulted in. Any numpy code that returns the same arrays pays the same.",
+        "copies of h and T), far more than the fills above: what the rest is spent on is not",
+        "established here. glibc's allocator as it comes gives large arrays fresh memory (always above",
+        "32 MiB, often from 128 KiB up) on every call; told to keep freed memory, it reuses what",
+        "earlier calls took.",
         "",
         "Cost per state of the names-in chain by block length (`masstransfer._blocks.BLOCK`), in a",
         "fresh process:",
@@ -855,6 +856,15 @@ def main() -> None:
         "| call | states | peak / (inputs + outputs) |",
         "|---|---|---|",
         *(f"| {label} | 10^{round(np.log10(n))} | {ratio:.2f} |" for label, n, ratio in memory),
+    ]
+    load_end = os.getloadavg()
+    lines += [
+        "",
+        "Load average (1, 5 and 15 minutes) when the run began: "
+        + ", ".join(f"{v:.2f}" for v in load_start)
+        + "; when it ended: "
+        + ", ".join(f"{v:.2f}" for v in load_end)
+        + f" ({os.cpu_count()} cores).",
     ]
     text = "\n".join(lines)
     print(text)
