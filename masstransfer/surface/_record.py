@@ -281,7 +281,7 @@ class Correlation:
         fast = self._fast("heat", inputs)
         if fast is not None:
             return fast
-        return self.evaluate("heat", strict=strict, stacklevel=3, **inputs).value
+        return self._compute("heat", strict, inputs)[2]  # the value alone: no result object to freeze
 
     @guard(check_output=False)
     def sherwood(self, *, strict: bool = False, **inputs: Any) -> FloatOrArray:
@@ -303,7 +303,7 @@ class Correlation:
         fast = self._fast("mass", inputs)
         if fast is not None:
             return fast
-        return self.evaluate("mass", strict=strict, stacklevel=3, **inputs).value
+        return self._compute("mass", strict, inputs)[2]  # the value alone: no result object to freeze
 
     @guard(check_output=False)
     def evaluate(
@@ -328,13 +328,7 @@ class Correlation:
             Value, metadata and any envelope warnings.
 
         """
-        if transport not in ("heat", "mass"):
-            raise InputValueError(f"transport={transport!r} must be 'heat' or 'mass'")
-        values, extremes = self._collect(transport, inputs)
-        messages = self._check_envelope(transport, values, extremes, strict)
-        for msg in messages:
-            warn_caller(msg, EnvelopeWarning)
-        value = finish(np.asarray(self.function(**values), dtype=float))
+        values, messages, value = self._compute(transport, strict, inputs)
         analogy = None
         if self.fitted_on != "both" and self.fitted_on != transport:
             analogy = (
@@ -355,6 +349,18 @@ class Correlation:
         )
 
     # -- helpers -------------------------------------------------------------
+
+    def _compute(
+        self, transport: Kind, strict: bool, inputs: dict[str, Any]
+    ) -> tuple[dict[str, Any], list[str], FloatOrArray]:
+        """Return the inputs as used, the envelope messages (already warned) and the value."""
+        if transport not in ("heat", "mass"):
+            raise InputValueError(f"transport={transport!r} must be 'heat' or 'mass'")
+        values, extremes = self._collect(transport, inputs)
+        messages = self._check_envelope(transport, values, extremes, strict)
+        for msg in messages:
+            warn_caller(msg, EnvelopeWarning)
+        return values, messages, finish(np.asarray(self.function(**values), dtype=float))
 
     @staticmethod
     def _name(key: str, transport: Kind) -> str:
