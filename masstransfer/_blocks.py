@@ -27,9 +27,9 @@ from ._validation import warn_caller
 __all__ = ["BLOCK", "blocked_shape", "blockwise"]
 
 #: States per block (arrays longer than twice this are evaluated in blocks).  Chosen by
-#: measurement (``python benchmarks/run.py blocks``; 8192, 16000, 32768 and 65536 compared five
-#: times on a shared machine): 16000 was never more than about 20 % slower than the fastest at
-#: 10^5 and 10^6 states; at 10^7 states 65536 was usually faster, once by a third.
+#: measurement (``python benchmarks/run.py blocks``; 8192, 16000, 32768 and 65536 compared in six
+#: runs on a shared machine): 16000 was never more than about 20 % slower than the fastest at
+#: 10^5 and 10^6 states; at 10^7 states 65536 was faster in three of five runs, once by a third.
 BLOCK = 16000
 
 _R = TypeVar("_R")
