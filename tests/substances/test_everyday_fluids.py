@@ -12,6 +12,7 @@ solvents, glycols, amines, acids, nitriles and carbonates.
 from __future__ import annotations
 
 import pytest
+from known_failures import xfail_known
 
 import masstransfer as mt
 
@@ -80,12 +81,7 @@ def _liquid_T(sp: mt.Species) -> float:
 
 
 def _params(names: tuple[str, ...]) -> list[object]:
-    return [
-        pytest.param(n, marks=pytest.mark.xfail(strict=True, reason=KNOWN_FAILURES[n]))
-        if n in KNOWN_FAILURES
-        else n
-        for n in names
-    ]
+    return xfail_known(names, KNOWN_FAILURES)
 
 
 @pytest.mark.parametrize("name", _params(LIQUIDS))

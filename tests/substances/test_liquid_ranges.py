@@ -13,6 +13,7 @@ from __future__ import annotations
 import math
 
 import pytest
+from known_failures import xfail_known
 
 import masstransfer as mt
 from masstransfer.substances import JOIN_RTOL
@@ -69,12 +70,7 @@ ESTIMATES = frozenset(
 
 
 def _params(names: tuple[str, ...]) -> list[object]:
-    return [
-        pytest.param(n, marks=pytest.mark.xfail(strict=True, reason=KNOWN_FAILURES[n]))
-        if n in KNOWN_FAILURES
-        else n
-        for n in names
-    ]
+    return xfail_known(names, KNOWN_FAILURES)
 
 
 def _chemical(cas: str, T: float):  # type: ignore[no-untyped-def]
