@@ -604,32 +604,70 @@ def per_state_costs_in(
     return costs, data["first"]
 
 
-def first_touch_cost(n: int = 10**7, repeat: int = 7) -> tuple[float, float, float]:
-    """Cost per float64 value [s] of filling arrays: one in use, a fresh one, thirteen fresh at once.
+#: Where a Linux guest counts the free memory it has handed back to its host (free page reporting).
+REPORTED_KIB = Path("/sys/module/page_reporting/parameters/reported_kib")
 
-    The last are thirteen arrays of ``10 * n`` values filled one after another and all kept,
-    as the names-in chain's outputs on ``10 * n`` states are: memory this process, and perhaps
-    this machine, has not touched before.
+
+def _reported_kib() -> int | None:
+    """Free memory handed back to the host since boot [KiB], or None where the kernel does not report it."""
+    try:
+        return int(REPORTED_KIB.read_text().strip())
+    except (OSError, ValueError):
+        return None
+
+
+def first_touch_cost(n: int = 5 * 10**7, pause: float = 10.0, repeat: int = 3) -> dict[str, float | None]:
+    """Cost per float64 value [s] of filling an array: in use, fresh, and fresh after a pause.
+
+    ``again``: an array already in use.  ``fresh``: a new array of ``n`` values allocated
+    straight after another of the same size was freed (pages the kernel has just had back).
+    ``after_pause``: the same after ``pause`` seconds of idling (best of ``repeat``); on a
+    virtual machine that hands free memory back to its host, the host must then supply every
+    page again.  ``reported_mib``: free memory the kernel handed back to the host during the
+    pauses [MiB], where it reports that (None elsewhere).
     """
-    kept = np.empty(n)
-    kept.fill(0.0)
+    import time
+
+    in_use = np.empty(n)
+    in_use.fill(0.0)
+    again = best(lambda: in_use.fill(1.0), 1, repeat)
+    in_use = np.empty(0)
 
     def fresh() -> None:
         a = np.empty(n)
         a.fill(1.0)
 
-    def again() -> None:
-        kept.fill(1.0)
+    fresh()
+    straight = best(fresh, 1, repeat)
+    paused = float("inf")
+    before = _reported_kib()
+    for _ in range(repeat):
+        time.sleep(pause)
+        paused = min(paused, best(fresh, 1, 1))
+    after = _reported_kib()
+    reported = None if before is None or after is None else (after - before) / 1024
+    return {"again": again / n, "fresh": straight / n, "after_pause": paused / n, "reported_mib": reported}
 
-    start = timeit.default_timer()
-    held = []
-    for _ in range(13):
-        a = np.empty(10 * n)
-        a.fill(1.0)
-        held.append(a)
-    many = (timeit.default_timer() - start) / (13 * 10 * n)
-    del held
-    return best(again, 1, repeat) / n, best(fresh, 1, repeat) / n, many
+
+def chunked_costs(max_states: float) -> dict[int, float]:
+    """Cost per state [s] of k_c over a design grid through :mod:`masstransfer.sweep`, one thread.
+
+    The names-in chain on blocks of 2**20 states (dask's synchronous scheduler, so one core as
+    in the direct calls), keeping only k_c: best of three computations at each decade from
+    10^6 states up.  Run in a fresh process with the allocator as it comes.
+    """
+    from masstransfer import sweep
+
+    def k_c(h, T):  # one field of the names-in result, block by block
+        return mt.mass_transfer_from_heat(h, "water", "air", T).k_c
+
+    out = {}
+    for e in range(6, round(np.log10(max_states)) + 1):
+        grid = sweep.design_grid(T=np.linspace(300.0, 400.0, 10**e), h=[30.0])
+        lazy = sweep.evaluate(k_c, grid)
+        calls = [best(lambda lazy=lazy: lazy.compute(scheduler="synchronous"), 1, 1) for _ in range(3)]
+        out[10**e] = min(calls) / 10**e
+    return out
 
 
 def block_size_costs(
@@ -736,6 +774,11 @@ def main() -> None:
         costs = per_state_costs(float(sys.argv[2]))
         print(json.dumps({"costs": costs, "first": FIRST_CALL}))
         return
+    if sys.argv[1:2] == ["chunked"]:  # chunked sweep costs in a fresh process, as JSON
+        import json
+
+        print(json.dumps(chunked_costs(float(sys.argv[2]))))
+        return
     if sys.argv[1:] == ["blocks"]:  # block lengths compared, as JSON (run in a fresh process)
         import json
 
@@ -812,7 +855,7 @@ def main() -> None:
             if label in first and label in kept_first
         ),
     ]
-    again, fresh, many = first_touch_cost()
+    touch = first_touch_cost()
     import json
 
     blocks = json.loads(
@@ -820,25 +863,64 @@ def main() -> None:
             [sys.executable, __file__, "blocks"], capture_output=True, text=True, check=True
         ).stdout.splitlines()[-1]
     )
-    extra = {
-        name: (firsts[label] - table[label][1][-1]) / 13
-        for name, firsts, table in (("as it comes", first, costs), ("keeping freed memory", kept_first, kept))
-        for label in firsts
-        if label.startswith("names in")
+    chunked = {
+        int(n): c
+        for n, c in json.loads(
+            subprocess.run(
+                [sys.executable, __file__, "chunked", repr(max_states)],
+                capture_output=True,
+                text=True,
+                check=True,
+            ).stdout.splitlines()[-1]
+        ).items()
     }
+    names_in = next(label for label in costs if label.startswith("names in"))
+    excess = {
+        name: (firsts[names_in] - table[names_in][1][-1]) / 13
+        for name, firsts, table in (("as it comes", first, costs), ("keeping freed memory", kept_first, kept))
+        if names_in in firsts
+    }
+    best_gap = (costs[names_in][1][-1] - kept[names_in][1][-1]) / 13
+    reported = touch["reported_mib"]
     lines += [
         "",
         "Filling a float64 array already in use costs "
-        f"{again * 1e9:.2f} ns per value on this machine; a freshly",
-        f"allocated array of 10^7 values {fresh * 1e9:.2f} ns (the kernel maps and zeroes each new page on",
-        f"first touch); thirteen fresh arrays of 10^8 values in this process {many * 1e9:.1f} ns. The first",
-        f"names-in call on {largest} states costs more than the best, by "
-        + " and ".join(f"{v * 1e9:.0f} ns ({k})" for k, v in extra.items()),
-        "per value of its thirteen result arrays (the coefficients, the properties, the groups, and",
-        "copies of h and T), far more than the fills above: what the rest is spent on is not",
-        "established here. glibc's allocator as it comes gives large arrays fresh memory (always above",
-        "32 MiB, often from 128 KiB up) on every call; told to keep freed memory, it reuses what",
-        "earlier calls took.",
+        f"{touch['again'] * 1e9:.2f} ns per value on this machine; a fresh array of 5x10^7 values,",
+        "allocated straight after another was freed, "
+        f"{touch['fresh'] * 1e9:.2f} ns (the kernel maps and zeroes each",
+        "page on first touch); the same after ten seconds of idling "
+        f"{touch['after_pause'] * 1e9:.1f} ns. This machine is a",
+        "virtual machine that hands free memory back to its host"
+        + (
+            f" (its kernel reported {reported:.0f} MiB during the pauses, `{REPORTED_KIB}`)"
+            if reported is not None
+            else ""
+        )
+        + ": memory freed more",
+        "than a few seconds ago must be supplied by the host again when it is next touched.",
+        "",
+        f"That is where the names-in call on {largest} states loses time. Its thirteen result arrays (the",
+        "coefficients, the properties, the groups, and copies of h and T) are written into fresh memory.",
+        "Per value of those arrays, the first call costs more than the best by "
+        + " and ".join(f"{v * 1e9:.0f} ns ({k})" for k, v in excess.items())
+        + ", and the best call",
+        "as it comes more than the best keeping freed memory by "
+        f"{best_gap * 1e9:.0f} ns: the allocator as it comes",
+        "returns each call's arrays to the kernel (always above 32 MiB, often from 128 KiB up), and the",
+        "next call takes them afresh; told to keep freed memory, it reuses what earlier calls took.",
+        "",
+        "Evaluating the same chain over a design grid with `masstransfer.sweep` (blocks of 2^20 states,",
+        "dask's synchronous scheduler, one core) and keeping only k_c, in a fresh process with the",
+        "allocator as it comes, costs per state (in brackets, its ratio to the direct call's cost per",
+        "state at 10^6 states, allocator as it comes):",
+        "",
+        "| call | " + " | ".join(f"10^{round(np.log10(n))} states" for n in chunked) + " |",
+        "|---|" + "---|" * len(chunked),
+        "| names in through masstransfer.sweep, k_c only | "
+        + " | ".join(
+            f"{c * 1e9:.0f} ns ({c / costs[names_in][1][sizes.index(10**6)]:.2f})" for c in chunked.values()
+        )
+        + " |",
         "",
         "Cost per state of the names-in chain by block length (`masstransfer._blocks.BLOCK`), in a",
         "fresh process:",
