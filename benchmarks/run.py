@@ -16,6 +16,7 @@ import os
 import platform
 import subprocess
 import sys
+import textwrap
 import timeit
 from pathlib import Path
 
@@ -616,18 +617,37 @@ def _reported_kib() -> int | None:
         return None
 
 
-def first_touch_cost(n: int = 5 * 10**7, pause: float = 10.0, repeat: int = 3) -> dict[str, float | None]:
-    """Cost per float64 value [s] of filling an array: in use, fresh, and fresh after a pause.
+def _settled(pause: float, limit: float = 120.0) -> None:
+    """Idle ``pause`` seconds, then on until the kernel stops handing free memory to the host.
 
-    ``again``: an array already in use.  ``fresh``: a new array of ``n`` values allocated
-    straight after another of the same size was freed (pages the kernel has just had back).
-    ``after_pause``: the same after ``pause`` seconds of idling (best of ``repeat``); on a
-    virtual machine that hands free memory back to its host, the host must then supply every
-    page again.  ``reported_mib``: free memory the kernel handed back to the host during the
-    pauses [MiB], where it reports that (None elsewhere).
+    A kernel that reports free pages to its host does so a few hundred MiB at a time; after a
+    large free it may take a minute.  Until it has finished, a fresh allocation may still get
+    pages the host has not taken back (the kernel hands out the most recently freed first).
     """
     import time
 
+    time.sleep(pause)
+    start = time.monotonic()
+    last = _reported_kib()
+    while last is not None and time.monotonic() - start < limit:
+        time.sleep(2.0)
+        now = _reported_kib()
+        if now is None or now - last < 16 * 1024:
+            return
+        last = now
+
+
+def first_touch_cost(n: int = 5 * 10**7, pause: float = 10.0, repeat: int = 3) -> dict[str, float | None]:
+    """Cost per float64 value [s] of filling an array: in use, fresh, and fresh after a pause.
+
+    ``again``: an array already in use (best of ``repeat``).  ``fresh``: a new array of ``n``
+    values allocated straight after another of the same size was freed (pages the kernel has
+    just had back; best of ``repeat``).  ``after_pause``: the mean over ``repeat`` of the same
+    after idling ``pause`` seconds and until the kernel has finished handing free memory back
+    to its host, where it does; the host must then supply every page again.  ``reported_mib``:
+    free memory the kernel handed back to its host during the pauses [MiB] (None where it does
+    not report that).
+    """
     in_use = np.empty(n)
     in_use.fill(0.0)
     again = best(lambda: in_use.fill(1.0), 1, repeat)
@@ -639,14 +659,19 @@ def first_touch_cost(n: int = 5 * 10**7, pause: float = 10.0, repeat: int = 3) -
 
     fresh()
     straight = best(fresh, 1, repeat)
-    paused = float("inf")
+    paused = []
     before = _reported_kib()
     for _ in range(repeat):
-        time.sleep(pause)
-        paused = min(paused, best(fresh, 1, 1))
+        _settled(pause)
+        paused.append(best(fresh, 1, 1))
     after = _reported_kib()
     reported = None if before is None or after is None else (after - before) / 1024
-    return {"again": again / n, "fresh": straight / n, "after_pause": paused / n, "reported_mib": reported}
+    return {
+        "again": again / n,
+        "fresh": straight / n,
+        "after_pause": float(np.mean(paused)) / n,
+        "reported_mib": reported,
+    }
 
 
 def chunked_costs(max_states: float) -> dict[int, float]:
@@ -882,32 +907,42 @@ def main() -> None:
     }
     best_gap = (costs[names_in][1][-1] - kept[names_in][1][-1]) / 13
     reported = touch["reported_mib"]
-    lines += [
-        "",
-        "Filling a float64 array already in use costs "
-        f"{touch['again'] * 1e9:.2f} ns per value on this machine; a fresh array of 5x10^7 values,",
-        "allocated straight after another was freed, "
-        f"{touch['fresh'] * 1e9:.2f} ns (the kernel maps and zeroes each",
-        "page on first touch); the same after ten seconds of idling "
-        f"{touch['after_pause'] * 1e9:.1f} ns. This machine is a",
-        "virtual machine that hands free memory back to its host"
+    cold = touch["after_pause"] > 3 * touch["fresh"]
+    touch_text = (
+        f"Filling a float64 array already in use costs {touch['again'] * 1e9:.2f} ns per value on this "
+        f"machine; a fresh array of 5x10^7 values, allocated straight after another was freed, "
+        f"{touch['fresh'] * 1e9:.2f} ns (the kernel maps and zeroes each page on first touch); the same "
+        f"after ten seconds of idling, and until the kernel had finished handing free memory to its "
+        f"host, {touch['after_pause'] * 1e9:.1f} ns (mean of three)."
         + (
-            f" (its kernel reported {reported:.0f} MiB during the pauses, `{REPORTED_KIB}`)"
+            f" The kernel reported {reported:.0f} MiB of free memory to its host during the pauses "
+            f"(`{REPORTED_KIB}`): this is a virtual machine that hands free memory back, and memory "
+            "it has handed back must be supplied by the host again when it is next touched."
             if reported is not None
             else ""
         )
-        + ": memory freed more",
-        "than a few seconds ago must be supplied by the host again when it is next touched.",
-        "",
-        f"That is where the names-in call on {largest} states loses time. Its thirteen result arrays (the",
-        "coefficients, the properties, the groups, and copies of h and T) are written into fresh memory.",
-        "Per value of those arrays, the first call costs more than the best by "
+    )
+    excess_text = (
+        f"The names-in call on {largest} states writes its thirteen result arrays (the coefficients, "
+        "the properties, the groups, and copies of h and T) into fresh memory. Per value of those "
+        "arrays, the first call costs more than the best by "
         + " and ".join(f"{v * 1e9:.0f} ns ({k})" for k, v in excess.items())
-        + ", and the best call",
-        "as it comes more than the best keeping freed memory by "
-        f"{best_gap * 1e9:.0f} ns: the allocator as it comes",
-        "returns each call's arrays to the kernel (always above 32 MiB, often from 128 KiB up), and the",
-        "next call takes them afresh; told to keep freed memory, it reuses what earlier calls took.",
+        + ", and the best call as it comes more than the best keeping freed memory by "
+        f"{best_gap * 1e9:.0f} ns. glibc's allocator as it comes returns each call's arrays to the "
+        "kernel (always above 32 MiB, often from 128 KiB up) and the next call takes them afresh; "
+        "told to keep freed memory, it reuses what earlier calls took. "
+        + (
+            "Memory supplied again by the host, as measured above, costs as much as these differences "
+            "or more: between calls, the kernel hands the freed arrays to the host."
+            if cold and reported is not None and max(*excess.values(), best_gap) <= 1.3 * touch["after_pause"]
+            else "The fill costs above do not account for these differences on this run."
+        )
+    )
+    lines += [
+        "",
+        textwrap.fill(touch_text, width=100),
+        "",
+        textwrap.fill(excess_text, width=100),
         "",
         "Evaluating the same chain over a design grid with `masstransfer.sweep` (blocks of 2^20 states,",
         "dask's synchronous scheduler, one core) and keeping only k_c, in a fresh process with the",
