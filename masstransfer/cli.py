@@ -371,7 +371,7 @@ def _wet_bulb(args: argparse.Namespace) -> str:
                 "adiabatic_saturation_K": ast.tolist(),
                 "adiabatic_saturation": _WET_BULB_KINDS["T_as"],
                 "adiabatic_saturation_minus_wet_bulb_K": (ast - wb).tolist(),
-                "caution": _cli_text.caution(),
+                "caution": _cli_text.CAUTION,
             },
             indent=2,
         )

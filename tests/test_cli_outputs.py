@@ -207,9 +207,12 @@ def test_column_profile_says_where_z_starts(capsys, tmp_path):
     path = tmp_path / "spec.toml"
     path.write_text(EXAMPLE_SPEC, encoding="utf-8")
     assert main(["column", str(path), "--points", "3"]) == 0
-    assert "z above the bottom of the packing" in capsys.readouterr().out
+    out = capsys.readouterr().out
+    assert "z above the bottom of the packing" in out
+    assert CAUTION in out.replace("\n", " ")
     assert main(["column", str(path), "--points", "3", "--json"]) == 0
     data = json.loads(capsys.readouterr().out)
+    assert CAUTION in data["caution"]
     assert data["profile"]["z_m"][0] == 0.0
     assert data["profile"]["y"][0] == pytest.approx(0.02)  # the entering gas, at the bottom
     assert "bottom" in data["profile_z"]
