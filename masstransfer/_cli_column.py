@@ -15,15 +15,16 @@ import sys
 from collections.abc import Mapping
 from typing import Any
 
+from ._cli_text import caution
 from .errors import InputTypeError, InputValueError
 
 __all__ = ["CAUTION", "EXAMPLE_SPEC", "register", "run"]
 
-CAUTION = (
-    "Estimates only: the film coefficients carry the stated error of their correlations (about "
-    "10-30 %), the properties and equilibrium their own. Scrubbers for toxic or flammable gases "
-    "must be checked against measured data for the actual packing and system, local codes and "
-    "licensed engineering practice."
+#: The film coefficients' error, then the usual caution.
+CAUTION = caution(
+    "The film coefficients carry the stated error of their correlations (about 10-30 %), the "
+    "properties and equilibrium their own; a scrubber for toxic or flammable gases needs measured "
+    "data for the actual packing and system."
 )
 
 #: A complete spec (an invented scrubber), printed by ``masstransfer column --example``.
@@ -251,6 +252,7 @@ def _compute(spec: Mapping[str, Mapping[str, Any]], points: int) -> dict[str, An
         "x_out": prof.x_out,
         "recovery": prof.recovery,
         "accuracy": film.accuracy,
+        "profile_z": "height above the bottom of the packing, where the gas enters [m]",
         "profile": {
             "z_m": prof.z.tolist(),
             "y": prof.y.tolist(),
@@ -294,7 +296,11 @@ def _tables(r: Mapping[str, Any]) -> str:
     lines = [f"Packed absorber, {r['solute']}", "-" * (w0 + w1 + 12)]
     lines += [f"{a.ljust(w0)}  {b.rjust(w1)}  {c}".rstrip() for a, b, c in rows]
     prof = r["profile"]
-    lines += ["", "Profile along the height", f"{'z [m]':>8}  {'y':>11}  {'x':>11}  {'y*':>11}  {'T [K]':>8}"]
+    lines += [
+        "",
+        "Profile along the height (z above the bottom of the packing, where the gas enters)",
+        f"{'z [m]':>8}  {'y':>11}  {'x':>11}  {'y*':>11}  {'T [K]':>8}",
+    ]
     for z, y, x, ys, T in zip(prof["z_m"], prof["y"], prof["x"], prof["y_star"], prof["T_K"], strict=True):
         lines.append(f"{z:8.3f}  {y:11.4e}  {x:11.4e}  {ys:11.4e}  {T:8.2f}")
     lines += ["", f"Accuracy: {r['accuracy']}."]

@@ -14,13 +14,6 @@ import numpy as np
 
 __all__ = ["register"]
 
-_CLI_WORDS = (
-    ("use masstransfer.liquid_diffusivity", "use --phase liquid"),
-    ("use masstransfer.gas_diffusivity", "use --phase gas"),
-    ("pass the system pressure P=", "pass the system pressure with -P"),
-    ("phase='gas' or phase='liquid'", "--phase gas or --phase liquid"),
-)
-
 
 def register(sub: Any) -> None:
     """Add the ``diffusivity`` subcommand to an ``argparse`` subparsers object."""
@@ -73,20 +66,15 @@ def register(sub: Any) -> None:
 
 def run(args: argparse.Namespace) -> str:
     """Compute and format the diffusivity for the parsed arguments."""
+    from ._cli_text import CAUTION, caution_line, pressure
     from ._cli_units import convert_table, plus_minus
     from .diffusivity._report import diffusivity_report
-    from .errors import InputValueError, OutOfRangeError
 
     T = np.asarray(args.temperature, dtype=float)
-    try:
-        report = diffusivity_report(
-            args.solute, args.medium, T, args.pressure, phase=args.phase, method=args.method
-        )
-    except (OutOfRangeError, InputValueError) as exc:  # name the command line's options, not the calls
-        text = str(exc)
-        for python, option in _CLI_WORDS:
-            text = text.replace(python, option)
-        raise type(exc)(text) from exc
+    # library messages name keywords (phase=, P=); the command line rewords them as options
+    report = diffusivity_report(
+        args.solute, args.medium, T, args.pressure, phase=args.phase, method=args.method
+    )
     D = np.atleast_1d(np.asarray(report.value, dtype=float))
     inferred = args.phase is None
     if args.json:
@@ -107,11 +95,17 @@ def run(args: argparse.Namespace) -> str:
                 "relative_uncertainty": report.relative_uncertainty,
                 "notes": list(report.notes),
                 "warnings": list(report.warnings),
+                "caution": CAUTION,
             },
             indent=2,
         )
-    where = f"gas at {args.pressure:g} Pa" if report.phase == "gas" else "liquid, infinite dilution"
-    how = "inferred from the medium's state at T and P" if inferred else "as given"
+    where = f"gas at {pressure(args.pressure)}" if report.phase == "gas" else "liquid, infinite dilution"
+    inferred_note = next((n for n in report.notes if n.startswith("phase inferred: ")), None)
+    if inferred and inferred_note is not None:  # the phase is stated once, on its own line
+        how = "inferred: " + inferred_note.removeprefix("phase inferred: ")
+    else:
+        how = "inferred from the medium's state at T and P" if inferred else "as given"
+    notes = [n for n in report.notes if n is not inferred_note]
     lines = [
         f"Diffusivity of {report.solute} in {report.medium} ({where})",
         f"solute: {report.solute_identity}",
@@ -135,9 +129,9 @@ def run(args: argparse.Namespace) -> str:
     if args.explain:
         lines += ["", report.summary()]
     else:
-        lines += [f"note: {n}" for n in report.notes]
+        lines += [f"note: {n}" for n in notes]
         lines += [f"caution: {w}" for w in report.warnings]
-        lines.append("Estimates; check safety-relevant designs against measured data.")
+    lines.append(caution_line())
     return "\n".join(lines)
 
 

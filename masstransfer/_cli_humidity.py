@@ -55,7 +55,13 @@ def register(sub: Any) -> None:
         "--radiant-temperature", type=float, metavar="K", help="temperature of radiating surroundings"
     )
     e.add_argument(
-        "--emissivity", type=float, default=0.9, help="emissivity of the wet surface (default 0.9)"
+        "--emissivity",
+        type=float,
+        default=None,
+        help=(
+            "emissivity of the wet surface (default 0.9); it has no effect unless "
+            "--radiant-temperature is given"
+        ),
     )
     e.add_argument(
         "--conduction-coefficient",
@@ -69,8 +75,9 @@ def register(sub: Any) -> None:
 
 def run(args: argparse.Namespace) -> str:
     """Compute and format the ``evaporate`` subcommand's output."""
+    from ._cli_text import caution, caution_line, pressure
     from .errors import InputTypeError
-    from .humidity._evaporation import CAUTION, evaporation_rate
+    from .humidity._evaporation import FLAMMABLE_VAPOUR, evaporation_rate
 
     if args.correlation is not None and (args.velocity is None or args.length is None):
         raise InputTypeError("--correlation needs --velocity (m/s) and --length (m)")
@@ -86,7 +93,7 @@ def run(args: argparse.Namespace) -> str:
         velocity=args.velocity,
         L=args.length,
         radiant_temperature=args.radiant_temperature,
-        emissivity=args.emissivity,
+        emissivity=0.9 if args.emissivity is None else args.emissivity,
         conduction_coefficient=args.conduction_coefficient,
         **humidity,
     )
@@ -106,6 +113,11 @@ def run(args: argparse.Namespace) -> str:
         "q_conducted_W_per_m2": r.q_conducted,
         "q_latent_W_per_m2": r.q_latent,
     }
+    unused = []
+    if args.emissivity is not None and args.radiant_temperature is None:
+        unused.append(
+            "--emissivity has no effect without --radiant-temperature (no radiant heat was counted)"
+        )
     cols = {k: np.broadcast_to(np.atleast_1d(np.asarray(v, dtype=float)), T.shape) for k, v in fields.items()}
     if args.json:
         return json.dumps(
@@ -114,8 +126,8 @@ def run(args: argparse.Namespace) -> str:
                 "gas": r.gas_identity,
                 "P_Pa": args.pressure,
                 "method": r.method,
-                "caution": CAUTION,
-                "warnings": list(r.warnings),
+                "caution": caution(FLAMMABLE_VAPOUR),
+                "warnings": [*r.warnings, *unused],
                 **{k: v.tolist() for k, v in cols.items()},
             },
             indent=2,
@@ -140,10 +152,11 @@ def run(args: argparse.Namespace) -> str:
         "mass_flux_kg_per_m2h": "{:.4g}",
     }
     rows = [[fmt.get(k, "{:.4g}").format(cols[k][i]) for k in keys] for i in range(T.size)]
-    foot = (
-        f"Liquid: {r.liquid_identity}\nGas: {r.gas_identity}\n{r.method}.\n"
-        "Constant-rate period: the surface is freely wet; the rate inherits the error of h.\n" + CAUTION
+    foot = f"{r.method}.\nConstant-rate period: the surface is freely wet; the rate inherits the error of h."
+    if r.warnings or unused:
+        foot += "\nWarnings:\n  " + "\n  ".join([*r.warnings, *unused])
+    foot += "\n" + caution_line(FLAMMABLE_VAPOUR)
+    identities = f"liquid: {r.liquid_identity}\ngas: {r.gas_identity}\n"  # above the table, as elsewhere
+    return identities + _table(
+        f"Evaporation of {r.liquid} into {r.gas} at {pressure(args.pressure)}", header, rows, foot
     )
-    if r.warnings:
-        foot += "\nWarnings:\n  " + "\n  ".join(r.warnings)
-    return _table(f"Evaporation of {r.liquid} into {r.gas} at {args.pressure:g} Pa", header, rows, foot)

@@ -17,6 +17,7 @@ import re
 from collections.abc import Callable, Sequence
 from typing import Any
 
+from ._cli_text import value_spread
 from .errors import MissingDependencyError, UnitError
 
 __all__ = ["begin", "convert_json", "convert_table", "install", "plus_minus"]
@@ -56,6 +57,7 @@ _JSON_FIELDS = {
     "rho_kg_per_m3": ("rho", "kg/m^3"),
     "cp_J_per_kgK": ("cp", "J/(kg K)"),
     "wet_bulb_K": ("T_wb", "K"),
+    "adiabatic_saturation_K": ("T_as", "K"),
 }
 _NUMBER = re.compile(r"^\s*[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?")
 _HEADER = re.compile(r"^(\S+) \[(.+)\]$")
@@ -67,7 +69,18 @@ _LOW_KELVIN = 200.0
 _BARE_LOW_T: contextvars.ContextVar[tuple[tuple[str, float], ...]] = contextvars.ContextVar(
     "masstransfer_cli_bare_low_T", default=()
 )
-_INSTALL = "values with units need pint: pip install 'masstransfer[units]'"
+_INSTALL = (
+    "values with units need pint: pip install pint (or install the package with its units extra: "
+    "pip install 'masstransfer[units]')"
+)
+#: Unit spellings that mean a temperature to a reader but something else to pint:
+#: spelling -> (what pint reads, the spelling meant).
+_TEMPERATURE_SLIPS = {
+    "C": ("the coulomb", "degC"),
+    "F": ("the farad", "degF"),
+    "deg C": ("degree times coulomb", "degC"),
+    "deg F": ("degree times farad", "degF"),
+}
 
 
 def _registry() -> Any:
@@ -97,6 +110,12 @@ def _reader(si_unit: str, option: str = "") -> Callable[[str], float]:
             )
         reg = _registry()
         unit = text[m.end() :].strip().replace("%", "percent")
+        if si_unit == "K" and unit in _TEMPERATURE_SLIPS:
+            meaning, right = _TEMPERATURE_SLIPS[unit]
+            raise argparse.ArgumentTypeError(
+                f"{text!r}: the unit {unit!r} means {meaning}, not a temperature; "
+                f"write '{m.group(0).strip()} {right}'"
+            )
         try:
             q = reg.Quantity(float(m.group(0)), reg.parse_units(unit))
             return float(q.to(si_unit).magnitude)
@@ -163,11 +182,15 @@ def start() -> None:
 
 
 def kelvin_hint() -> str:
-    """Return a hint for a refused input when a temperature was given as a bare number below 200 K."""
+    """Return a hint for a refused input when a temperature was given as a bare number below 200 K.
+
+    The hint leads the error message: the likelier mistake is the unit, not what was refused.
+    """
     low = _BARE_LOW_T.get()
     if not low:
         return ""
-    return f" (note: {_kelvin_words(*low[0])})"
+    option, t = low[0]
+    return f"{_kelvin_words(option, t)}. Read as {t:g} K, the input is refused: "
 
 
 def kelvin_caution() -> str:
@@ -210,19 +233,27 @@ def convert_table(header: list[str], rows: list[list[str]]) -> tuple[list[str], 
     if not requested:
         return header, rows
     header, rows = list(header), [list(r) for r in rows]
+    done: set[str] = set()
+    drop: list[int] = []
     for i, title in enumerate(header):
         m = _HEADER.match(title)
+        if m is not None and m.group(1) in done:  # the same quantity in another unit: shown once
+            drop.append(i)
+            continue
         if m is None or m.group(1) not in requested:
             continue
         name, unit = m.groups()
         target = requested.pop(name)
+        done.add(name)
         cells = [r[i].split(" ± ") for r in rows]
         values = _convert([float(c[0]) for c in cells], unit, target)
         spreads = [float(c[1]) if len(c) > 1 else None for c in cells]
         conv_spreads = _convert([s or 0.0 for s in spreads], _delta(unit), _delta(target))
         for r, v, s, cs in zip(rows, values, spreads, conv_spreads, strict=True):
-            r[i] = f"{v:.4g}" if s is None else f"{v:.4g} ± {cs:.2g}"
+            r[i] = f"{v:.4g}" if s is None else value_spread(v, cs)
         header[i] = f"{name} [{target}]"
+    header = [h for i, h in enumerate(header) if i not in drop]
+    rows = [[c for i, c in enumerate(r) if i not in drop] for r in rows]
     if requested:
         names = ", ".join(sorted(requested))
         raise UnitError(f"--units: no column named {names} in this output; name one shown in its header")
@@ -257,7 +288,10 @@ def convert_json(text: str) -> str:
 
 
 def plus_minus(value: float, relative: float | None, digits: str = ".4e") -> str:
-    """``value ± one standard deviation`` (the value alone when the uncertainty is unknown)."""
+    """``value ± one standard deviation`` (the value alone, in ``digits``, when it is unknown).
+
+    The spread has two significant figures and the value is shown to the same decimal place.
+    """
     if relative is None or not math.isfinite(relative) or relative == 0.0:
         return format(value, digits)
-    return f"{format(value, digits)} ± {abs(value) * relative:.2g}"
+    return value_spread(value, abs(value) * relative)

@@ -17,12 +17,13 @@ import os
 import re
 import sys
 import warnings
-from collections.abc import Sequence
+from collections.abc import Callable, Sequence
 from typing import Any, NoReturn
 
 import numpy as np
 
-from . import _cli_column, _cli_humidity, _cli_units
+from . import _cli_column, _cli_humidity, _cli_text, _cli_units
+from ._version import __version__
 from .errors import MassTransferError, UnknownSpeciesError
 
 __all__ = ["main"]
@@ -48,6 +49,7 @@ def _parser() -> argparse.ArgumentParser:
         prog="masstransfer",
         description="Diffusivities, mass-transfer coefficients and correlations for process engineering.",
     )
+    p.add_argument("--version", action="version", version=f"masstransfer {__version__}")
     sub = p.add_subparsers(dest="command", required=True)
     sub.add_parser("demo", help="print the demo report (an invented kiln-drying scenario)")
 
@@ -76,7 +78,17 @@ def _parser() -> argparse.ArgumentParser:
     k.add_argument("--geometry", help="list only this geometry (e.g. sphere, duct, 'flat plate')")
     k.add_argument("--json", action="store_true", help="print JSON instead of a table")
 
-    w = sub.add_parser("wet-bulb", help="psychrometric wet-bulb temperature of humid air")
+    w = sub.add_parser(
+        "wet-bulb",
+        help="wet-bulb temperatures of humid air (water in air): psychrometric and adiabatic-saturation",
+        description=(
+            "Two wet-bulb temperatures of humid air at dry-bulb T, relative humidity RH and pressure P: "
+            "the psychrometric wet bulb T_wb (the steady temperature of a wetted, well-ventilated "
+            "surface, from the Chilton-Colburn heat-mass analogy with Le^(2/3)) and the "
+            "adiabatic-saturation temperature T_as (the thermodynamic wet bulb of psychrometric "
+            "charts), with their difference."
+        ),
+    )
     w.add_argument(
         "-T",
         "--temperature",
@@ -177,6 +189,7 @@ def _coefficient(args: argparse.Namespace) -> str:
                 "warnings": list(res.warnings),
                 **{k: v.tolist() for k, v in cols.items()},
                 "relative_uncertainty": None if u is None else np.asarray(u, dtype=float).tolist(),
+                "caution": _cli_text.CAUTION,
             },
             indent=2,
         )
@@ -196,8 +209,11 @@ def _coefficient(args: argparse.Namespace) -> str:
             float(cols[derived][i]), None if ud is None else float(ud[i]), ".4g" if args.kc else ".4e"
         )
     foot = res.method + "."
+    if ud is not None:
+        foot += "\n± one standard deviation, from --uncertainty and the diffusivity method's stated accuracy"
     if res.warnings:
         foot += "\nWarnings:\n  " + "\n  ".join(res.warnings)
+    foot += "\n" + _cli_text.caution_line()
     return _identity_lines(args.solute, args.medium) + _table(
         f"Mass-transfer coefficients for {res.solute} in {res.carrier} ({res.phase})", header, rows, foot
     )
@@ -205,10 +221,15 @@ def _coefficient(args: argparse.Namespace) -> str:
 
 def _resolved(solute: str, medium: str) -> dict[str, dict[str, Any]]:
     """Describe what the names resolved to, for the JSON output."""
+    return _resolved_roles((("solute", solute), ("medium", medium)))
+
+
+def _resolved_roles(roles: Sequence[tuple[str, str]]) -> dict[str, dict[str, Any]]:
+    """Describe what each (role, name) resolved to, for the JSON output."""
     from .substances._species import species
 
     out = {}
-    for who, name in (("solute", solute), ("medium", medium)):
+    for who, name in roles:
         sp = species(name)
         out[who] = {"query": name, "name": sp.name, "CAS": sp.CAS, "formula": sp.formula,
                     "molar_mass_kg_per_mol": sp.molar_mass}  # fmt: skip
@@ -217,15 +238,24 @@ def _resolved(solute: str, medium: str) -> dict[str, dict[str, Any]]:
 
 def _identity_lines(solute: str, medium: str) -> str:
     """One line per resolved substance, above a table."""
+    return _identity_lines_of((("solute", solute), ("medium", medium)))
+
+
+def _identity_lines_of(roles: Sequence[tuple[str, str]]) -> str:
+    """One line per (role, name) resolved, above a table."""
     from .substances._species import species
 
-    return "".join(
-        f"{who}: {species(name).identity}\n" for who, name in (("solute", solute), ("medium", medium))
-    )
+    return "".join(f"{who}: {species(name).identity}\n" for who, name in roles)
+
+
+def _array_words(m: re.Match[str]) -> str:
+    """Speak of the values given on the command line, not of an array and its shape."""
+    bad, given = m.groups()
+    return "" if given == "1" else f" (the first of {bad} refused among the {given} values given)"
 
 
 #: Hints in library messages that name Python calls, and what the command line offers instead.
-_CLI_HINTS = (
+_CLI_HINTS: tuple[tuple[re.Pattern[str], str | Callable[[re.Match[str]], str]], ...] = (
     (re.compile(r",? or build it by hand: masstransfer\.Species\(.*$", re.S), ""),
     (re.compile(r"use another method, or supply it: dataclasses\.replace\(.*$", re.S),
      "choose another --method"),
@@ -233,6 +263,12 @@ _CLI_HINTS = (
      "'masstransfer correlations' lists every record"),
     (re.compile(r"\bmethod=(?=')"), "--method "),
     (re.compile(r"\bpass T within"), "pass -T within"),
+    (re.compile(r"use masstransfer\.liquid_diffusivity"), "use --phase liquid"),
+    (re.compile(r"use masstransfer\.gas_diffusivity"), "use --phase gas"),
+    (re.compile(r"pass the system pressure P="), "pass the system pressure with -P"),
+    (re.compile(r"phase='gas' or phase='liquid'"), "--phase gas or --phase liquid"),
+    (re.compile(r"\brelative_humidity\b"), "--rh"),
+    (re.compile(r" \(first of (\d+) bad entries in an array of shape \((\d+),\)\)"), _array_words),
 )  # fmt: skip
 
 
@@ -266,9 +302,10 @@ def _correlations(args: argparse.Namespace) -> str:
             "notes": r.notes or "-",
         }
         if args.json:
-            return json.dumps(info, indent=2)
+            return json.dumps({**info, "caution": _cli_text.CAUTION}, indent=2)
         width = max(len(k) for k in info)
-        return "\n".join(f"{k.rjust(width)} : {v}" for k, v in info.items())
+        lines = [f"{k.rjust(width)} : {v}" for k, v in info.items()]
+        return "\n".join([*lines, _cli_text.caution_line()])
     recs = [r for r in catalogue.all_correlations() if args.geometry in (None, r.geometry)]
     if args.geometry is not None and not recs:
         catalogue.find_correlations(args.geometry)  # raises with the accepted geometries
@@ -290,33 +327,80 @@ def _correlations(args: argparse.Namespace) -> str:
         f"Correlation catalogue: {len(recs)} records",
         ["slug", "geometry", "regime", "fitted on"],
         [[r.slug, r.geometry, r.regime, r.fitted_on] for r in recs],
-        "masstransfer correlations SLUG explains one record.",
+        "masstransfer correlations SLUG explains one record.\n" + _cli_text.caution_line(),
     )
 
 
+#: What each wet-bulb temperature is, for the text and the JSON.
+_WET_BULB_KINDS = {
+    "T_wb": (
+        "psychrometric wet bulb: the steady temperature of a wetted, well-ventilated surface "
+        "(convected heat pays for evaporation; Chilton-Colburn heat-mass analogy, Le^(2/3))"
+    ),
+    "T_as": (
+        "adiabatic-saturation temperature, the thermodynamic wet bulb: air saturated adiabatically "
+        "by water at that temperature (an energy balance; the wet bulb of psychrometric charts)"
+    ),
+}
+
+
 def _wet_bulb(args: argparse.Namespace) -> str:
+    from .humidity._state import humid_gas_state
     from .surface._wet_surface import wet_bulb_temperature
 
     T = np.asarray(args.temperature, dtype=float)
     wb = np.atleast_1d(wet_bulb_temperature(T, args.rh, args.pressure))
+    state = humid_gas_state("water", "air", T, args.pressure, relative_humidity=args.rh)
+    ast = np.atleast_1d(np.asarray(state.adiabatic_saturation, dtype=float))
+    method = (
+        "T_wb from the wet-surface energy balance with the Chilton-Colburn analogy (Le^(2/3)); "
+        "T_as from the adiabatic-saturation balance (ideal gases, the library's property models)"
+    )
     if args.json:
         return json.dumps(
             {
+                "liquid": "water",
+                "gas": "air",
+                "resolved": _resolved_roles((("liquid", "water"), ("gas", "air"))),
+                "method": method,
                 "T_K": T.tolist(),
                 "relative_humidity": args.rh,
                 "P_Pa": args.pressure,
                 "wet_bulb_K": wb.tolist(),
+                "wet_bulb": _WET_BULB_KINDS["T_wb"],
+                "adiabatic_saturation_K": ast.tolist(),
+                "adiabatic_saturation": _WET_BULB_KINDS["T_as"],
+                "adiabatic_saturation_minus_wet_bulb_K": (ast - wb).tolist(),
+                "caution": _cli_text.CAUTION,
             },
             indent=2,
         )
-    return _table(
-        f"Psychrometric wet-bulb temperature, relative humidity {args.rh:g}, {args.pressure:g} Pa",
-        ["T [K]", "T [C]", "T_wb [K]", "T_wb [C]"],
+    foot = "\n".join(
         [
-            [f"{t:.2f}", f"{t - 273.15:.2f}", f"{w:.2f}", f"{w - 273.15:.2f}"]
-            for t, w in zip(T, wb, strict=True)
+            *(f"{name}: {kind}." for name, kind in _WET_BULB_KINDS.items()),
+            "T_as - T_wb: the two differ because the psychrometric ratio of water in air, Le^(2/3), "
+            "is about 0.9, not 1; compare T_as with a psychrometric chart, T_wb with a ventilated "
+            "psychrometer.",
+            _cli_text.caution_line(),
+        ]
+    )
+    title = f"Wet-bulb temperatures of humid air, relative humidity {args.rh:g}, "
+    return _identity_lines_of((("liquid", "water"), ("gas", "air"))) + _table(
+        title + _cli_text.pressure(args.pressure),
+        ["T [K]", "T [degC]", "T_wb [K]", "T_wb [degC]", "T_as [K]", "T_as [degC]", "T_as - T_wb [K]"],
+        [
+            [
+                f"{t:.2f}",
+                f"{t - 273.15:.2f}",
+                f"{w:.2f}",
+                f"{w - 273.15:.2f}",
+                f"{a:.2f}",
+                f"{a - 273.15:.2f}",
+                f"{a - w:.2f}",
+            ]
+            for t, w, a in zip(T, wb, ast, strict=True)
         ],
-        "Heat-mass analogy (Chilton-Colburn, Le^(2/3)); see the wet_bulb_temperature docstring.",
+        foot,
     )
 
 
@@ -396,8 +480,8 @@ def main(argv: Sequence[str] | None = None) -> int:
 def _emit_error(exc: MassTransferError, as_json: bool) -> int:
     """Report a rejected input: one line on stderr, or a JSON object on stdout with ``--json``."""
     message = _cli_message(str(exc))
-    if not isinstance(exc, UnknownSpeciesError):  # a refused value or state, not a name
-        message += _cli_units.kelvin_hint()
+    hint = "" if isinstance(exc, UnknownSpeciesError) else _cli_units.kelvin_hint()  # not for a name
+    message = hint + message  # the likelier mistake (the unit) first, then what was refused
     if as_json:
         _emit(json.dumps({"error": {"type": type(exc).__name__, "message": message}}, indent=2), [])
     else:

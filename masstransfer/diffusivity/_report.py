@@ -16,7 +16,7 @@ from ..errors import InputValueError
 from ..substances._species import Species, species
 from ._gas import gas_diffusivity, ready_gas
 from ._liquid import liquid_diffusivity, ready_liquid
-from ._phase import medium_state, phase_limits
+from ._phase import check_liquid, medium_state, phase_limits
 
 __all__ = ["DiffusivityReport", "diffusivity_report", "infer_phase"]
 
@@ -125,9 +125,13 @@ class DiffusivityReport(FrozenResult):
 def infer_phase(medium: str | Species, T: ArrayLike, P: ArrayLike = 101325.0) -> str:
     """'gas' or 'liquid': the state of ``medium`` at every (T, P), or raise if it is mixed or unknown."""
     b = species(medium)
-    state = medium_state(phase_limits(b), check_positive("T", T), check_positive("P", P))
+    lim = phase_limits(b)
+    Tv, Pv = check_positive("T", T), check_positive("P", P)
+    state = medium_state(lim, Tv, Pv)
     if state in ("gas", "liquid"):
         return state
+    if state == "either" and lim.Tm is not None and bool(np.any(np.asarray(Tv) < lim.Tm)):
+        check_liquid(lim, Tv, Pv, b.name)  # below its melting point: say it is frozen
     why = (
         "lacks a boiling point or critical point"
         if state == "unknown"
@@ -200,9 +204,9 @@ def diffusivity_report(
     viscosity: dict[str, tuple[float | None, str]] = {}
     if phase is None:
         phase = infer_phase(b, Tv, Pv)  # type: ignore[assignment]
-        notes.append(
-            f"phase inferred: {b.name} is a {'vapour' if phase == 'gas' else 'liquid'} at the given T and P"
-        )
+        above_critical = b.Tc is not None and bool(np.all(np.asarray(Tv) > b.Tc))
+        kind = "liquid" if phase == "liquid" else ("gas" if above_critical else "vapour")
+        notes.append(f"phase inferred: {b.name} is a {kind} at the given T and P")
     if phase not in ("gas", "liquid"):
         raise InputValueError(f"phase={phase!r} must be 'gas' or 'liquid' (or None to infer it)")
     with collect_warnings() as caught:

@@ -41,11 +41,10 @@ __all__ = ["EvaporationResult", "evaporation_rate"]
 #: Stefan-Boltzmann constant [W/(m^2 K^4)] (CODATA 2018, exact in the 2019 SI).
 _SIGMA = 5.670374419e-8
 
-#: Caution printed with every evaporation result that may concern a flammable vapour.
-CAUTION = (
-    "Caution: many solvent vapours are flammable. Keep the vapour concentration in the dryer "
-    "gas well below the lower flammability limit (or inert the dryer), and base any design "
-    "that affects safety on measured data, local codes and licensed engineering practice."
+#: Printed before the usual caution with every evaporation result: the vapour may be flammable.
+FLAMMABLE_VAPOUR = (
+    "Many solvent vapours are flammable: keep the vapour concentration in the dryer gas well "
+    "below the lower flammability limit, or inert the dryer."
 )
 
 

@@ -21,7 +21,7 @@ from ..constants import R_GAS
 from ..errors import InputTypeError, InputValueError, OutOfRangeError
 from ..substances._species import Species
 from ..surface._medium import GasSide, LiquidSide, Override, gas_side, liquid_side
-from ..surface._wet_surface import _below_models
+from ..surface._wet_surface import _below_models, vapour_above_pressure
 
 __all__ = ["HumidGasState", "humid_gas_state", "humidity_ratio_from_y", "y_from_humidity_ratio"]
 
@@ -338,7 +338,11 @@ def resolve_humidity(
             "(relative humidity above 1); pass a lower humidity or a higher T"
         )
     if (y >= 1.0).any():
-        raise OutOfRangeError("the vapour pressure at T exceeds P; lower T or raise P")
+        i = int(np.argmax(np.ravel(y >= 1.0)))
+        Ti, psi, Pi = (float(np.ravel(np.broadcast_to(v, y.shape))[i]) for v in (T, ps, P))
+        raise OutOfRangeError(
+            vapour_above_pressure(pair.liq.species.name, Ti, y.ravel()[i] * Pi / psi, psi, Pi)
+        )
     return y, key
 
 

@@ -57,6 +57,15 @@ def _below_models(sp: Any, T_low: float, what: str) -> str:
     )
 
 
+def vapour_above_pressure(liquid: str, T: float, rh: float, p_sat: float, P: float) -> str:
+    """Say that the vapour's partial pressure reaches the total pressure, with the numbers and the fix."""
+    return (
+        f"at T={T:g} K the vapour pressure of {liquid} is {p_sat:.6g} Pa, so relative_humidity={rh:g} "
+        f"means a partial pressure of {rh * p_sat:.6g} Pa, at or above P={P:.6g} Pa: no such humid gas "
+        f"exists (the liquid boils); raise P above {rh * p_sat:.6g} Pa, or lower T or the humidity"
+    )
+
+
 def solve_surface_temperature(
     liq: LiquidSide,
     gas: GasSide,
@@ -370,7 +379,10 @@ def wet_bulb_temperature(T: ArrayLike, relative_humidity: ArrayLike, P: ArrayLik
     Pv = check_positive("P", P)
     check_shapes(T=Tv, relative_humidity=rh, P=Pv)
     w = liquid_model("water")
-    y = np.asarray(rh) * np.asarray(w.vapor_pressure(Tv)) / np.asarray(Pv)
+    ps = np.asarray(w.vapor_pressure(Tv), dtype=float)
+    y = np.asarray(rh) * ps / np.asarray(Pv)
     if (y >= 1).any():
-        raise OutOfRangeError("the water vapour pressure at T exceeds P; lower T or raise P")
+        i = int(np.argmax(np.ravel(y >= 1)))
+        pick = [float(np.ravel(np.broadcast_to(v, np.shape(y)))[i]) for v in (Tv, rh, ps, Pv)]
+        raise OutOfRangeError(vapour_above_pressure("water", *pick))
     return wet_surface_temperature("water", "air", Tv, finish(y), Pv)
