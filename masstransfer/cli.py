@@ -378,9 +378,9 @@ def _wet_bulb(args: argparse.Namespace) -> str:
     foot = "\n".join(
         [
             *(f"{name}: {kind}." for name, kind in _WET_BULB_KINDS.items()),
-            "T_as - T_wb: the two differ because the psychrometric ratio of water in air, Le^(2/3), "
-            "is about 0.9, not 1; compare T_as with a psychrometric chart, T_wb with a ventilated "
-            "psychrometer.",
+            "T_as - T_wb: the analogy's psychrometric ratio for water in air, Le^(2/3), is about 0.9 "
+            "rather than 1, so T_wb lies a little below T_as; psychrometric charts show T_as, and "
+            "for water in air a well-ventilated wet bulb reads close to it (Lewis relation).",
             _cli_text.caution_line(),
         ]
     )
