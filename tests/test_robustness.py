@@ -147,7 +147,7 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
     ("graetz", surface.graetz, {"Re": 1000.0, "Pr": 5.0, "D": 0.01, "x": 1.0}),
     ("record_nusselt", _REC.nusselt, {"Re": 50.0, "Pr": 0.7}),
     ("record_sherwood", _REC.sherwood, {"Re": 50.0, "Sc": 0.7}),
-    ("hausen", _HAUSEN.nusselt, {"Re": 500.0, "Pr": 0.7, "L_over_D": 20.0}),
+    ("hausen", _HAUSEN.nusselt, {"Re": 500.0, "Pr": 0.7, "L_over_d": 20.0}),
     ("gnielinski", surface.correlation("duct-gnielinski").nusselt, {"Re": 2e4, "Pr": 3.0}),
     ("find", surface.find_correlations, {"geometry": "sphere", "Re": 50.0, "Sc": 1.0}),
     ("get", surface.correlation, {"slug": "duct-gnielinski"}),
