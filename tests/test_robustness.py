@@ -144,7 +144,7 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
         {"d": 2e-3, "rho_fluid": 998.0, "rho_particle": 1.2, "mu": 1e-3},
     ),
     ("biot_mass", surface.biot_mass, {"k_c": 1e-4, "L": 2e-3, "D_solid": 1e-10}),
-    ("graetz", surface.graetz, {"Re": 1000.0, "Pr": 5.0, "D": 0.01, "x": 1.0}),
+    ("graetz", surface.graetz, {"Re": 1000.0, "Pr": 5.0, "diameter": 0.01, "x": 1.0}),
     ("record_nusselt", _REC.nusselt, {"Re": 50.0, "Pr": 0.7}),
     ("record_sherwood", _REC.sherwood, {"Re": 50.0, "Sc": 0.7}),
     ("hausen", _HAUSEN.nusselt, {"Re": 500.0, "Pr": 0.7, "L_over_d": 20.0}),
