@@ -29,3 +29,7 @@ T_ICE: Final[float] = 273.15
 GRAVITY: Final[float] = 9.80665
 #: One debye [C m]: 1e-21 / c (exact by definition of the unit).
 DEBYE: Final[float] = 1e-21 / SPEED_OF_LIGHT
+
+
+def __dir__() -> list[str]:
+    return sorted(__all__)

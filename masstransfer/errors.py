@@ -88,3 +88,7 @@ class UnitError(InputTypeError):
     Also raised for a quantity passed where the argument takes no unit.  Both a
     :class:`MassTransferError` and a ``TypeError`` (as pint's own dimensionality error is).
     """
+
+
+def __dir__() -> list[str]:
+    return sorted(__all__)

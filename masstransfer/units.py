@@ -98,3 +98,7 @@ def quantities(result: Any, registry: Any = None) -> dict[str, Any]:
         else:
             out[f.name] = value
     return out
+
+
+def __dir__() -> list[str]:
+    return sorted(__all__)

@@ -7,6 +7,8 @@ import inspect
 import subprocess
 import sys
 
+import pytest
+
 import masstransfer as mt
 
 SUBPACKAGES = (
@@ -52,6 +54,16 @@ def test_everything_listed_exists_and_nothing_private_leaks():
         assert all(not n.startswith("_") for n in mod.__all__), modname
         for name in mod.__all__:
             getattr(mod, name)
+
+
+@pytest.mark.parametrize("modname", [*SUBPACKAGES, "units"])
+def test_each_subpackage_shows_only_its_listed_names(modname):
+    # dir() (and tab completion) shows what __all__ lists: no "annotations" from the __future__
+    # import, no imported helpers, no private submodules
+    mod = importlib.import_module(f"masstransfer.{modname}")
+    shown = {n for n in dir(mod) if not n.startswith("_")}
+    assert shown == set(mod.__all__)
+    assert "annotations" not in shown
 
 
 def test_import_loads_no_database_scipy_or_hypothesis():

@@ -69,3 +69,7 @@ __all__ = [
     "steady_flux",
     "time_lag",
 ]
+
+
+def __dir__() -> list[str]:
+    return sorted(__all__)

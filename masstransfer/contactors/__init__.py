@@ -111,3 +111,7 @@ __all__ = [
     "transfer_units",
     "vant_riet_kla",
 ]
+
+
+def __dir__() -> list[str]:
+    return sorted(__all__)

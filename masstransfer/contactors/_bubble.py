@@ -40,14 +40,14 @@ def _solve_holdup(rhs: FloatArray) -> FloatArray:
 
 
 def _ay_groups(
-    D_c: FloatArray,
+    d_c: FloatArray,
     rho: FloatArray,
     mu: FloatArray,
     sigma: FloatArray,
 ) -> tuple[FloatArray, FloatArray]:
     nu = mu / rho
-    Bo = GRAVITY * D_c * D_c * rho / sigma
-    Ga = GRAVITY * D_c**3 / (nu * nu)
+    Bo = GRAVITY * d_c * d_c * rho / sigma
+    Ga = GRAVITY * d_c**3 / (nu * nu)
     return Bo, Ga
 
 
@@ -69,8 +69,8 @@ def akita_yoshida_holdup(
     r"""Gas hold-up of a bubble column by Akita & Yoshida (1973).
 
     .. math::
-        \frac{\varepsilon_G}{(1-\varepsilon_G)^4} = C\,Bo^{1/8}\,Ga^{1/12}\,\frac{u_G}{\sqrt{g D_c}},
-        \quad Bo = \frac{g D_c^2\rho_L}{\sigma},\ Ga = \frac{g D_c^3}{\nu_L^2}
+        \frac{\varepsilon_G}{(1-\varepsilon_G)^4} = C\,Bo^{1/8}\,Ga^{1/12}\,\frac{u_G}{\sqrt{g d_c}},
+        \quad Bo = \frac{g d_c^2\rho_L}{\sigma},\ Ga = \frac{g d_c^3}{\nu_L^2}
 
     with C = 0.20 for pure liquids and non-electrolyte solutions and 0.25 for
     electrolyte solutions; solved for the hold-up by bisection.
@@ -80,7 +80,7 @@ def akita_yoshida_holdup(
     u_G : float or array_like
         Superficial gas velocity [m/s].
     diameter : float or array_like
-        Column diameter D_c [m].
+        Column diameter d_c [m].
     rho_L : float or array_like
         Liquid density [kg/m^3].
     mu_L : float or array_like
@@ -141,14 +141,14 @@ def akita_yoshida_kla(
     r"""Volumetric liquid-side coefficient of a bubble column by Akita & Yoshida (1973).
 
     .. math::
-        \frac{k_L a\,D_c^2}{D_L} = 0.6\,Sc_L^{0.5}\,Bo^{0.62}\,Ga^{0.31}\,\varepsilon_G^{1.1}
+        \frac{k_L a\,d_c^2}{D_L} = 0.6\,Sc_L^{0.5}\,Bo^{0.62}\,Ga^{0.31}\,\varepsilon_G^{1.1}
 
     Parameters
     ----------
     u_G : float or array_like
         Superficial gas velocity [m/s].
     diameter : float or array_like
-        Column diameter D_c [m].
+        Column diameter d_c [m].
     rho_L : float or array_like
         Liquid density [kg/m^3].
     mu_L : float or array_like

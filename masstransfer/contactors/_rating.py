@@ -371,7 +371,7 @@ def rate_bubble_column(
     r"""Gas hold-up and k_L a of a bubble column for a named solute and liquid (Akita & Yoshida).
 
     .. math::
-        \frac{k_L a\,D_c^2}{D_L} = 0.6\,Sc_L^{0.5}\,Bo^{0.62}\,Ga^{0.31}\,\varepsilon_G^{1.1}
+        \frac{k_L a\,d_c^2}{D_L} = 0.6\,Sc_L^{0.5}\,Bo^{0.62}\,Ga^{0.31}\,\varepsilon_G^{1.1}
 
     Parameters
     ----------

@@ -84,3 +84,7 @@ __all__ = [
     "wilke_chang",
     "wilke_lee",
 ]
+
+
+def __dir__() -> list[str]:
+    return sorted(__all__)

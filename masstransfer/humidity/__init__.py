@@ -28,3 +28,7 @@ __all__ = [
     "merkel_ntu",
     "y_from_humidity_ratio",
 ]
+
+
+def __dir__() -> list[str]:
+    return sorted(__all__)

@@ -303,7 +303,7 @@ def evaporation_rate(
     L : float or array_like, optional
         The record's characteristic length [m] (with ``correlation``).
     correlation_parameters : mapping, optional
-        Further named parameters of the record [-] (e.g. ``{"L_over_D": 20.0}``).
+        Further named parameters of the record [-] (e.g. ``{"L_over_d": 20.0}``).
     radiant_temperature : float or array_like, optional
         Temperature of surroundings radiating to the surface [K] (None: no radiation).
     emissivity : float or array_like

@@ -36,3 +36,7 @@ __all__ = [
     "parachor",
     "quayle_parachor",
 ]
+
+
+def __dir__() -> list[str]:
+    return sorted(__all__)

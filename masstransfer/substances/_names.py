@@ -11,7 +11,17 @@ import re
 from types import MappingProxyType
 from typing import Final
 
-__all__ = ["ALIASES", "AMBIGUOUS", "CAS_PREFIX", "COMMON_NAMES", "UNCLEAR_ABBREVIATIONS"]
+__all__ = [
+    "ALIASES",
+    "AMBIGUOUS",
+    "AMBIGUOUS_DEFAULTS",
+    "BARE_ATOMS",
+    "CAS_PREFIX",
+    "COMMON_NAMES",
+    "DISPLAY_NAMES",
+    "UNCLEAR_ABBREVIATIONS",
+    "UNCLEAR_NAMES",
+]
 
 #: Plant abbreviations (upper-cased key) -> CAS number.  Every row: common practice.
 ALIASES: Final = MappingProxyType(
@@ -91,6 +101,8 @@ ALIASES: Final = MappingProxyType(
         "C2H5OC2H5": "60-29-7",  # diethyl ether; common practice
         "HEXANES": "110-54-3",  # n-hexane for "hexanes"; common practice
         "HEPTANES": "142-82-5",  # n-heptane for "heptanes"; common practice
+        "XYLENES": "95-47-6",  # o-xylene, as for "xylene", with the ambiguity warning; common practice
+        "MIXED XYLENES": "95-47-6",  # o-xylene stands in (no record of the mixture), with the warning
     }
 )
 
@@ -112,6 +124,49 @@ UNCLEAR_ABBREVIATIONS: Final = MappingProxyType(
     }
 )
 
+#: Generic names that mean different substances in different trades: refused with the candidates
+#: (lower-cased key) -> (which trade means which, the (name, CAS) of each).  "Glycol" is
+#: triethylene glycol in gas dehydration and ethylene glycol in coolants and antifreeze.
+#: Common practice.
+_GLYCOLS: Final = (
+    "in gas dehydration usually TEG, in coolants and antifreeze MEG",
+    (
+        ("MEG (monoethylene glycol)", "107-21-1"),
+        ("DEG (diethylene glycol)", "111-46-6"),
+        ("TEG (triethylene glycol)", "112-27-6"),
+    ),
+)
+UNCLEAR_NAMES: Final = MappingProxyType({"glycol": _GLYCOLS, "glycols": _GLYCOLS})
+
+#: Bare symbols of elements whose everyday substance is a molecule (written exactly so, or in
+#: capitals): the databases resolve them to the free atom, a radical no process stream carries.
+#: Refused, naming what was probably meant: symbol -> (what it probably meant, CAS of the atom).
+#: Common practice; CAS numbers of the substances as in the chemicals database.
+BARE_ATOMS: Final = MappingProxyType(
+    {
+        "H": ("hydrogen H2 (CAS 1333-74-0)", "12385-13-6"),
+        "N": ("nitrogen N2 (CAS 7727-37-9)", "17778-88-0"),
+        "O": ("oxygen O2 (CAS 7782-44-7) or ozone O3 (CAS 10028-15-6)", "17778-80-2"),
+        "F": ("fluorine F2 (CAS 7782-41-4), hydrogen fluoride HF (CAS 7664-39-3) or a fluoride salt",
+              "14762-94-8"),
+        "Cl": ("chlorine Cl2 (CAS 7782-50-5), hydrogen chloride HCl (CAS 7647-01-0) or a chloride "
+               "salt such as sodium chloride NaCl (CAS 7647-14-5)", "22537-15-1"),
+        "Br": ("bromine Br2 (CAS 7726-95-6), hydrogen bromide HBr (CAS 10035-10-6) or a bromide salt",
+               "10097-32-2"),
+        "I": ("iodine I2 (CAS 7553-56-2), hydrogen iodide HI (CAS 10034-85-2) or an iodide salt",
+              "14362-44-8"),
+    }
+)  # fmt: skip
+
+#: Names shown for a CAS number where the database's common name describes another phase or
+#: form: the gas is hydrogen chloride, its aqueous solution hydrochloric acid.  Common practice.
+DISPLAY_NAMES: Final = MappingProxyType(
+    {
+        "7647-01-0": "hydrogen chloride",  # not "hydrochloric acid", the aqueous solution
+        "7664-39-3": "hydrogen fluoride",  # not "hydrofluoric acid"
+    }
+)
+
 #: "CAS 67-64-1", "CAS: 67-64-1", "CAS-No. 67-64-1", "CAS RN 67-64-1": the number alone resolves.
 CAS_PREFIX: Final = re.compile(
     r"^\s*CAS(?:\s*-?\s*(?:No\.?|RN|number))?\s*[:#]?\s*(\d{2,7}-\d{2}-\d)\s*$", re.I
@@ -123,6 +178,9 @@ AMBIGUOUS: Final = MappingProxyType(
     {
         "xylene": (("o-xylene", "95-47-6"), ("m-xylene", "108-38-3"), ("p-xylene", "106-42-3"),
                    ("mixed xylenes", "1330-20-7")),
+        # the commercial mixture (CAS 1330-20-7) has no record of its own in the database
+        "mixed xylenes": (("o-xylene", "95-47-6"), ("m-xylene", "108-38-3"), ("p-xylene", "106-42-3"),
+                          ("ethylbenzene", "100-41-4")),
         "xylenes": (("o-xylene", "95-47-6"), ("m-xylene", "108-38-3"), ("p-xylene", "106-42-3"),
                     ("mixed xylenes", "1330-20-7")),
         "butanol": (("1-butanol", "71-36-3"), ("2-butanol", "78-92-2"), ("isobutanol", "78-83-1"),
@@ -169,6 +227,14 @@ AMBIGUOUS: Final = MappingProxyType(
     }
 )  # fmt: skip
 
+#: The member an ambiguous formula resolves to where one isomer is overwhelmingly what is meant
+#: (Hill formula, lower-cased -> CAS); the others keep the database's choice.  Common practice.
+AMBIGUOUS_DEFAULTS: Final = MappingProxyType(
+    {
+        "c2h6o": "64-17-5",  # ethanol, the solvent, rather than dimethyl ether
+    }
+)
+
 #: Everyday names offered as close-match suggestions for a name that is not found.
 COMMON_NAMES: Final = (
     "air", "nitrogen", "oxygen", "argon", "helium", "hydrogen", "carbon dioxide", "carbon monoxide",
@@ -190,4 +256,7 @@ COMMON_NAMES: Final = (
     "acetic acid", "formic acid", "propionic acid", "acetonitrile", "propionitrile",
     "propylene carbonate", "dimethyl carbonate", "diethyl carbonate", "carbon disulfide", "phenol",
     "hydrogen peroxide", "ozone", "formaldehyde", "acetaldehyde", "vinyl chloride",
+    "triethylene glycol", "diethanolamine", "N-methyldiethanolamine", "piperazine",
+    "hydrogen chloride", "hydrogen fluoride", "hydrogen cyanide", "sodium chloride",
+    "mixed xylenes", "monoethylene glycol",
 )  # fmt: skip

@@ -625,7 +625,7 @@ def _ambiguity(text: str, sp: Species) -> str | None:
     others = ", ".join(f"{n} ({c})" for n, c in alternatives if c != sp.CAS)
     return (
         f"species {text!r} names several substances; it was resolved to {sp.identity}. "
-        f"Others it may mean: {others}. Pass the name or CAS number of the one you mean"
+        f"Others it may mean: {others}. Pass the name or CAS number of the one you mean."
     )
 
 
@@ -659,20 +659,29 @@ _UNKNOWN_LIMIT = 4096
 
 
 def suggestions(text: str, n: int = 4) -> list[str]:
-    """Everyday names and plant abbreviations close to ``text`` (for error messages)."""
+    """Everyday names and plant abbreviations close to ``text`` (for error messages).
+
+    Names that begin with ``text`` as a whole word come first ("acetic" -> "acetic acid"), then
+    names that begin with it ("chlorob" -> "chlorobenzene"), then close spellings ("tolune").
+    """
     vocabulary = {name.lower(): name for name in _names.COMMON_NAMES}
     vocabulary.update({key.lower(): key for key in _names.ALIASES})
-    hits = difflib.get_close_matches(text.lower(), list(vocabulary), n=n, cutoff=0.75)
-    return [vocabulary[h] for h in hits]
+    query = text.strip().lower()
+    hits: list[str] = []
+    if len(query) >= 3:
+        hits += sorted(v for v in vocabulary if v.startswith((query + " ", query + "-")))
+        hits += sorted(v for v in vocabulary if v.startswith(query) and v != query and v not in hits)
+    hits += [h for h in difflib.get_close_matches(query, list(vocabulary), n=n, cutoff=0.75) if h not in hits]
+    return [vocabulary[h] for h in hits[:n]]
 
 
 def _unknown(text: str, why: str) -> UnknownSpeciesError:
     close = suggestions(text)
     hint = f"did you mean {', '.join(repr(c) for c in close)}? " if close else ""
     return UnknownSpeciesError(
-        f"species {text!r} {why}; {hint}check the spelling, pass a CAS number such as '108-88-3', "
-        "or build it by hand: masstransfer.Species(name=..., molar_mass=... [kg/mol], formula=... "
-        "or smiles=..., and the constants your method needs)"
+        f"species {text!r} {why}; {hint}check the spelling, pass the full name or the substance's "
+        "CAS number, or build it by hand: masstransfer.Species(name=..., molar_mass=... [kg/mol], "
+        "formula=... or smiles=..., and the constants your method needs)"
     )
 
 
@@ -689,8 +698,27 @@ def _resolve(key: str) -> Species:
             + ", ".join(f"{n}, CAS {c}" for n, c in unclear)
             + "), so it was not guessed; pass the full name or the CAS number",
         )
+    generic = _names.UNCLEAR_NAMES.get(key.lower())
+    if generic is not None:
+        usage, members = generic
+        raise UnknownSpeciesError(
+            f"species {key!r} is a generic name that means different substances in different "
+            f"trades ({usage}): "
+            + "; ".join(f"{n}, CAS {c}" for n, c in members)
+            + "; it was not guessed: pass the full name, the abbreviation or the CAS number"
+        )
+    atom = _names.BARE_ATOMS.get(key) or _names.BARE_ATOMS.get(key.capitalize() if key.isupper() else "")
+    if atom is not None:
+        meant, atom_cas = atom
+        raise UnknownSpeciesError(
+            f"species {key!r} is the symbol of the free atom, a radical no process stream carries, "
+            f"so it was not used; you probably mean {meant}: pass that name or CAS number (the "
+            f"free atom itself is CAS {atom_cas})"
+        )
     m = _names.CAS_PREFIX.match(key)
-    query = alias or (m.group(1) if m else key)
+    ambiguous = _ambiguous_key(key)
+    preferred = _names.AMBIGUOUS_DEFAULTS.get(ambiguous) if ambiguous is not None else None
+    query = alias or (m.group(1) if m else preferred or key)
     with loading():
         return _lookup(query, original=key)
 
@@ -749,9 +777,29 @@ def _lookup(key: str, original: str | None = None) -> Species:
             MW=float(meta.MW),
             formula=meta.formula or None,
             smiles=meta.smiles or None,
-            name=str(meta.common_name or meta.CASs),
+            name=_display_name(str(meta.CASs), str(meta.common_name or meta.CASs)),
         )
     )
+
+
+#: Locants in a database name typed lower case: "n,n-" for N,N- (also O,O-, S,S-, N,N'-).
+_MULTI_LOCANT = re.compile(r"(?<![A-Za-z])([nos]'*(?:,[nos]'*)+)(?=-)")
+#: A single "n-" before a substituent with no straight-chain isomer ("n-methyl...", "n-tert-butyl",
+#: "n-(2-chloroethyl)") is the N locant; before "butyl", "propyl" or an alkane it means normal
+#: (n-butanol, n-hexane) and stays lower case.
+_N_LOCANT = re.compile(
+    r"(?<![A-Za-z])n(?=-(?:\(|methyl|ethyl|phenyl|vinyl|acetyl|formyl|benzyl|hydroxy|nitroso|"
+    r"cyclohexyl|allyl|chloro|bromo|amino|oxide|tert-|sec-|iso))"
+)
+
+
+def _display_name(cas: str, name: str) -> str:
+    """Return the name shown for a database species: its everyday form, locants in capitals."""
+    fixed = _names.DISPLAY_NAMES.get(cas)
+    if fixed is not None:
+        return fixed
+    name = _MULTI_LOCANT.sub(lambda m: m.group(1).upper(), name)
+    return _N_LOCANT.sub("N", name)
 
 
 #: Shorthand: two to four capitals ("BZ", "TEA", "LPG"), or up to six letters mixing two or more

@@ -146,3 +146,7 @@ __all__ = [
     "stanton_reynolds",
     "stanton_von_karman",
 ]
+
+
+def __dir__() -> list[str]:
+    return sorted(__all__)

@@ -156,18 +156,18 @@ def _const(value: float) -> Any:
     return f
 
 
-def _duct_hausen(Re: Any, Pr: Any, L_over_D: Any) -> Any:
-    Gz = Re * Pr / L_over_D
+def _duct_hausen(Re: Any, Pr: Any, L_over_d: Any) -> Any:
+    Gz = Re * Pr / L_over_d
     return 3.66 + 0.0668 * Gz / (1 + 0.04 * Gz ** (2 / 3))
 
 
-def _duct_graetz_leveque(Re: Any, Pr: Any, L_over_D: Any) -> Any:
-    Gz = Re * Pr / L_over_D
+def _duct_graetz_leveque(Re: Any, Pr: Any, L_over_d: Any) -> Any:
+    Gz = Re * Pr / L_over_d
     return (3.66**3 + 0.7**3 + (1.615 * Gz ** (1 / 3) - 0.7) ** 3) ** (1 / 3)
 
 
-def _duct_sieder_tate_laminar(Re: Any, Pr: Any, L_over_D: Any, mu_ratio: Any) -> Any:
-    return 1.86 * (Re * Pr / L_over_D) ** (1 / 3) * mu_ratio**0.14
+def _duct_sieder_tate_laminar(Re: Any, Pr: Any, L_over_d: Any, mu_ratio: Any) -> Any:
+    return 1.86 * (Re * Pr / L_over_d) ** (1 / 3) * mu_ratio**0.14
 
 
 def _duct_dittus_boelter(Re: Any, Pr: Any, heating: Any) -> Any:
@@ -246,12 +246,12 @@ def darcy_friction_smooth(Re: Any) -> Any:
     return f
 
 
-def _duct_gnielinski(Re: Any, Pr: Any, roughness: Any, D_over_L: Any, Pr_ratio: Any) -> Any:
+def _duct_gnielinski(Re: Any, Pr: Any, roughness: Any, d_over_L: Any, Pr_ratio: Any) -> Any:
     Re, eD = _arr(Re), _arr(roughness)
     f = _darcy_petukhov(Re)
     if bool(np.any(eD > 0.0)):
         f = np.where(eD > 0.0, _darcy_colebrook(Re, eD), f)
-    return _gnielinski_core(Re, Pr, f) * (1.0 + _arr(D_over_L) ** (2 / 3)) * _arr(Pr_ratio) ** 0.11
+    return _gnielinski_core(Re, Pr, f) * (1.0 + _arr(d_over_L) ** (2 / 3)) * _arr(Pr_ratio) ** 0.11
 
 
 def _duct_gnielinski_smooth(Re: Any, Pr: Any) -> Any:
@@ -414,9 +414,9 @@ def _bank_staggered(Re: Any, Pr: Any, Pr_ratio: Any, rows: Any, ST_over_SL: Any)
 # --- impinging jets (Martin 1977) ----------------------------------------------------
 
 
-def _jet_round(Re: Any, Pr: Any, H_over_D: Any, area_ratio: Any) -> Any:
+def _jet_round(Re: Any, Pr: Any, H_over_d: Any, area_ratio: Any) -> Any:
     s = _arr(area_ratio) ** 0.5
-    G = 2.0 * s * (1.0 - 2.2 * s) / (1.0 + 0.2 * (_arr(H_over_D) - 6.0) * s)
+    G = 2.0 * s * (1.0 - 2.2 * s) / (1.0 + 0.2 * (_arr(H_over_d) - 6.0) * s)
     return G * 2.0 * Re**0.5 * (1.0 + 0.005 * Re**0.55) ** 0.5 * Pr**0.42
 
 
@@ -439,12 +439,12 @@ _RECT_FLUX = np.array([8.23, 6.49, 5.33, 4.79, 4.12, 3.73, 3.61])
 _RECT_WALL = np.array([7.54, 5.60, 4.44, 3.96, 3.39, 3.08, 2.98])
 
 
-def _annulus_inner(Re: Any, Pr: Any, Di_over_Do: Any) -> Any:
-    return np.interp(_arr(Di_over_Do), _ANN_RATIO[1:], _ANN_INNER[1:]) + 0.0 * _arr(Re) * _arr(Pr)
+def _annulus_inner(Re: Any, Pr: Any, di_over_do: Any) -> Any:
+    return np.interp(_arr(di_over_do), _ANN_RATIO[1:], _ANN_INNER[1:]) + 0.0 * _arr(Re) * _arr(Pr)
 
 
-def _annulus_outer(Re: Any, Pr: Any, Di_over_Do: Any) -> Any:
-    return np.interp(_arr(Di_over_Do), _ANN_RATIO, _ANN_OUTER) + 0.0 * _arr(Re) * _arr(Pr)
+def _annulus_outer(Re: Any, Pr: Any, di_over_do: Any) -> Any:
+    return np.interp(_arr(di_over_do), _ANN_RATIO, _ANN_OUTER) + 0.0 * _arr(Re) * _arr(Pr)
 
 
 def _rect_wall(Re: Any, Pr: Any, aspect_ratio: Any) -> Any:
@@ -458,26 +458,26 @@ def _rect_flux(Re: Any, Pr: Any, aspect_ratio: Any) -> Any:
 # --- transitional duct flow (Gnielinski 2013) -----------------------------------------
 
 
-def _gnielinski_laminar_mean(Re: Any, Pr: Any, D_over_L: Any) -> Any:
-    x = Re * Pr * D_over_L
+def _gnielinski_laminar_mean(Re: Any, Pr: Any, d_over_L: Any) -> Any:
+    x = Re * Pr * d_over_L
     nu2 = 1.615 * x ** (1 / 3)
     nu3 = (2.0 / (1.0 + 22.0 * Pr)) ** (1 / 6) * x**0.5
     return (3.66**3 + 0.7**3 + (nu2 - 0.7) ** 3 + nu3**3) ** (1 / 3)
 
 
-def _gnielinski_turbulent_mean(Re: Any, Pr: Any, D_over_L: Any) -> Any:
+def _gnielinski_turbulent_mean(Re: Any, Pr: Any, d_over_L: Any) -> Any:
     xi = (1.8 * np.log10(Re) - 1.5) ** -2
     return (
         (xi / 8.0)
         * Re
         * Pr
         / (1.0 + 12.7 * np.sqrt(xi / 8.0) * (Pr ** (2 / 3) - 1.0))
-        * (1.0 + D_over_L ** (2 / 3))
+        * (1.0 + d_over_L ** (2 / 3))
     )
 
 
-def _duct_transitional(Re: Any, Pr: Any, D_over_L: Any) -> Any:
-    Re, Pr, dl = _arr(Re), _arr(Pr), _arr(D_over_L)
+def _duct_transitional(Re: Any, Pr: Any, d_over_L: Any) -> Any:
+    Re, Pr, dl = _arr(Re), _arr(Pr), _arr(d_over_L)
     gamma = (Re - 2300.0) / (1.0e4 - 2300.0)
     lam = _gnielinski_laminar_mean(2300.0, Pr, dl)
     turb = _gnielinski_turbulent_mean(1.0e4, Pr, dl)
@@ -722,7 +722,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="cylinder",
         convection="forced",
         regime="all",
-        length="cylinder diameter D",
+        length="cylinder diameter d",
         boundary=_ISO,
         inputs=_RP,
         envelope={"Re": (1e-2, 1e7), "Pr": (0.0, INF)},
@@ -741,7 +741,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="cylinder",
         convection="forced",
         regime="all",
-        length="cylinder diameter D",
+        length="cylinder diameter d",
         boundary=_ISO,
         inputs=_RP,
         envelope={"Re": (0.4, 4e5), "Pr": (0.7, INF)},
@@ -760,7 +760,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="cylinder",
         convection="forced",
         regime="all",
-        length="cylinder diameter D",
+        length="cylinder diameter d",
         boundary=_ISO,
         inputs=_RP,
         parameters={"Pr_ratio": 1.0},
@@ -782,7 +782,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="sphere",
         convection="forced",
         regime="all",
-        length="sphere diameter D",
+        length="sphere diameter d",
         boundary=_ISO,
         inputs=_RP,
         envelope={"Re": (0.0, 200.0), "Pr": (0.6, 2.7)},
@@ -801,7 +801,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="sphere",
         convection="forced",
         regime="all",
-        length="sphere diameter D",
+        length="sphere diameter d",
         boundary=_ISO,
         inputs=_RP,
         envelope={"Re": (2.0, 800.0), "Pr": (0.6, 2.7)},
@@ -818,7 +818,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="sphere",
         convection="forced",
         regime="all",
-        length="sphere diameter D",
+        length="sphere diameter d",
         boundary=_ISO,
         inputs=_RP,
         parameters={"mu_ratio": 1.0},
@@ -836,7 +836,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="sphere",
         convection="forced",
         regime="creeping",
-        length="sphere diameter D",
+        length="sphere diameter d",
         boundary=_ISO + ", rigid (immobile) interface",
         inputs=_RP,
         envelope={"Re": (0.0, 1.0), "Pr": (0.0, INF)},
@@ -854,7 +854,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="bubble or drop",
         convection="forced",
         regime="creeping",
-        length="drop diameter D",
+        length="drop diameter d",
         boundary=_ISO + ", fully mobile interface (continuous-phase resistance)",
         inputs=_RP,
         envelope={"Re": (0.0, 1.0), "Pr": (0.0, INF)},
@@ -872,7 +872,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="bubble or drop",
         convection="forced",
         regime="laminar",
-        length="bubble diameter D",
+        length="bubble diameter d",
         boundary=_ISO + ", fully mobile interface",
         inputs=_RP,
         envelope={"Re": (100.0, 1e4), "Pr": (1.0, INF)},
@@ -893,7 +893,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="duct",
         convection="forced",
         regime=_LAM,
-        length="diameter D",
+        length="diameter d",
         boundary="constant wall temperature/concentration",
         inputs=_RP,
         envelope={"Re": (0.0, 2300.0), "Pr": (0.0, INF)},
@@ -909,7 +909,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="duct",
         convection="forced",
         regime=_LAM,
-        length="diameter D",
+        length="diameter d",
         boundary="uniform wall flux",
         inputs=_RP,
         envelope={"Re": (0.0, 2300.0), "Pr": (0.0, INF)},
@@ -925,18 +925,18 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="duct",
         convection="forced",
         regime=_LAM,
-        length="diameter D",
+        length="diameter d",
         boundary="constant wall temperature/concentration, developed velocity profile",
         inputs=_RP,
-        parameters={"L_over_D": None},
+        parameters={"L_over_d": None},
         envelope={"Re": (0.0, 2300.0), "Pr": (0.0, INF)},
-        domain={"L_over_D": (1e-12, INF)},
+        domain={"L_over_d": (1e-12, INF)},
         fitted_on="heat",
         reference=f"Hausen (1943), Z. VDI Beih. Verfahrenstech. 4, 91; {_INC} Eq. (8.57)",
-        accuracy="fit to the Graetz solution: within 2 % for Gz = Re Pr D/L <= 100, up to about 11 % "
+        accuracy="fit to the Graetz solution: within 2 % for Gz = Re Pr d/L <= 100, up to about 11 % "
         "above it near Gz = 1e3 to 1e4 (+3.4 % as Gz grows without bound)",
         accuracy_pct=11.0,
-        notes="L_over_D = length of the transfer section over the diameter",
+        notes="L_over_d = length of the transfer section over the diameter",
         function=_duct_hausen,
     ),
     _r(
@@ -945,12 +945,12 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="duct",
         convection="forced",
         regime=_LAM,
-        length="diameter D",
+        length="diameter d",
         boundary="constant wall temperature/concentration, developed velocity profile",
         inputs=_RP,
-        parameters={"L_over_D": None},
+        parameters={"L_over_d": None},
         envelope={"Re": (0.0, 2300.0), "Pr": (0.0, INF)},
-        domain={"L_over_D": (1e-12, INF)},
+        domain={"L_over_d": (1e-12, INF)},
         fitted_on="both",
         reference="Leveque (1928), Ann. Mines 13, 201; combination as in VDI Heat Atlas, 2nd ed. "
         "(2010), Section G1, Eq. (12) (from memory)",
@@ -964,12 +964,12 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="duct",
         convection="forced",
         regime=_LAM,
-        length="diameter D",
+        length="diameter d",
         boundary="constant wall temperature",
         inputs=_RP,
-        parameters={"L_over_D": None, "mu_ratio": 1.0},
+        parameters={"L_over_d": None, "mu_ratio": 1.0},
         envelope={"Re": (0.0, 2300.0), "Pr": (0.48, 16700.0), "mu_ratio": (0.0044, 9.75)},
-        domain={"L_over_D": (1e-12, INF)},
+        domain={"L_over_d": (1e-12, INF)},
         fitted_on="heat",
         reference=f"Sieder & Tate (1936), Ind. Eng. Chem. 28, 1429; {_INC} Eq. (8.58)",
         accuracy="about 20 %; use only where the result exceeds 3.66",
@@ -982,7 +982,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="duct",
         convection="forced",
         regime=_TURB,
-        length="diameter D",
+        length="diameter d",
         boundary="either",
         inputs=_RP,
         parameters={"heating": 1.0},
@@ -992,7 +992,7 @@ RECORDS: tuple[Correlation, ...] = (
         reference=f"Dittus & Boelter (1930), Univ. Calif. Publ. Eng. 2, 443; {_INC} Eq. (8.60)",
         accuracy="up to 25 % (Incropera & DeWitt, Section 8.5)",
         accuracy_pct=25.0,
-        notes="heating=1 for a surface hotter than the fluid (Pr^0.4), 0 for cooling (Pr^0.3); L/D >= 10",
+        notes="heating=1 for a surface hotter than the fluid (Pr^0.4), 0 for cooling (Pr^0.3); L/d >= 10",
         function=_duct_dittus_boelter,
     ),
     _r(
@@ -1001,7 +1001,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="duct",
         convection="forced",
         regime=_TURB,
-        length="diameter D",
+        length="diameter d",
         boundary="either",
         inputs=_RP,
         parameters={"mu_ratio": 1.0},
@@ -1018,29 +1018,29 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="duct",
         convection="forced",
         regime=_TURB,
-        length="diameter D",
+        length="diameter d",
         boundary="either",
         inputs=_RP,
-        parameters={"roughness": 0.0, "D_over_L": 0.0, "Pr_ratio": 1.0},
+        parameters={"roughness": 0.0, "d_over_L": 0.0, "Pr_ratio": 1.0},
         envelope={
             "Re": (3000.0, 5e6),
             "Pr": (0.5, 2000.0),
             "roughness": (0.0, 0.05),
-            "D_over_L": (0.0, 1.0),
+            "d_over_L": (0.0, 1.0),
             "Pr_ratio": (0.05, 20.0),
         },
         fitted_on="heat",
         domain={"Re": (1000.0 + 1e-9, INF), "roughness": (0.0, 1.0)},
         reference=f"Gnielinski (1976), Int. Chem. Eng. 16, 359, with Petukhov's smooth-tube friction "
         f"factor (0.790 ln Re - 1.64)^-2; {_INC} Eqs. (8.62) and (8.21); entrance factor "
-        "1 + (D/L)^(2/3) and liquid property factor (Pr/Pr_w)^0.11 as in VDI Heat Atlas, 2nd ed. "
+        "1 + (d/L)^(2/3) and liquid property factor (Pr/Pr_w)^0.11 as in VDI Heat Atlas, 2nd ed. "
         "(2010), Section G1, Eqs. (27)-(29) (from memory); rough tubes with Colebrook's friction "
         "factor (Clamond's solution, as in fluids.friction.Clamond)",
         accuracy="about 10 % for smooth tubes (from memory); rough tubes with the Colebrook friction "
         "factor are an extension the source allows, less well tested",
         accuracy_pct=10.0,
-        notes="roughness = relative roughness e/D (0: smooth tube, Petukhov's friction factor); "
-        "D_over_L = D/L for the mean over a tube of length L (0: fully developed); Pr_ratio = "
+        notes="roughness = relative roughness e/d (0: smooth tube, Petukhov's friction factor); "
+        "d_over_L = d/L for the mean over a tube of length L (0: fully developed); Pr_ratio = "
         "Pr/Pr_w for liquids (1 for gases and for mass transfer)",
         function=_duct_gnielinski,
     ),
@@ -1050,7 +1050,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="duct",
         convection="forced",
         regime=_TURB,
-        length="diameter D",
+        length="diameter d",
         boundary="constant wall concentration",
         inputs=_RP,
         envelope={"Re": (2000.0, 70000.0), "Pr": (1000.0, 2260.0)},
@@ -1067,7 +1067,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="duct",
         convection="forced",
         regime=_TURB,
-        length="column diameter D",
+        length="column diameter d",
         boundary="constant wall concentration (evaporating film)",
         inputs=_RP,
         envelope={"Re": (2000.0, 35000.0), "Pr": (0.6, 2.5)},
@@ -1076,7 +1076,7 @@ RECORDS: tuple[Correlation, ...] = (
         "Operations, 3rd ed., Table 3.3 (from memory)",
         accuracy="about 10 % (from memory)",
         accuracy_pct=10.0,
-        notes="F-type basis: the source correlated Sh p_BM/P, so the value is F D/(c D_AB) (film "
+        notes="F-type basis: the source correlated Sh p_BM/P, so the value is F d/(c D_AB) (film "
         "factor F = k_G p_BM), which already contains the bulk-flow correction for diffusion "
         "through a stagnant gas; use it with high_flux_rate or as a low-flux k_c, and do not "
         "divide by y_BM again",
@@ -1222,7 +1222,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="horizontal cylinder",
         convection="free",
         regime="all",
-        length="cylinder diameter D",
+        length="cylinder diameter d",
         boundary=_ISO,
         inputs=_RAP,
         envelope={"Ra": (0.0, 1e12), "Pr": (0.0, INF)},
@@ -1238,7 +1238,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="sphere",
         convection="free",
         regime="all",
-        length="sphere diameter D",
+        length="sphere diameter d",
         boundary=_ISO,
         inputs=_RAP,
         envelope={"Ra": (0.0, 1e11), "Pr": (0.7, INF)},
@@ -1264,7 +1264,7 @@ RECORDS: tuple[Correlation, ...] = (
         "Phenomena, 2nd ed., Section 20.1 (from memory)",
         accuracy="model; contact time must be known or fitted",
         accuracy_pct=30.0,
-        notes="k = 2 (D/(pi t))^0.5 with t = L/u; Sh = kL/D",
+        notes="k_c = 2 (D/(pi t))^0.5 with t = L/u; Sh = k_c L/D",
         function=_higbie,
     ),
     _r(
@@ -1281,7 +1281,7 @@ RECORDS: tuple[Correlation, ...] = (
         reference="Danckwerts (1951), Ind. Eng. Chem. 43, 1460",
         accuracy="model; the renewal rate must be fitted",
         accuracy_pct=30.0,
-        notes="renewal = s L^2 / D (s the fractional renewal rate [1/s]); k = (D s)^0.5",
+        notes="renewal = s L^2 / D (s the fractional renewal rate [1/s]); k_c = (D s)^0.5",
         function=_danckwerts,
     ),
     _r(
@@ -1378,7 +1378,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="tube bank",
         convection="forced",
         regime="all",
-        length="tube outer diameter D; Re on the maximum velocity between the tubes",
+        length="tube outer diameter d; Re on the maximum velocity between the tubes",
         boundary=_ISO,
         inputs=_RP,
         parameters={"Pr_ratio": 1.0, "rows": 20.0},
@@ -1404,7 +1404,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="tube bank",
         convection="forced",
         regime="all",
-        length="tube outer diameter D; Re on the maximum velocity between the tubes",
+        length="tube outer diameter d; Re on the maximum velocity between the tubes",
         boundary=_ISO,
         inputs=_RP,
         parameters={"Pr_ratio": 1.0, "rows": 20.0, "ST_over_SL": None},
@@ -1431,22 +1431,22 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="impinging round jet",
         convection="forced",
         regime=_TURB,
-        length="nozzle diameter D (Re on the nozzle exit velocity)",
+        length="nozzle diameter d (Re on the nozzle exit velocity)",
         boundary=_ISO,
         inputs=_RP,
-        parameters={"H_over_D": None, "area_ratio": None},
+        parameters={"H_over_d": None, "area_ratio": None},
         envelope={
             "Re": (2000.0, 4e5),
             "Pr": (0.6, 10.0),
-            "H_over_D": (2.0, 12.0),
+            "H_over_d": (2.0, 12.0),
             "area_ratio": (0.004, 0.04),
         },
-        domain={"H_over_D": (1e-6, INF), "area_ratio": (1e-12, 0.2)},
+        domain={"H_over_d": (1e-6, INF), "area_ratio": (1e-12, 0.2)},
         fitted_on="heat",
         reference=f"Martin (1977), Adv. Heat Transfer 13, 1; {_INC} Eqs. (7.79)-(7.80) (from memory)",
         accuracy="about 15 % (from memory)",
         accuracy_pct=15.0,
-        notes="H_over_D = nozzle-to-plate distance over D; area_ratio = D^2/(4 r^2), r the radius of "
+        notes="H_over_d = nozzle-to-plate distance over d; area_ratio = d^2/(4 r^2), r the radius of "
         "the circle the average is taken over; the data behind it were for gases, and the Pr^0.42 "
         "dependence was taken from other work, so the Pr envelope here (0.6 to 10) is a cautious "
         "choice of this library, not the source's",
@@ -1485,18 +1485,18 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="annulus",
         convection="forced",
         regime=_LAM,
-        length="hydraulic diameter D_o - D_i",
+        length="hydraulic diameter d_o - d_i",
         boundary="inner wall at constant temperature/concentration, outer wall insulated",
         inputs=_RP,
-        parameters={"Di_over_Do": None},
-        envelope={"Re": (0.0, 2300.0), "Pr": (0.0, INF), "Di_over_Do": (0.05, 1.0)},
-        domain={"Di_over_Do": (0.05, 1.0)},
+        parameters={"di_over_do": None},
+        envelope={"Re": (0.0, 2300.0), "Pr": (0.0, INF), "di_over_do": (0.05, 1.0)},
+        domain={"di_over_do": (0.05, 1.0)},
         fitted_on="both",
         reference=f"Kays & Perkins, in Handbook of Heat Transfer (1972), ch. 7; {_INC} Table 8.2 "
         "(from memory)",
         accuracy="theory at the tabulated diameter ratios; linear interpolation between them",
         accuracy_pct=5.0,
-        notes="Di_over_Do = inner over outer diameter; tabulated at 0.05, 0.10, 0.25, 0.50 and 1",
+        notes="di_over_do = inner over outer diameter; tabulated at 0.05, 0.10, 0.25, 0.50 and 1",
         function=_annulus_inner,
     ),
     _r(
@@ -1505,18 +1505,18 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="annulus",
         convection="forced",
         regime=_LAM,
-        length="hydraulic diameter D_o - D_i",
+        length="hydraulic diameter d_o - d_i",
         boundary="outer wall at constant temperature/concentration, inner wall insulated",
         inputs=_RP,
-        parameters={"Di_over_Do": None},
-        envelope={"Re": (0.0, 2300.0), "Pr": (0.0, INF), "Di_over_Do": (0.0, 1.0)},
-        domain={"Di_over_Do": (0.0, 1.0)},
+        parameters={"di_over_do": None},
+        envelope={"Re": (0.0, 2300.0), "Pr": (0.0, INF), "di_over_do": (0.0, 1.0)},
+        domain={"di_over_do": (0.0, 1.0)},
         fitted_on="both",
         reference=f"Kays & Perkins, in Handbook of Heat Transfer (1972), ch. 7; {_INC} Table 8.2 "
         "(from memory)",
         accuracy="theory at the tabulated diameter ratios; linear interpolation between them",
         accuracy_pct=5.0,
-        notes="Di_over_Do = inner over outer diameter (0: circular tube, 3.66)",
+        notes="di_over_do = inner over outer diameter (0: circular tube, 3.66)",
         function=_annulus_outer,
     ),
     _r(
@@ -1566,7 +1566,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="non-circular duct",
         convection="forced",
         regime=_TURB,
-        length="hydraulic diameter 4A/P (D_o - D_i for an annulus)",
+        length="hydraulic diameter 4A/P (d_o - d_i for an annulus)",
         boundary="either",
         inputs=_RP,
         envelope={"Re": (3000.0, 5e6), "Pr": (0.5, 2000.0)},
@@ -1587,19 +1587,19 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="duct",
         convection="forced",
         regime="transitional",
-        length="diameter D",
+        length="diameter d",
         boundary="constant wall temperature/concentration",
         inputs=_RP,
-        parameters={"D_over_L": 0.0},
-        envelope={"Re": (2300.0, 1e4), "Pr": (0.6, 1000.0), "D_over_L": (0.0, 1.0)},
-        domain={"D_over_L": (0.0, INF)},
+        parameters={"d_over_L": 0.0},
+        envelope={"Re": (2300.0, 1e4), "Pr": (0.6, 1000.0), "d_over_L": (0.0, 1.0)},
+        domain={"d_over_L": (0.0, INF)},
         fitted_on="heat",
         reference="Gnielinski (2013), Int. J. Heat Mass Transfer 63, 134, Eqs. (5)-(7); VDI Heat "
         "Atlas, 2nd ed. (2010), Section G1, Eqs. (12), (26)-(30) (from memory)",
         accuracy="about 15 % against the transitional data (from memory)",
         accuracy_pct=15.0,
         notes="linear in Re between the laminar mean Nu at Re = 2300 and the turbulent one at 1e4, "
-        "both for the length L (D_over_L = D/L; 0 for a long tube)",
+        "both for the length L (d_over_L = d/L; 0 for a long tube)",
         function=_duct_transitional,
     ),
     # drops and bubbles ---------------------------------------------------------------------------
@@ -1609,7 +1609,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="bubble or drop",
         convection="forced",
         regime="creeping",
-        length="drop diameter D",
+        length="drop diameter d",
         boundary=_ISO + ", Hadamard-Rybczynski internal circulation (continuous-phase resistance)",
         inputs=_RP,
         parameters={"viscosity_ratio": None},
@@ -1631,7 +1631,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="bubble or drop",
         convection="interfacial",
         regime="all",
-        length="drop diameter D; Sh = k_d D / D_d with the diffusivity inside the drop",
+        length="drop diameter d; Sh = k_d d / D_d with the diffusivity inside the drop",
         boundary="constant surface concentration, molecular diffusion inside a sphere",
         inputs=_RP,
         envelope={"Re": (0.0, INF), "Pr": (0.0, INF)},
@@ -1651,7 +1651,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="bubble or drop",
         convection="interfacial",
         regime="creeping",
-        length="drop diameter D; Sh = k_d D / D_d with the diffusivity inside the drop",
+        length="drop diameter d; Sh = k_d d / D_d with the diffusivity inside the drop",
         boundary="constant surface concentration, Hadamard-Rybczynski circulation inside",
         inputs=_RP,
         envelope={"Re": (0.0, 1.0), "Pr": (0.0, INF)},
@@ -1670,7 +1670,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="bubble or drop",
         convection="interfacial",
         regime=_TURB,
-        length="drop diameter D; Re = U D/nu_d and Sc = nu_d/D_d both of the drop phase, so Re Sc = U D/D_d",
+        length="drop diameter d; Re = U d/nu_d and Sc = nu_d/D_d both of the drop phase, so Re Sc = U d/D_d",
         boundary="dispersed-phase resistance, oscillating drop",
         inputs=_RP,
         parameters={"viscosity_ratio": None},
@@ -1692,7 +1692,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="sphere",
         convection="forced",
         regime="creeping",
-        length="sphere diameter D",
+        length="sphere diameter d",
         boundary=_ISO + ", rigid interface",
         inputs=_RP,
         envelope={"Re": (0.0, 1.0), "Pr": (0.0, INF)},
@@ -1711,7 +1711,7 @@ RECORDS: tuple[Correlation, ...] = (
         geometry="sphere",
         convection="forced",
         regime="all",
-        length="sphere diameter D",
+        length="sphere diameter d",
         boundary=_ISO + ", rigid interface",
         inputs=_RP,
         envelope={"Re": (1.0, 2000.0), "Pr": (10.0, INF)},

@@ -698,8 +698,8 @@ def fourier_mass(t: ArrayLike, L: ArrayLike, D: ArrayLike) -> FloatOrArray:
 
 
 @guard
-def graetz(Re: ArrayLike, Pr: ArrayLike, D: ArrayLike, x: ArrayLike) -> FloatOrArray:
-    r"""Graetz number :math:`Gz = (D/x)\,Re\,Pr` (use Sc for mass transfer).
+def graetz(Re: ArrayLike, Pr: ArrayLike, diameter: ArrayLike, x: ArrayLike) -> FloatOrArray:
+    r"""Graetz number :math:`Gz = (d/x)\,Re\,Pr` (use Sc for mass transfer).
 
     Parameters
     ----------
@@ -707,8 +707,8 @@ def graetz(Re: ArrayLike, Pr: ArrayLike, D: ArrayLike, x: ArrayLike) -> FloatOrA
         Reynolds number on the duct diameter [-].
     Pr : float or array_like
         Prandtl number (Schmidt number for mass transfer) [-].
-    D : float or array_like
-        Duct (hydraulic) diameter [m].
+    diameter : float or array_like
+        Duct (hydraulic) diameter d [m].
     x : float or array_like
         Distance from the start of the transfer section, or its length [m].
 
@@ -728,8 +728,8 @@ def graetz(Re: ArrayLike, Pr: ArrayLike, D: ArrayLike, x: ArrayLike) -> FloatOrA
     50.0
 
     """
-    a = _pos(Re=Re, Pr=Pr, D=D, x=x)
-    return finish(a["D"] / a["x"] * a["Re"] * a["Pr"])
+    a = _pos(Re=Re, Pr=Pr, diameter=diameter, x=x)
+    return finish(a["diameter"] / a["x"] * a["Re"] * a["Pr"])
 
 
 @guard

@@ -21,7 +21,14 @@ Transport = Literal["heat", "mass", "both"]
 Kind = Literal["heat", "mass"]
 
 #: Inputs that must be strictly positive (the equations divide by them or take logs).
-_STRICTLY_POSITIVE = frozenset({"Pr", "mu_ratio", "Pr_ratio", "porosity", "L_over_D", "Re_c"})
+_STRICTLY_POSITIVE = frozenset({"Pr", "mu_ratio", "Pr_ratio", "porosity", "L_over_d", "Re_c"})
+#: Parameter names of earlier versions, which wrote D for a diameter -> the present name.
+_RENAMED = {
+    "L_over_D": "L_over_d",
+    "D_over_L": "d_over_L",
+    "H_over_D": "H_over_d",
+    "Di_over_Do": "di_over_do",
+}
 
 #: Names of the inputs in the heat form and the mass form.
 _MASS_NAME = {"Pr": "Sc", "Nu": "Sh"}
@@ -381,6 +388,9 @@ class Correlation:
                 hint = " (for mass transfer pass Sc, not Pr)"
             elif transport == "heat" and "Sc" in unknown:
                 hint = " (for heat transfer pass Pr, not Sc)"
+            renamed = [f"{u} is now {_RENAMED[u]}" for u in unknown if u in _RENAMED]
+            if renamed:
+                hint = f" ({'; '.join(renamed)}: d is the diameter, D only ever a diffusivity)"
             raise InputValueError(
                 f"correlation {self.slug!r} does not use {', '.join(repr(u) for u in unknown)}{hint}; "
                 f"it takes {', '.join(self.accepted(transport))}"

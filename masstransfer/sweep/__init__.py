@@ -18,3 +18,7 @@ from __future__ import annotations
 from ._grid import design_grid, evaluate, evaporation_flux
 
 __all__ = ["design_grid", "evaluate", "evaporation_flux"]
+
+
+def __dir__() -> list[str]:
+    return sorted(__all__)

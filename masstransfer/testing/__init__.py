@@ -37,3 +37,7 @@ __all__ = [
     "gas_states",
     "liquid_states",
 ]
+
+
+def __dir__() -> list[str]:
+    return sorted(__all__)

@@ -36,7 +36,6 @@ from masstransfer.errors import AmbiguousSpeciesWarning, UnknownSpeciesError
         ("HCN", "74-90-8"),  # a formula that looks like an abbreviation
         ("WATER", "7732-18-5"),  # an all-capital name
         ("STEAM", "7732-18-5"),
-        ("GLYCOL", "107-21-1"),
         ("HCL", "7647-01-0"),  # a formula typed in capitals
         ("NACL", "7647-14-5"),
         # condensed structural formulas: the database alone reads them as a bare formula and
@@ -116,7 +115,12 @@ def test_unknown_name_is_remembered():
 
 @pytest.mark.parametrize(
     ("query", "others"),
-    [("xylene", ("m-xylene", "p-xylene")), ("C2H6O", ("ethanol",)), ("butanol", ("2-butanol",))],
+    [
+        ("xylene", ("m-xylene", "p-xylene")),
+        ("xylenes", ("m-xylene", "p-xylene")),
+        ("C2H6O", ("dimethyl ether",)),
+        ("butanol", ("2-butanol",)),
+    ],
 )
 def test_ambiguous_name_or_formula_warns_naming_choice_and_alternatives(query, others):
     with pytest.warns(AmbiguousSpeciesWarning) as rec:
@@ -126,6 +130,135 @@ def test_ambiguous_name_or_formula_warns_naming_choice_and_alternatives(query, o
     assert sp.CAS in message
     for other in others:
         assert other in message
+    assert message.endswith(".")
+
+
+def test_plural_xylenes_resolves_like_xylene():
+    with pytest.warns(AmbiguousSpeciesWarning):
+        singular = mt.species("xylene")
+    for plural in ("xylenes", "Xylenes", "mixed xylenes"):
+        with pytest.warns(AmbiguousSpeciesWarning, match="names several substances"):
+            assert mt.species(plural).CAS == singular.CAS
+
+
+def test_formula_of_ethanol_and_dimethyl_ether_means_ethanol():
+    # C2H6O in a process or laboratory is the solvent ethanol (common practice); the warning
+    # still names dimethyl ether
+    with pytest.warns(AmbiguousSpeciesWarning, match=r"dimethyl ether \(115-10-6\)"):
+        assert mt.species("C2H6O").CAS == "64-17-5"
+
+
+@pytest.mark.parametrize("query", ["glycol", "Glycol", "GLYCOL", "glycols"])
+def test_glycol_alone_is_refused_naming_the_glycols(query):
+    # in gas dehydration "glycol" is TEG, in coolants MEG (common practice)
+    with pytest.raises(UnknownSpeciesError, match="not guessed") as info:
+        mt.species(query)
+    message = str(info.value)
+    for word in (
+        "MEG",
+        "DEG",
+        "TEG",
+        "ethylene glycol",
+        "diethylene glycol",
+        "triethylene glycol",
+        "107-21-1",
+        "111-46-6",
+        "112-27-6",
+        "gas dehydration",
+    ):
+        assert word in message
+    assert "glycerol" not in message  # no spelling suggestion for a refused name
+
+
+@pytest.mark.parametrize(
+    ("query", "meant"),
+    [
+        ("Cl", ("chlorine Cl2", "hydrogen chloride", "chloride salt")),
+        ("CL", ("chlorine Cl2",)),
+        ("F", ("fluorine F2", "hydrogen fluoride")),
+        ("Br", ("bromine Br2",)),
+        ("I", ("iodine I2",)),
+        ("O", ("oxygen O2",)),
+        ("N", ("nitrogen N2",)),
+        ("H", ("hydrogen H2",)),
+    ],
+)
+def test_bare_symbol_of_a_diatomic_element_is_refused_naming_the_molecule(query, meant):
+    with pytest.raises(UnknownSpeciesError, match="free atom") as info:
+        mt.species(query)
+    for word in meant:
+        assert word in str(info.value)
+
+
+@pytest.mark.parametrize(
+    ("query", "cas"),
+    [
+        # CAS numbers of the elements (from memory); the database resolves the symbol to them
+        ("He", "7440-59-7"),
+        ("Ne", "7440-01-9"),
+        ("Ar", "7440-37-1"),
+        ("Kr", "7439-90-9"),
+        ("Xe", "7440-63-3"),
+        ("Hg", "7439-97-6"),  # mercury vapour
+        ("Na", "7440-23-5"),
+        ("Cl2", "7782-50-5"),
+        ("chlorine", "7782-50-5"),
+    ],
+)
+def test_monatomic_elements_and_the_molecules_still_resolve(query, cas):
+    assert cas == mt.species(query).CAS
+
+
+def test_the_free_atom_is_still_reached_by_its_cas_number():
+    assert mt.species("22537-15-1").formula == "Cl"
+
+
+@pytest.mark.parametrize("query", ["HCl", "HCL", "hydrogen chloride", "7647-01-0"])
+def test_hydrogen_chloride_is_named_as_the_gas(query):
+    # the aqueous solution is what "hydrochloric acid" means (common practice)
+    assert mt.species(query).name == "hydrogen chloride"
+
+
+@pytest.mark.parametrize(
+    ("query", "shown"),
+    [
+        ("MDEA", "N-methyldiethanolamine"),
+        ("DMF", "N,N-dimethylformamide"),
+        ("DMAC", "N,N-dimethylacetamide"),
+        ("n-hexane", "hexane"),  # the n- of a normal alkane is not a locant
+        ("n-butanol", "butanol"),
+    ],
+)
+def test_displayed_names_write_locants_in_capitals(query, shown):
+    assert shown in mt.species(query).name
+    assert "n,n-" not in mt.species(query).name
+    assert "n-methyl" not in mt.species(query).name
+
+
+@pytest.mark.parametrize(
+    ("database_name", "shown"),
+    [
+        # names as the chemicals database stores them, lower case throughout
+        ("n,n'-diphenyl-p-phenylenediamine", "N,N'-diphenyl-p-phenylenediamine"),
+        ("n-benzyl-2-chloro-n-(2-chloroethyl)ethanamine", "N-benzyl-2-chloro-N-(2-chloroethyl)ethanamine"),
+        ("n-tert-butylformamide", "N-tert-butylformamide"),
+        ("pyridine n-oxide", "pyridine N-oxide"),
+        ("o,o-diethyl phosphorothioate", "O,O-diethyl phosphorothioate"),
+        ("n-butyl vinyl ether", "n-butyl vinyl ether"),  # normal butyl
+        ("n-propyl acrylate", "n-propyl acrylate"),
+        ("o-xylene", "o-xylene"),  # ortho
+    ],
+)
+def test_locants_are_capitals_and_normal_or_ortho_stay_lower_case(database_name, shown):
+    from masstransfer.substances._species import _display_name
+
+    assert _display_name("0-00-0", database_name) == shown
+
+
+def test_a_word_that_begins_a_known_name_is_offered_that_name():
+    with pytest.raises(UnknownSpeciesError, match="did you mean 'acetic acid'") as info:
+        mt.species("acetic")
+    assert "108-88-3" not in str(info.value)  # no unrelated example number
 
 
 def test_identity_line():

@@ -2,6 +2,7 @@ from __future__ import annotations
 
 import functools
 import math
+import re
 import warnings
 
 import numpy as np
@@ -142,19 +143,19 @@ _POINTS = [
     ("duct-laminar-constant-flux", {"Re": 1000.0, "Pr": 5.0}, 4.36, f"{INC} Eq. 8.53"),
     (
         "duct-entry-hausen",
-        {"Re": 1000.0, "Pr": 5.0, "L_over_D": 100.0},
+        {"Re": 1000.0, "Pr": 5.0, "L_over_d": 100.0},
         3.66 + 0.0668 * 50 / (1 + 0.04 * 50 ** (2 / 3)),
         f"{INC} Eq. 8.57",
     ),
     (
         "duct-entry-graetz-leveque",
-        {"Re": 1000.0, "Pr": 5.0, "L_over_D": 10.0},
+        {"Re": 1000.0, "Pr": 5.0, "L_over_d": 10.0},
         (3.66**3 + 0.7**3 + (1.615 * 500 ** (1 / 3) - 0.7) ** 3) ** (1 / 3),
         "VDI Heat Atlas G1 Eq. 12 (from memory)",
     ),
     (
         "duct-entry-sieder-tate-laminar",
-        {"Re": 1000.0, "Pr": 5.0, "L_over_D": 10.0},
+        {"Re": 1000.0, "Pr": 5.0, "L_over_d": 10.0},
         1.86 * 500 ** (1 / 3),
         f"{INC} Eq. 8.58",
     ),
@@ -183,7 +184,7 @@ _POINTS = [
     ),
     (
         "duct-gnielinski",
-        {"Re": 5e4, "Pr": 3.0, "D_over_L": 0.05, "Pr_ratio": 2.0},
+        {"Re": 5e4, "Pr": 3.0, "d_over_L": 0.05, "Pr_ratio": 2.0},
         (f_p := (0.790 * math.log(5e4) - 1.64) ** -2)
         / 8
         * (5e4 - 1000)
@@ -296,7 +297,7 @@ _POINTS = [
     ),
     (
         "jet-round-martin",
-        {"Re": 2e4, "Pr": 0.7, "H_over_D": 5.0, "area_ratio": 0.01},
+        {"Re": 2e4, "Pr": 0.7, "H_over_d": 5.0, "area_ratio": 0.01},
         2
         * 0.1
         * (1 - 0.22)
@@ -313,8 +314,8 @@ _POINTS = [
         3.06 / (10 + 5 + 2.78) * 1e4 ** (0.695 - 1 / (5 + 2.5**1.33 + 3.06)) * 0.7**0.42,
         f"{INC} Eqs. 7.83-7.84 (from memory); Martin 1977",
     ),
-    ("annulus-laminar-inner-wall", {"Re": 1000.0, "Pr": 5.0, "Di_over_Do": 0.25}, 7.37, f"{INC} Table 8.2"),
-    ("annulus-laminar-outer-wall", {"Re": 1000.0, "Pr": 5.0, "Di_over_Do": 0.5}, 4.43, f"{INC} Table 8.2"),
+    ("annulus-laminar-inner-wall", {"Re": 1000.0, "Pr": 5.0, "di_over_do": 0.25}, 7.37, f"{INC} Table 8.2"),
+    ("annulus-laminar-outer-wall", {"Re": 1000.0, "Pr": 5.0, "di_over_do": 0.5}, 4.43, f"{INC} Table 8.2"),
     (
         "rectangular-duct-laminar-constant-wall",
         {"Re": 1000.0, "Pr": 5.0, "aspect_ratio": 0.5},
@@ -339,7 +340,7 @@ _POINTS = [
     ),
     (
         "duct-transitional-gnielinski",
-        {"Re": 5000.0, "Pr": 5.0, "D_over_L": 0.01},
+        {"Re": 5000.0, "Pr": 5.0, "d_over_L": 0.01},
         (1 - 2700 / 7700)
         * (
             3.66**3
@@ -539,9 +540,9 @@ def test_laminar_duct_values():
 @pytest.mark.parametrize("slug", ["duct-entry-hausen", "duct-entry-graetz-leveque"])
 def test_developing_flow_approaches_fully_developed(slug):
     rec = cat.correlation(slug)
-    far = rec.nusselt(Re=500.0, Pr=0.7, L_over_D=1e7)
+    far = rec.nusselt(Re=500.0, Pr=0.7, L_over_d=1e7)
     assert far == pytest.approx(3.66, rel=1e-3)
-    near = rec.nusselt(Re=500.0, Pr=0.7, L_over_D=np.array([1.0, 10.0, 100.0, 1000.0]))
+    near = rec.nusselt(Re=500.0, Pr=0.7, L_over_d=np.array([1.0, 10.0, 100.0, 1000.0]))
     assert np.all(np.diff(near) < 0)
 
 
@@ -655,12 +656,26 @@ def test_unused_or_missing_inputs_are_errors():
     rec = cat.correlation("sphere-ranz-marshall")
     with pytest.raises(mt.errors.InputValueError, match=r"does not use 'Pr'.*pass Sc"):
         rec.sherwood(Re=10.0, Pr=0.7)
-    with pytest.raises(mt.errors.InputValueError, match="does not use 'L_over_D'"):
-        rec.nusselt(Re=10.0, Pr=0.7, L_over_D=3.0)
-    with pytest.raises(mt.errors.InputValueError, match="needs L_over_D"):
+    with pytest.raises(mt.errors.InputValueError, match="does not use 'L_over_d'"):
+        rec.nusselt(Re=10.0, Pr=0.7, L_over_d=3.0)
+    with pytest.raises(mt.errors.InputValueError, match="needs L_over_d"):
         cat.correlation("duct-entry-hausen").nusselt(Re=100.0, Pr=0.7)
     with pytest.raises(mt.errors.InputValueError, match="broadcast"):
         rec.nusselt(Re=np.ones(3), Pr=np.ones(2))
+
+
+def test_a_parameter_name_of_earlier_versions_names_its_successor():
+    with pytest.raises(mt.errors.InputValueError, match="L_over_D is now L_over_d"):
+        cat.correlation("duct-entry-hausen").nusselt(Re=100.0, Pr=0.7, L_over_D=20.0)
+
+
+@pytest.mark.parametrize("rec", cat.all_correlations(), ids=lambda r: r.slug)
+def test_no_record_writes_D_for_a_diameter(rec):
+    # D is only ever a diffusivity (DEVELOPERS.md vocabulary); a diameter is d (Sh = k_c L/D stays)
+    texts = " ".join(str(t) for t in (rec.length, rec.notes, rec.accuracy, rec.title))
+    assert re.search(r"diameter D\b|\bD/L\b|\bL/D\s*[<>=]|e/D\b|\bD_[io]\b", texts) is None
+    for name in (*rec.parameters, *rec.envelope, *rec.domain):
+        assert re.search(r"(^|_)D(_|$)|^D[a-z]_|_D[a-z]$", name) is None, name
 
 
 # --- invariants ---------------------------------------------------------------------------
@@ -678,13 +693,13 @@ def _inside(rec, name, draw_fraction):
 
 
 _DEFAULTS = {
-    "L_over_D": 20.0,
+    "L_over_d": 20.0,
     "xi_over_x": 0.3,
     "porosity": 0.4,
-    "H_over_D": 6.0,
+    "H_over_d": 6.0,
     "area_ratio": 0.01,
     "H_over_W": 5.0,
-    "Di_over_Do": 0.5,
+    "di_over_do": 0.5,
     "aspect_ratio": 0.5,
     "viscosity_ratio": 1.0,
     "ST_over_SL": 1.0,
@@ -1012,25 +1027,25 @@ _EXACT = [
     # laminar thermal entry: the Graetz series at Gz = 1 (long tube) and Gz = 1000 (short entry)
     (
         "duct-entry-hausen",
-        {"Re": 2000.0, "Pr": 5.0, "L_over_D": 10.0},
+        {"Re": 2000.0, "Pr": 5.0, "L_over_d": 10.0},
         lambda: _graetz_mean_nusselt(1000.0),
         "Graetz series",
     ),
     (
         "duct-entry-hausen",
-        {"Re": 100.0, "Pr": 1.0, "L_over_D": 100.0},
+        {"Re": 100.0, "Pr": 1.0, "L_over_d": 100.0},
         lambda: _graetz_mean_nusselt(1.0),
         "Graetz series",
     ),
     (
         "duct-entry-graetz-leveque",
-        {"Re": 2000.0, "Pr": 5.0, "L_over_D": 10.0},
+        {"Re": 2000.0, "Pr": 5.0, "L_over_d": 10.0},
         lambda: _graetz_mean_nusselt(1000.0),
         "Graetz series",
     ),
     (
         "duct-entry-graetz-leveque",
-        {"Re": 100.0, "Pr": 1.0, "L_over_D": 100.0},
+        {"Re": 100.0, "Pr": 1.0, "L_over_d": 100.0},
         lambda: _graetz_mean_nusselt(1.0),
         "Graetz series",
     ),

@@ -30,6 +30,7 @@ def test_groups_by_hand():
     assert dl.fourier_heat(100.0, 0.01, 1e-7) == pytest.approx(0.1)
     assert dl.fourier_mass(3600.0, 0.001, 1e-11) == pytest.approx(0.036)
     assert dl.graetz(1000.0, 5.0, 0.01, 1.0) == pytest.approx(50.0)
+    assert dl.graetz(Re=1000.0, Pr=5.0, diameter=0.01, x=1.0) == pytest.approx(50.0)  # d, not D
     assert dl.archimedes(0.002, 998.0, 1.2, 1e-3) == pytest.approx(
         9.80665 * 0.002**3 * 998.0 * (998.0 - 1.2) / 1e-6
     )
