@@ -32,4 +32,4 @@ DEBYE: Final[float] = 1e-21 / SPEED_OF_LIGHT
 
 
 def __dir__() -> list[str]:
-    return sorted(__all__)
+    return sorted([*__all__, "__all__"])  # documentation tools look for __all__ in dir()

@@ -91,4 +91,4 @@ class UnitError(InputTypeError):
 
 
 def __dir__() -> list[str]:
-    return sorted(__all__)
+    return sorted([*__all__, "__all__"])  # documentation tools look for __all__ in dir()

@@ -101,4 +101,4 @@ def quantities(result: Any, registry: Any = None) -> dict[str, Any]:
 
 
 def __dir__() -> list[str]:
-    return sorted(__all__)
+    return sorted([*__all__, "__all__"])  # documentation tools look for __all__ in dir()

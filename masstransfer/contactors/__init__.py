@@ -114,4 +114,4 @@ __all__ = [
 
 
 def __dir__() -> list[str]:
-    return sorted(__all__)
+    return sorted([*__all__, "__all__"])  # documentation tools look for __all__ in dir()

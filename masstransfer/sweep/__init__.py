@@ -21,4 +21,4 @@ __all__ = ["design_grid", "evaluate", "evaporation_flux"]
 
 
 def __dir__() -> list[str]:
-    return sorted(__all__)
+    return sorted([*__all__, "__all__"])  # documentation tools look for __all__ in dir()
