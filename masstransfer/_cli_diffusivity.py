@@ -19,6 +19,7 @@ _CLI_WORDS = (
     ("use masstransfer.gas_diffusivity", "use --phase gas"),
     ("pass the system pressure P=", "pass the system pressure with -P"),
     ("phase='gas' or phase='liquid'", "--phase gas or --phase liquid"),
+    ("method='nernst-haskell'", "--method nernst-haskell"),
 )
 
 
