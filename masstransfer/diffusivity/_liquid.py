@@ -555,9 +555,10 @@ def nernst_haskell(
     References
     ----------
     Nernst, W. (1888). Zur Kinetik der in Lösung befindlichen Körper. *Z. Phys. Chem.* 2,
-    613-637.
+    613-637 (from memory).
 
-    Haskell, R. (1908). *Phys. Rev.* 27, 145.
+    Haskell, R. (1908). The diffusion of electrolytes. *Phys. Rev.* 27, 145-182 (from
+    memory).
 
     Vanýsek, P. Ionic conductivity and diffusion at infinite dilution. *CRC Handbook of
     Chemistry and Physics*, 86th ed. (2005), Section 5.
