@@ -18,10 +18,12 @@ __all__ = [
     "FULLER_SPECIAL_VOLUMES",
     "LE_BAS_ATOMIC_VOLUMES",
     "LE_BAS_RING_INCREMENTS",
+    "LIMITING_ION_DIFFUSIVITY",
     "QUAYLE_PARACHOR_ATOMS",
     "QUAYLE_PARACHOR_BONDS",
     "QUAYLE_PARACHOR_RINGS",
     "SMALL_MOLECULE_VB",
+    "STRONG_ACIDS",
     "WILKE_CHANG_ASSOCIATION",
 ]
 
@@ -361,4 +363,46 @@ PACKING_DATA: Final = MappingProxyType(
             ),
         },
     }
+)
+
+# --- Limiting ionic diffusivities in water at 25 C ------------------------------
+# D of each ion at infinite dilution in water at 298.15 K, D = (RT/F^2) lambda/|z| from its
+# limiting ionic conductivity lambda.  Source: P. Vanysek, "Ionic conductivity and diffusion
+# at infinite dilution", CRC Handbook of Chemistry and Physics, 86th ed. (2005), Section 5
+# (values compiled from Robinson & Stokes, Electrolyte Solutions, 2nd ed. 1959, and others).
+# "read" means the value was read from that table; "(from memory)" that it was recalled, with
+# a second printed value beside it where one was read: Kirk, The Biogeochemistry of Submerged
+# Soils (2004), Table 2.3 (two to three digits, from Landolt-Bornstein 1960 and Robinson &
+# Stokes 1959).  Key: ion label -> (charge number, atoms as (element, count) pairs, D [m^2/s]).
+LIMITING_ION_DIFFUSIVITY: Final = MappingProxyType(
+    {
+        "H+": (1, (("H", 1),), 9.311e-9),  # CRC 86th ed. Sec. 5 (read)
+        "Li+": (1, (("Li", 1),), 1.029e-9),  # CRC 86th ed. Sec. 5 (read)
+        "Na+": (1, (("Na", 1),), 1.334e-9),  # CRC 86th ed. (from memory); Kirk Table 2.3: 1.33
+        "K+": (1, (("K", 1),), 1.957e-9),  # CRC 86th ed. Sec. 5 (read)
+        "Cs+": (1, (("Cs", 1),), 2.056e-9),  # CRC 86th ed. Sec. 5 (read)
+        "NH4+": (1, (("N", 1), ("H", 4)), 1.957e-9),  # CRC 86th ed. Sec. 5 (read)
+        "Mg2+": (2, (("Mg", 1),), 0.706e-9),  # CRC 86th ed. Sec. 5 (read)
+        "Ca2+": (2, (("Ca", 1),), 0.792e-9),  # CRC 86th ed. Sec. 5 (read)
+        "Sr2+": (2, (("Sr", 1),), 0.791e-9),  # CRC 86th ed. (from memory); Kirk Table 2.3: 0.79
+        "Ba2+": (2, (("Ba", 1),), 0.847e-9),  # CRC 86th ed. Sec. 5 (read)
+        "OH-": (-1, (("O", 1), ("H", 1)), 5.273e-9),  # CRC 86th ed. (from memory); Kirk: 5.27
+        "F-": (-1, (("F", 1),), 1.475e-9),  # CRC 86th ed. (from memory); Kirk Table 2.3: 1.47
+        "Cl-": (-1, (("Cl", 1),), 2.032e-9),  # CRC 86th ed. (from memory); Kirk Table 2.3: 2.03
+        "Br-": (-1, (("Br", 1),), 2.080e-9),  # CRC 86th ed. (from memory); Kirk Table 2.3: 2.08
+        "I-": (-1, (("I", 1),), 2.045e-9),  # CRC 86th ed. (from memory); Kirk Table 2.3: 2.04
+        "NO3-": (-1, (("N", 1), ("O", 3)), 1.902e-9),  # CRC 86th ed. (from memory); Kirk: 1.90
+        "ClO4-": (-1, (("Cl", 1), ("O", 4)), 1.792e-9),  # CRC 86th ed. (from memory)
+        "HCO3-": (-1, (("H", 1), ("C", 1), ("O", 3)), 1.185e-9),  # CRC 86th (from memory); Kirk: 1.18
+        "CO3 2-": (-2, (("C", 1), ("O", 3)), 0.923e-9),  # CRC 86th ed. (from memory); Kirk: 0.92
+        "SO4 2-": (-2, (("S", 1), ("O", 4)), 1.065e-9),  # CRC 86th ed. (from memory); Kirk: 1.06
+        "HCOO-": (-1, (("H", 1), ("C", 1), ("O", 2)), 1.454e-9),  # CRC 86th (from memory); Kirk: 1.45
+        "CH3COO-": (-1, (("C", 2), ("H", 3), ("O", 2)), 1.089e-9),  # CRC 86th (from memory); Kirk: 1.09
+    }
+)
+
+#: Strong mineral acids, keyed by CAS: fully dissociated in dilute water, though written as
+#: neutral molecules (common practice; HCl, HBr, HI, HNO3, H2SO4 first dissociation, HClO4).
+STRONG_ACIDS: Final = frozenset(
+    {"7647-01-0", "10035-10-6", "10034-85-2", "7697-37-2", "7664-93-9", "7601-90-3"}
 )

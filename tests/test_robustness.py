@@ -116,6 +116,11 @@ CASES: list[tuple[str, Any, dict[str, Any]]] = [
     ),
     ("stokes_einstein", diffusivity.stokes_einstein, {"T": 298.0, "mu_solvent": 9e-4, "radius": 1e-8}),
     (
+        "nernst_haskell",
+        diffusivity.nernst_haskell,
+        {"T": 298.0, "mu_water": 9e-4, "D_cation": 1.3e-9, "D_anion": 2.0e-9, "z_cation": 2.0},
+    ),
+    (
         "liquid_diffusivity",
         mt.liquid_diffusivity,
         {"solute": "benzene", "solvent": "water", "T": 298.0},

@@ -1074,7 +1074,8 @@ def prepare_pair(
     on the choice of method.
     """
     if method is not None:
-        rec = records[normalise_method(method, records)]
+        phase = next(iter(records.values())).phase
+        rec = records[normalise_method(method, records, phase=phase)]
         _, cautions = _check_record(rec, a, b, explicit=True)
         prep = rec.prepare(a, b)
         return rec, prep, (*cautions, *prep.cautions), ()
@@ -1102,7 +1103,7 @@ def prepare_pair(
 def _ready(method: object, solute: object, medium: object) -> _Ready:
     a, b = species(solute), species(medium)  # type: ignore[arg-type]
     if method is not None and not isinstance(method, str):
-        normalise_method(method, GAS_METHODS)  # type: ignore[arg-type]
+        normalise_method(method, GAS_METHODS, phase="gas")  # type: ignore[arg-type]
     rec, prep, cautions, notes = prepare_pair(GAS_METHODS, GAS_DEFAULT, method, a, b)  # type: ignore[arg-type]
     limits = phase_limits(b)
     ready = _Ready(

@@ -2,13 +2,15 @@
 
 Numbers in: :func:`wilke_chang`, :func:`hayduk_minhas_aqueous`,
 :func:`hayduk_minhas`, :func:`hayduk_minhas_paraffin`, :func:`tyn_calus`,
-:func:`stokes_einstein`.  Names in: :func:`liquid_diffusivity`, which
-fetches the solvent viscosity from :mod:`masstransfer.substances` unless the
-caller passes one, and applies the published special-case recommendations
-(documented on :func:`liquid_diffusivity`).
+:func:`stokes_einstein`, :func:`nernst_haskell` (strong electrolytes in water).
+Names in: :func:`liquid_diffusivity`, which fetches the solvent viscosity from
+:mod:`masstransfer.substances` unless the caller passes one, and applies the published
+special-case recommendations (documented on :func:`liquid_diffusivity`).
 
 All values are infinite-dilution diffusivities.  Estimates only: typical
-errors are 10-20 %; check designs that affect safety against measured data.
+errors are 10-20 %; check designs that affect safety against measured data.  Strong
+electrolytes (salts, strong acids and bases) in water take :func:`nernst_haskell`; the
+molecular correlations refuse them.
 """
 
 from __future__ import annotations
@@ -26,11 +28,20 @@ from .._frozen import FrozenResult
 from .._typing import ArrayLike, FloatArray, FloatOrArray
 from .._validation import check_positive, check_shapes, finish, guard, warn_caller
 from ..constants import AVOGADRO, BOLTZMANN
-from ..errors import EnvelopeWarning, InputValueError
-from ..substances._species import Origin, Species, ambiguity_warnings, rewarn_ambiguity, species
+from ..errors import EnvelopeWarning, InputValueError, MissingConstantError
+from ..substances._species import (
+    Origin,
+    Species,
+    ambiguity_warnings,
+    boiling_point_measured,
+    le_bas_volume,
+    rewarn_ambiguity,
+    species,
+)
 from ._common import normalise_method
+from ._ions import ionic_kind, salt_ions
 from ._phase import PhaseLimits, check_liquid, phase_limits
-from ._records import ConstantUsed, DiffusivityMethod, Prepared, SpeciesClass, classify
+from ._records import ClassRule, ConstantUsed, DiffusivityMethod, Prepared, Role, SpeciesClass, classify
 
 __all__ = [
     "LIQUID_METHODS",
@@ -41,6 +52,7 @@ __all__ = [
     "liquid_default",
     "liquid_diffusivity",
     "liquid_diffusivity_inputs",
+    "nernst_haskell",
     "stokes_einstein",
     "tyn_calus",
     "wilke_chang",
@@ -60,6 +72,13 @@ _NON_DIMERISING_ACID_SOLVENTS = frozenset(
 
 #: Solute volume [cm^3/mol] at which the aqueous Hayduk-Minhas factor V^-0.19 - 0.292 is zero.
 _HM_AQUEOUS_V_MAX: Final = 0.292 ** (-1.0 / 0.19)
+#: Largest solute volume [m^3/mol] at which the aqueous Hayduk-Minhas form is validated here:
+#: the largest aqueous solute of the validation rows is ethylbenzene, 140 cm^3/mol, within 10 %
+#: (Poling et al. 5th ed. ch. 11 example, from memory).  The range of the paper's own data set
+#: could not be checked (the paper was not at hand).  Beyond it the form runs low for large
+#: polyhydroxy solutes: sucrose (325 cm^3/mol, Le Bas) comes out 3.38e-10 m^2/s against a
+#: measured 5.2e-10 (Cussler 3rd ed. Table 5.2-1, from memory), 35 % low.
+HM_AQUEOUS_VALIDATED_V_MAX: Final = 150e-6
 
 
 def _describe(v: FloatOrArray) -> str:
@@ -471,6 +490,100 @@ def stokes_einstein(
     return finish(BOLTZMANN * Tv / (c * math.pi * mu * r))
 
 
+#: Temperature of the tabulated limiting ionic diffusivities [K].
+ION_TABLE_T: Final = 298.15
+#: Viscosity of water at 25 C [Pa s]: 0.8900 mPa s (IAPWS 2008 formulation, from memory).
+WATER_VISCOSITY_25C: Final = 0.8900e-3
+
+
+@guard
+def nernst_haskell(
+    T: ArrayLike,
+    mu_water: ArrayLike,
+    D_cation: float,
+    D_anion: float,
+    z_cation: float = 1.0,
+    z_anion: float = 1.0,
+    mu_ref: float = WATER_VISCOSITY_25C,
+) -> FloatOrArray:
+    r"""Infinite-dilution diffusivity of a strong electrolyte in water (Nernst-Haskell).
+
+    .. math::
+
+        D^\circ_{salt}(T) = \frac{(|z_+| + |z_-|)\,D_+ D_-}{|z_+|\,D_+ + |z_-|\,D_-}
+        \cdot \frac{T}{T_{ref}}\,\frac{\eta_{ref}}{\eta_W(T)}
+
+    with :math:`D_\pm` the limiting ionic diffusivities at :math:`T_{ref}` = 298.15 K.  The
+    salt diffuses as a neutral pair: the faster ion is held back by the slower one's charge.
+    The factor :math:`T\eta_{ref}/(T_{ref}\eta_W)` carries the 25 C value to T by
+    Stokes-Einstein scaling (an approximation, see Notes).
+
+    Parameters
+    ----------
+    T : float or array_like
+        Temperature [K].
+    mu_water : float or array_like
+        Viscosity of water at T [Pa s].
+    D_cation : float
+        Limiting diffusivity of the cation in water at 298.15 K [m^2/s].
+    D_anion : float
+        Limiting diffusivity of the anion in water at 298.15 K [m^2/s].
+    z_cation : float
+        Magnitude of the cation's charge number [-] (1 for Na+, 2 for Ca2+).
+    z_anion : float
+        Magnitude of the anion's charge number [-] (1 for Cl-, 2 for SO4 2-).
+    mu_ref : float
+        Viscosity of water at 298.15 K [Pa s], the reference of the scaling (0.8900 mPa s).
+
+    Returns
+    -------
+    float or numpy.ndarray
+        Diffusivity of the salt at infinite dilution [m^2/s].
+
+    Notes
+    -----
+    Exact at infinite dilution, where the ions move independently apart from their
+    electroneutral coupling (Nernst 1888; Haskell 1908): from the CRC Handbook's limiting ionic
+    diffusivities it reproduces measured limiting salt diffusivities at 25 C within about
+    1 % (NaCl 1.61e-9, KCl 1.99e-9, HCl 3.34e-9 m^2/s; Robinson & Stokes 1959, from memory).
+    Away from 25 C the Stokes-Einstein scaling (Walden's rule) is an approximation of a few
+    per cent for ordinary ions, poorer for H+ and OH-, whose proton-hopping mobility follows
+    viscosity less closely (from memory).  At finite concentration the diffusivity of a salt
+    differs from this limit, by up to some tens of per cent at 1 mol/L; use measured data
+    there and wherever the result matters.
+
+    References
+    ----------
+    Nernst, W. (1888). Zur Kinetik der in Lösung befindlichen Körper. *Z. Phys. Chem.* 2,
+    613-637 (from memory).
+
+    Haskell, R. (1908). The diffusion of electrolytes. *Phys. Rev.* 27, 145-182 (from
+    memory).
+
+    Vanýsek, P. Ionic conductivity and diffusion at infinite dilution. *CRC Handbook of
+    Chemistry and Physics*, 86th ed. (2005), Section 5.
+
+    Examples
+    --------
+    Sodium chloride at 25 C, from D(Na+) = 1.334e-9 and D(Cl-) = 2.032e-9 m^2/s:
+
+    >>> round(nernst_haskell(298.15, 0.89e-3, 1.334e-9, 2.032e-9) * 1e9, 3)
+    1.611
+
+    """
+    Tv = check_positive("T", T)
+    mu = check_positive("mu_water", mu_water)
+    check_shapes(T=Tv, mu_water=mu)
+    Dp = check_positive("D_cation", D_cation)
+    Dm = check_positive("D_anion", D_anion)
+    zp = check_positive("z_cation", z_cation, "pass the magnitude of the charge number, e.g. 2 for Ca2+")
+    zm = check_positive("z_anion", z_anion, "pass the magnitude of the charge number, e.g. 2 for SO4 2-")
+    check_shapes(D_cation=Dp, D_anion=Dm, z_cation=zp, z_anion=zm)
+    mu0 = check_positive("mu_ref", mu_ref)
+    D25 = (zp + zm) * Dp * Dm / (zp * Dp + zm * Dm)
+    return finish(D25 * (Tv / ION_TABLE_T) * (mu0 / mu))
+
+
 # --------------------------------------------------------------------------
 # names in: constant preparation per method, the records, the dispatcher
 # --------------------------------------------------------------------------
@@ -532,6 +645,24 @@ def _solute_volume(a: Species, method: str) -> tuple[float, tuple[str, ...], str
     return a.require("Vb", method), (), _used(a, "Vb").source
 
 
+def _volume_cautions(a: Species, Va: float, src: str) -> tuple[str, ...]:
+    """Return a caution when V_b came from a liquid model at a boiling point nobody measured."""
+    if src != "thermo VolumeLiquid at Tb" or boiling_point_measured(a) is not False:
+        return ()
+    try:
+        le_bas = f"; its Le Bas volume is {le_bas_volume(dict(a.atoms), a.smiles) * 1e6:.0f} cm^3/mol"
+    except (MissingConstantError, InputValueError):
+        le_bas = ""
+    return (
+        f"the solute's molar volume at its boiling point, {Va * 1e6:.0f} cm^3/mol, was "
+        f"extrapolated by thermo's liquid-volume model to a boiling point of {a.Tb:.0f} K that no "
+        "evaluated table measures (the substance may decompose before it boils, as urea does)"
+        f"{le_bas}; the estimate can be tens of per cent off (urea in water: 28 % low by "
+        "Hayduk-Minhas); supply a volume with masstransfer.species(...).replace(Vb=...) or use a "
+        "measured diffusivity",
+    )
+
+
 def _prepare_wilke_chang(a: Species, b: Species) -> Prepared:
     Va, notes, src = _solute_volume(a, "Wilke-Chang")
     phi = data.WILKE_CHANG_ASSOCIATION.get(b.CAS or "", 1.0)
@@ -543,9 +674,9 @@ def _prepare_wilke_chang(a: Species, b: Species) -> Prepared:
             "water as solute: the Wilke-Chang value is divided by 2.3 (Olander 1961, as "
             "recommended in Reid, Prausnitz & Poling 1987, 4th ed., Section 11-9, from memory)"
         )
-    cautions: tuple[str, ...] = ()
+    cautions = _volume_cautions(a, Va, src)
     if SpeciesClass.ACID in classify(a) and SpeciesClass.WATER not in classify(b):
-        cautions = (
+        cautions += (
             "a carboxylic acid dissolved in a non-aqueous solvent associates (dimerises), for which "
             "Wilke-Chang has no rule: acetic acid in ethyl acetate comes out 69 % high against "
             "Benitez, Appendix Table A.2; prefer method='tyn-calus' (its dimer rule) or measured data",
@@ -596,10 +727,11 @@ def _alcohol_rule(a: Species, b: Species) -> tuple[bool, tuple[str, ...]]:
 
 def _prepare_parachor_method(
     a: Species, b: Species, name: str
-) -> tuple[tuple[float, ...], dict[str, dict[str, ConstantUsed]], tuple[str, ...]]:
+) -> tuple[tuple[float, ...], dict[str, dict[str, ConstantUsed]], tuple[str, ...], tuple[str, ...]]:
     from ..substances._properties import parachor
 
     Va, notes, src = _solute_volume(a, name)
+    cautions = _volume_cautions(a, Va, src)
     Vb = b.require("Vb", name)
     Pa, Pb = parachor(a), parachor(b)
     Va2, Pa2, dimer = _dimer_rules(a, b, Va, Pa)
@@ -616,12 +748,12 @@ def _prepare_parachor_method(
             "parachor": _used(b, "parachor", Pb, "masstransfer.substances.parachor"),
         },
     }
-    return (Va2, Vb, Pa2, Pb, 1.0 if alcohol else 0.0), consts, (*notes, *dimer, *alc_notes)
+    return (Va2, Vb, Pa2, Pb, 1.0 if alcohol else 0.0), consts, (*notes, *dimer, *alc_notes), cautions
 
 
 def _prepare_tyn_calus(a: Species, b: Species) -> Prepared:
-    args, consts, notes = _prepare_parachor_method(a, b, "Tyn-Calus")
-    return Prepared(args, consts, notes, form="tyn-calus")
+    args, consts, notes, cautions = _prepare_parachor_method(a, b, "Tyn-Calus")
+    return Prepared(args, consts, notes, cautions, form="tyn-calus")
 
 
 def _prepare_hayduk_minhas(a: Species, b: Species) -> Prepared:
@@ -630,19 +762,34 @@ def _prepare_hayduk_minhas(a: Species, b: Species) -> Prepared:
         Va, notes, src = _solute_volume(a, "Hayduk-Minhas")
         form = "aqueous" if SpeciesClass.WATER in cb else "n-paraffin"
         consts = {"solute": {"Vb (as used)": ConstantUsed(Va, src)}, "medium": {}}
+        cautions = _volume_cautions(a, Va, src)
+        if form == "aqueous" and Va > HM_AQUEOUS_VALIDATED_V_MAX:
+            cautions += (
+                f"the solute's molar volume, {Va * 1e6:.0f} cm^3/mol, lies above "
+                f"{HM_AQUEOUS_VALIDATED_V_MAX * 1e6:.0f} cm^3/mol, beyond the solutes the aqueous "
+                "form is validated on (the largest, ethylbenzene, 140 cm^3/mol); large solutes come "
+                "out low: sucrose (325 cm^3/mol) 35 % below the measured 5.2e-10 m^2/s (Cussler "
+                "3rd ed. Table 5.2-1, from memory); use a measured value",
+            )
         return Prepared(
-            (Va,), consts, (*notes, f"Hayduk-Minhas {form} form (solvent is {b.name})"), form=form
+            (Va,),
+            consts,
+            (*notes, f"Hayduk-Minhas {form} form (solvent is {b.name})"),
+            cautions,
+            form=form,
         )
-    args, consts, notes = _prepare_parachor_method(a, b, "Hayduk-Minhas")
-    return Prepared(args, consts, (*notes, "Hayduk-Minhas general (non-aqueous) form"), form="general")
+    args, consts, notes, cautions = _prepare_parachor_method(a, b, "Hayduk-Minhas")
+    return Prepared(
+        args, consts, (*notes, "Hayduk-Minhas general (non-aqueous) form"), cautions, form="general"
+    )
 
 
 def _prepare_stokes_einstein(a: Species, b: Species) -> Prepared:
     Va, notes, src = _solute_volume(a, "Stokes-Einstein")
     r = (3.0 * Va / (4.0 * math.pi * AVOGADRO)) ** (1.0 / 3.0)
-    cautions: tuple[str, ...] = ()
+    cautions = _volume_cautions(a, Va, src)
     if r < 1e-9:
-        cautions = (
+        cautions += (
             f"Stokes-Einstein: the solute's radius ({r * 1e9:.2f} nm, from V_b) is below about 1 nm; "
             "the equation is for spheres much larger than the solvent molecules and under-predicts "
             "small molecules, often by a factor of two",
@@ -688,6 +835,95 @@ def _evaluate_stokes_einstein(prep: Prepared, T: FloatOrArray, mu: FloatOrArray)
     return stokes_einstein(T, mu, prep.args[0])
 
 
+_ION_SOURCE = (
+    "Vanysek, CRC Handbook of Chemistry and Physics 86th ed., Section 5 "
+    "(masstransfer._tables.LIMITING_ION_DIFFUSIVITY)"
+)
+#: Issued with every electrolyte diffusivity.
+_DILUTION_CAUTION = (
+    "the value is the infinite-dilution limit; the diffusivity of a salt at finite concentration "
+    "differs from it, by up to some tens of per cent at 1 mol/L, and the estimate is no substitute "
+    "for measured data where the result matters"
+)
+
+
+def _no_electrolyte_data(a: Species, why: str) -> MissingConstantError:
+    return MissingConstantError(
+        f"{a.name!r} is a strong electrolyte and {why}, so no estimate is made (the molecular "
+        "correlations do not apply to ions); use a measured diffusivity, given as D= to the "
+        "calculation that needs it"
+    )
+
+
+def _prepare_nernst_haskell(a: Species, b: Species) -> Prepared:
+    if ionic_kind(a) != "electrolyte":
+        raise MissingConstantError(
+            f"method='nernst-haskell' is for strong electrolytes (salts, strong acids and strong "
+            f"bases) in water, and {a.name!r} is not one; use a molecular method (method=None "
+            "picks the recommended one)"
+        )
+    if (b.CAS or "") != _WATER:
+        raise _no_electrolyte_data(
+            a, f"the library holds limiting ionic diffusivities in water only, none in {b.name!r}"
+        )
+    salt = salt_ions(a)
+    if salt is None:
+        known = ", ".join(data.LIMITING_ION_DIFFUSIVITY)
+        raise _no_electrolyte_data(a, f"its formula {a.formula} is not made of the tabulated ions ({known})")
+    from ..substances._properties import liquid_model
+
+    mu_ref = float(liquid_model(b).viscosity(ION_TABLE_T))
+    consts = {
+        "solute": {
+            f"D of {salt.cation} at 298.15 K": ConstantUsed(salt.D_cation, _ION_SOURCE),
+            f"D of {salt.anion} at 298.15 K": ConstantUsed(salt.D_anion, _ION_SOURCE),
+            "cation charge number": ConstantUsed(float(salt.z_cation), _ION_SOURCE),
+            "anion charge number (magnitude)": ConstantUsed(float(salt.z_anion), _ION_SOURCE),
+        },
+        "medium": {
+            "viscosity at 298.15 K (scaling reference)": ConstantUsed(
+                mu_ref, "masstransfer.liquid_model (thermo)"
+            )
+        },
+    }
+    D25 = nernst_haskell(
+        ION_TABLE_T, mu_ref, salt.D_cation, salt.D_anion, salt.z_cation, salt.z_anion, mu_ref
+    )
+    note = (
+        f"{a.name} taken as fully dissociated into {salt.cation} and {salt.anion}: Nernst-Haskell "
+        f"limit {D25:.4g} m^2/s at 298.15 K, carried to T by T/viscosity (Stokes-Einstein scaling)"
+    )
+    return Prepared(
+        (salt.D_cation, salt.D_anion, float(salt.z_cation), float(salt.z_anion), mu_ref),
+        consts,
+        (note,),
+        (_DILUTION_CAUTION,),
+        form="nernst-haskell",
+    )
+
+
+def _evaluate_nernst_haskell(prep: Prepared, T: FloatOrArray, mu: FloatOrArray) -> FloatOrArray:
+    return nernst_haskell(T, mu, *prep.args)
+
+
+#: The molecular correlations do not describe a solute that dissociates into ions.
+_MOLECULAR_ONLY: Final = (
+    ClassRule(
+        SpeciesClass.ELECTROLYTE,
+        Role.SOLUTE,
+        "the solute is a strong electrolyte: in water it diffuses as ions held together by their "
+        "charges, which this molecular correlation does not describe (sodium hydroxide in water "
+        "comes out about 40 % low by Hayduk-Minhas); use method='nernst-haskell'",
+    ),
+    ClassRule(
+        SpeciesClass.ION,
+        Role.SOLUTE,
+        "the solute is a single ion, whose diffusion is coupled to that of its counter-ions; "
+        "name the salt, acid or base and use method='nernst-haskell'",
+    ),
+)
+
+
 _LIQUID_T: Final = (263.0, 373.0)
 
 #: The liquid-phase methods, in the order they are tried when the default does not apply.
@@ -709,6 +945,7 @@ LIQUID_METHODS: Final[Mapping[str, DiffusivityMethod]] = MappingProxyType(
                 T_range=_LIQUID_T,
                 P_max=None,
                 prepare=_prepare_wilke_chang,
+                excludes=_MOLECULAR_ONLY,
                 evaluate=_evaluate_wilke_chang,
             ),
             DiffusivityMethod(
@@ -727,6 +964,7 @@ LIQUID_METHODS: Final[Mapping[str, DiffusivityMethod]] = MappingProxyType(
                 T_range=_LIQUID_T,
                 P_max=None,
                 prepare=_prepare_hayduk_minhas,
+                excludes=_MOLECULAR_ONLY,
                 evaluate=_evaluate_hayduk_minhas,
             ),
             DiffusivityMethod(
@@ -743,6 +981,7 @@ LIQUID_METHODS: Final[Mapping[str, DiffusivityMethod]] = MappingProxyType(
                 T_range=_LIQUID_T,
                 P_max=None,
                 prepare=_prepare_tyn_calus,
+                excludes=_MOLECULAR_ONLY,
                 evaluate=_evaluate_tyn_calus,
             ),
             DiffusivityMethod(
@@ -760,7 +999,28 @@ LIQUID_METHODS: Final[Mapping[str, DiffusivityMethod]] = MappingProxyType(
                 T_range=_LIQUID_T,
                 P_max=None,
                 prepare=_prepare_stokes_einstein,
+                excludes=_MOLECULAR_ONLY,
                 evaluate=_evaluate_stokes_einstein,
+            ),
+            DiffusivityMethod(
+                name="nernst-haskell",
+                phase="liquid",
+                title="Nernst (1888) and Haskell (1908): strong electrolytes in water",
+                function=nernst_haskell,
+                constants=("formula", "smiles"),
+                accuracy_pct=5.0,
+                accuracy="within about 1 % of measured limiting salt diffusivities at 25 C (NaCl, "
+                "KCl, HCl; Robinson & Stokes 1959, from memory); a few per cent more away from 25 C "
+                "from the T/viscosity scaling; at finite concentration the value differs by up to "
+                "some tens of per cent at 1 mol/L",
+                reference="Nernst (1888), Z. Phys. Chem. 2, 613; ionic diffusivities: Vanysek, CRC "
+                "Handbook of Chemistry and Physics 86th ed., Section 5",
+                scope="strong electrolytes (alkali, alkaline-earth and ammonium salts, strong mineral "
+                "acids, strong bases) at infinite dilution in water",
+                T_range=(273.15, 373.15),
+                P_max=None,
+                prepare=_prepare_nernst_haskell,
+                evaluate=_evaluate_nernst_haskell,
             ),
         )
     }
@@ -785,8 +1045,9 @@ def liquid_default(solvent: str | Species) -> str:
     -----
     Water: Hayduk-Minhas's aqueous form; n-paraffins: its paraffin form; other organic
     solvents: Tyn-Calus (Poling, Prausnitz & O'Connell 2001, Section 11-10 recommendations,
-    from memory).  When the default's constants are missing (a parachor), the dispatcher uses
-    the next record that applies and notes the choice.
+    from memory).  For a strong electrolyte in water the dispatcher uses ``'nernst-haskell'``
+    instead (the solute decides that, not the solvent).  When the default's constants are
+    missing (a parachor), the dispatcher uses the next record that applies and notes the choice.
 
     References
     ----------
@@ -804,6 +1065,25 @@ def liquid_default(solvent: str | Species) -> str:
     if SpeciesClass.WATER in cls or SpeciesClass.N_PARAFFIN in cls:
         return "hayduk-minhas"
     return "tyn-calus"
+
+
+def _electrolyte_default(a: Species, b: Species) -> str | None:
+    """'nernst-haskell' for a strong electrolyte in water; refuse single ions and other solvents."""
+    kind = ionic_kind(a)
+    if kind is None:
+        return None
+    if kind == "ion":
+        raise InputValueError(
+            f"solute={a.name!r} is a single ion ({a.formula}): an ion does not diffuse on its own, "
+            "its flux is coupled to that of its counter-ions, which keep the solution neutral; "
+            "name the salt, acid or base it comes from (for example 'sodium sulfate' rather than "
+            "'sulfate'), whose diffusivity in water follows from method='nernst-haskell'"
+        )
+    if (b.CAS or "") != _WATER:
+        raise _no_electrolyte_data(
+            a, f"the library holds limiting ionic diffusivities in water only, none in {b.name!r}"
+        )
+    return "nernst-haskell"
 
 
 @dataclass(frozen=True, slots=True)
@@ -836,8 +1116,9 @@ def ready_liquid(solute: str | Species, solvent: str | Species, method: str | No
 
     a, b = species(solute), species(solvent)
     if method is not None:
-        normalise_method(method, LIQUID_METHODS)
-    rec, prep, cautions, notes = prepare_pair(LIQUID_METHODS, liquid_default(b), method, a, b)
+        normalise_method(method, LIQUID_METHODS, phase="liquid")
+    default = _electrolyte_default(a, b) or liquid_default(b)
+    rec, prep, cautions, notes = prepare_pair(LIQUID_METHODS, default, method, a, b)
     r = _ReadyLiquid(
         record=rec,
         prepared=prep,
@@ -893,6 +1174,12 @@ def liquid_diffusivity_inputs(
     """
     r = ready_liquid(solute, solvent, method)
     p = r.prepared
+    if p.form == "nernst-haskell":
+        raise InputValueError(
+            f"method='nernst-haskell' for {r.solute!r} uses no molar volumes or parachors; the "
+            "ionic diffusivities it used, with their sources, are in "
+            "masstransfer.diffusivity_report(...).constants"
+        )
     phi = data.WILKE_CHANG_ASSOCIATION.get(r.solvent.CAS or "", 1.0)
     if r.record.name == "wilke-chang":
         return LiquidDiffusivityInputs(p.args[1], None, None, None, phi, p.form, r.notes)
@@ -962,13 +1249,14 @@ def liquid_diffusivity(
         Solvent, e.g. ``"water"``.
     T : float or array_like
         Temperature [K]; the solvent must be liquid there.
-    method : {None, 'wilke-chang', 'hayduk-minhas', 'tyn-calus', 'stokes-einstein'}
+    method : {None, 'wilke-chang', 'hayduk-minhas', 'tyn-calus', 'stokes-einstein', 'nernst-haskell'}
         Estimation method (see :data:`LIQUID_METHODS`); None picks the published
-        recommendation for the solvent (:func:`liquid_default`).  ``'hayduk-minhas'`` uses
-        the aqueous form for water, the n-paraffin form for normal alkane solvents and the
-        general form otherwise.
+        recommendation for the solvent (:func:`liquid_default`), or ``'nernst-haskell'`` for a
+        strong electrolyte in water.  ``'hayduk-minhas'`` uses the aqueous form for water, the
+        n-paraffin form for normal alkane solvents and the general form otherwise.
     P : float or array_like
         Pressure [Pa], used only to check that the solvent is liquid (not boiling) at T.
+        Keyword only: ``P=101325.0``.
     mu_solvent : float or array_like, optional
         Solvent viscosity [Pa s]; from :func:`masstransfer.liquid_model` when omitted.
     phi : float, optional
@@ -1006,6 +1294,10 @@ def liquid_diffusivity(
     * Small molecules (H2, O2, N2, CO2, H2O, NH3, ...) use their tabulated molar volumes.
     * None of the methods is meant for viscous solvents (above about 20 mPa s); an
       :class:`~masstransfer.errors.EnvelopeWarning` is issued.
+    * A strong electrolyte (salt, strong mineral acid, strong base) diffuses as ions: in water
+      it takes ``'nernst-haskell'`` (limiting ionic diffusivities, infinite dilution, with a
+      warning that concentrated solutions differ); the molecular methods refuse it, and so does
+      every method in another solvent.  A single ion (``'sulfate'``) is refused: name its salt.
 
     Stated accuracy: about 10 % (Hayduk-Minhas, Tyn-Calus), 10-15 % (Wilke-Chang).  Results
     are estimates; check designs that affect safety against measured data and licensed

@@ -55,6 +55,8 @@ class SpeciesClass(enum.Enum):
     ACID = "carboxylic acid"
     ALCOHOL = "monohydroxy alcohol"
     N_PARAFFIN = "n-paraffin (C5 or longer)"
+    ELECTROLYTE = "strong electrolyte (a salt, strong acid or strong base: dissociates into ions in water)"
+    ION = "single ion (a charged species)"
 
 
 @guard(check_output=False)
@@ -70,7 +72,8 @@ def classify(sp: str | Species) -> frozenset[SpeciesClass]:
     -------
     frozenset of SpeciesClass
         Its classes: exactly one of polar, non-polar or dipole-unknown, and any of
-        associating, quantum gas, water, acid, monohydroxy alcohol, n-paraffin.
+        associating, quantum gas, water, acid, monohydroxy alcohol, n-paraffin, strong
+        electrolyte, single ion.
 
     Notes
     -----
@@ -105,6 +108,13 @@ def classify(sp: str | Species) -> frozenset[SpeciesClass]:
         out.add(SpeciesClass.QUANTUM)
     if sp.CAS == _WATER:
         out |= {SpeciesClass.WATER, SpeciesClass.ASSOCIATING}
+    from ._ions import ionic_kind
+
+    kind = ionic_kind(sp)
+    if kind == "electrolyte":
+        out.add(SpeciesClass.ELECTROLYTE)
+    elif kind == "ion":
+        out.add(SpeciesClass.ION)
     mol = sp.molecule
     if mol is not None:
         from ..substances._species import _le_bas_class

@@ -222,7 +222,7 @@ def diffusivity_report(
 
             mu = np.atleast_1d(np.asarray(liquid_model(b).viscosity(Tv), dtype=float))
             viscosity = {"viscosity at the first T": (float(mu[0]), "masstransfer.liquid_model (thermo)")}
-            if len(prep.args) == 5 and prep.args[4]:
+            if prep.form in ("tyn-calus", "general") and prep.args[4]:
                 f = 8.0 * mu * 1000.0
                 shown = f"{f[0]:.3g}" if f.size == 1 else f"{f.min():.3g} to {f.max():.3g}"
                 rule_notes = (*rule_notes, f"alcohol-solvent factor 8 eta_B = {shown} at the given T")

@@ -1130,3 +1130,36 @@ def _vb_from_thermo(
         return _opt(vl.T_dependent_property(Tb))
     except Exception:
         return None
+
+
+#: ``chemicals`` boiling-point sources that hold evaluated, measured values (the CRC Handbook
+#: tables, the NIST WebBook, CoolProp's reference fluids).  Its other sources (CAS Common
+#: Chemistry, Yaws, Wikidata, the Joback estimate) also carry estimates and decomposition
+#: temperatures for substances that never boil at 1 atm.
+_MEASURED_TB_SOURCES = frozenset({"CRC_ORG", "CRC_INORG", "WEBBOOK", "HEOS"})
+
+
+@functools.lru_cache(maxsize=1024)
+def _tb_sources(cas: str) -> tuple[str, ...]:
+    import chemicals
+
+    with loading():
+        try:
+            return tuple(str(m) for m in chemicals.Tb_methods(cas))
+        except Exception:  # no entry: nothing is known of its boiling point
+            return ()
+
+
+def boiling_point_measured(sp: Species) -> bool | None:
+    """Whether a species' normal boiling point is a measured value: None where it cannot be told.
+
+    A user-supplied boiling point counts as measured.  A database species' counts as measured
+    when one of the evaluated tables of ``chemicals`` (CRC Handbook, NIST WebBook, CoolProp
+    fluids) holds it; otherwise the value may be an estimate or a decomposition temperature
+    (urea decomposes before it boils), and False is returned.
+    """
+    if sp.Tb is None:
+        return None
+    if sp.origins.get("Tb") is Origin.USER or not sp.CAS:
+        return True if sp.origins.get("Tb") is Origin.USER else None
+    return bool(set(_tb_sources(sp.CAS)) & _MEASURED_TB_SOURCES)
