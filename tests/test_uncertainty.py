@@ -149,7 +149,8 @@ def test_cli_prints_plus_minus(capsys):
     assert main(["diffusivity", "toluene", "air", "-T", "350"]) == 0
     D = mt.gas_diffusivity("toluene", "air", 350.0)
     u = 0.05 * math.sqrt(math.pi / 2)
-    assert f"{D:.4e} ± {D * u:.2g}" in capsys.readouterr().out
+    # the spread to two significant figures, the value to the same decimal place
+    assert f"{D:.3e} ± {D * u:.2g}" in capsys.readouterr().out
     assert (
         main(["coefficient", "water", "air", "--h", "35", "-T", "320", "--uncertainty", "0.1", "--json"]) == 0
     )

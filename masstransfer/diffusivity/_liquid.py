@@ -766,10 +766,10 @@ def _prepare_hayduk_minhas(a: Species, b: Species) -> Prepared:
         if form == "aqueous" and Va > HM_AQUEOUS_VALIDATED_V_MAX:
             cautions += (
                 f"the solute's molar volume, {Va * 1e6:.0f} cm^3/mol, lies above "
-                f"{HM_AQUEOUS_VALIDATED_V_MAX * 1e6:.0f} cm^3/mol, beyond the solutes the aqueous "
-                "form is validated on (the largest, ethylbenzene, 140 cm^3/mol); large solutes come "
-                "out low: sucrose (325 cm^3/mol) 35 % below the measured 5.2e-10 m^2/s (Cussler "
-                "3rd ed. Table 5.2-1, from memory); use a measured value",
+                f"{HM_AQUEOUS_VALIDATED_V_MAX * 1e6:.0f} cm^3/mol, beyond the solutes this library "
+                "has checked the aqueous form on (the largest, ethylbenzene, 140 cm^3/mol); of larger "
+                "ones, sucrose (325 cm^3/mol) comes out 35 % below the measured 5.2e-10 m^2/s (Cussler "
+                "3rd ed. Table 5.2-1, from memory); compare with a measured value",
             )
         return Prepared(
             (Va,),

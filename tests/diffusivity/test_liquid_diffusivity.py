@@ -256,7 +256,7 @@ def test_large_solute_in_water_warns_and_is_low():
     # sucrose in water at 25 C, measured 5.2e-10 m^2/s (Cussler 3rd ed. Table 5.2-1, from
     # memory); its Le Bas volume, 325 cm^3/mol, lies beyond the 150 cm^3/mol the aqueous form is
     # validated on here, and the estimate is about 35 % low: the warning says so
-    with pytest.warns(mt.errors.EnvelopeWarning, match="beyond the solutes the aqueous form is validated"):
+    with pytest.warns(mt.errors.EnvelopeWarning, match="beyond the solutes this library has checked"):
         D = mt.liquid_diffusivity("sucrose", "water", 298.15)
     assert 0.55 * 5.2e-10 < D < 0.75 * 5.2e-10
     ethylbenzene = mt.diffusivity.liquid_diffusivity_inputs("ethylbenzene", "water", "hayduk-minhas")

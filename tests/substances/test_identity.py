@@ -10,7 +10,7 @@ import sys
 import pytest
 
 import masstransfer as mt
-from masstransfer.errors import AmbiguousSpeciesWarning, UnknownSpeciesError
+from masstransfer.errors import AmbiguousSpeciesWarning, EnvelopeWarning, UnknownSpeciesError
 
 
 @pytest.mark.parametrize(
@@ -375,7 +375,11 @@ def test_hand_built_species_from_smiles_alone_gets_atoms_formula_and_volumes():
 def test_hand_built_species_works_with_every_liquid_method():
     s = mt.Species(name="solvent B (invented)", molar_mass=0.11616, smiles="CCCCOC(C)=O", Tb=399.0)
     for method in ("wilke-chang", "hayduk-minhas", "tyn-calus"):
-        D = mt.liquid_diffusivity(s, "water", 298.15, method=method)
+        if method == "hayduk-minhas":  # its molar volume, 152 cm^3/mol, is beyond the checked range
+            with pytest.warns(EnvelopeWarning, match="beyond the solutes this library has checked"):
+                D = mt.liquid_diffusivity(s, "water", 298.15, method=method)
+        else:
+            D = mt.liquid_diffusivity(s, "water", 298.15, method=method)
         assert 1e-10 < D < 5e-9
     D = mt.liquid_diffusivity(s, "toluene", 298.15, method="tyn-calus")
     assert 1e-10 < D < 1e-8
