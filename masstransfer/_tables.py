@@ -367,8 +367,9 @@ PACKING_DATA: Final = MappingProxyType(
 
 # --- Limiting ionic diffusivities in water at 25 C ------------------------------
 # D of each ion at infinite dilution in water at 298.15 K, D = (RT/F^2) lambda/|z| from its
-# limiting ionic conductivity lambda.  Source: P. Vanysek, "Ionic conductivity and diffusion
-# at infinite dilution", CRC Handbook of Chemistry and Physics, 86th ed. (2005), Section 5
+# limiting ionic conductivity lambda per equivalent (of 1/2 Ca2+, for example).  Source:
+# P. Vanysek, "Ionic conductivity and diffusion at infinite dilution", CRC Handbook of
+# Chemistry and Physics, 86th ed. (2005), Section 5
 # (values compiled from Robinson & Stokes, Electrolyte Solutions, 2nd ed. 1959, and others).
 # "read" means the value was read from that table; "(from memory)" that it was recalled, with
 # a second printed value beside it where one was read: Kirk, The Biogeochemistry of Submerged
@@ -402,7 +403,8 @@ LIMITING_ION_DIFFUSIVITY: Final = MappingProxyType(
 )
 
 #: Strong mineral acids, keyed by CAS: fully dissociated in dilute water, though written as
-#: neutral molecules (common practice; HCl, HBr, HI, HNO3, H2SO4 first dissociation, HClO4).
+#: neutral molecules (common practice; HCl, HBr, HI, HNO3, HClO4; H2SO4 is taken as 2 H+ + SO4 2-,
+#: though its second dissociation is incomplete, pKa about 2, common practice).
 STRONG_ACIDS: Final = frozenset(
     {"7647-01-0", "10035-10-6", "10034-85-2", "7697-37-2", "7664-93-9", "7601-90-3"}
 )

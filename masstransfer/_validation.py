@@ -503,6 +503,27 @@ def _returns_array(f: Callable[..., Any]) -> bool:
     return annotation in ("FloatOrArray", FloatOrArray)
 
 
+def _refuse_call(
+    f: Callable[..., Any], name: str, args: tuple[Any, ...], kwargs: dict[str, Any], exc: TypeError
+) -> None:
+    """Raise :class:`InputTypeError` when ``exc`` came from the call's arguments not fitting ``f``.
+
+    Only on the error path: an unknown keyword, a missing or a surplus argument is named with
+    the parameters ``f`` takes.  A TypeError raised inside ``f`` (arguments that did bind) is
+    left to the caller.
+    """
+    if isinstance(exc, InputTypeError):
+        return
+    try:
+        sig = inspect.signature(f)
+        sig.bind(*args, **kwargs)
+    except TypeError as bad:
+        params = ", ".join(sig.parameters)
+        raise InputTypeError(f"{name}(): {bad}; it takes ({params})") from None
+    except ValueError:  # no signature to read
+        return
+
+
 @overload
 def guard(fn: Callable[_P, _R], /) -> Callable[_P, _R]: ...
 @overload
@@ -598,6 +619,9 @@ def guard(
                 raise InputValueError(
                     f"{name}: the inputs overflow the equations ({exc}); {_suspect(f, args, kwargs)}"
                 ) from exc
+            except TypeError as exc:
+                _refuse_call(f, name, args, kwargs, exc)
+                raise
             if check_output and not _finite_out(out):
                 raise InputValueError(
                     f"{name}: the result is not finite for these inputs; {_suspect(f, args, kwargs)}"

@@ -334,8 +334,9 @@ def _correlations(args: argparse.Namespace) -> str:
 #: What each wet-bulb temperature is, for the text and the JSON.
 _WET_BULB_KINDS = {
     "T_wb": (
-        "psychrometric wet bulb: the steady temperature of a wetted, well-ventilated surface "
-        "(convected heat pays for evaporation; Chilton-Colburn heat-mass analogy, Le^(2/3))"
+        "psychrometric wet bulb as the analogy predicts it: the steady temperature of a wetted, "
+        "well-ventilated surface (convected heat pays for evaporation; Chilton-Colburn heat-mass "
+        "analogy, Le^(2/3))"
     ),
     "T_as": (
         "adiabatic-saturation temperature, the thermodynamic wet bulb: air saturated adiabatically "

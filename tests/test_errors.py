@@ -102,3 +102,12 @@ def test_hand_built_species_works_with_fuller():
     s = mt.Species(name="siloxane (invented)", molar_mass=0.2964, fuller_volume=250.0)
     d = mt.gas_diffusivity(s, "air", 300.0)
     assert 1e-6 < d < 1e-5
+
+
+def test_a_keyword_the_function_does_not_take_is_refused_in_the_family():
+    from masstransfer import surface
+    from masstransfer.errors import InputTypeError
+
+    # graetz's diameter was once called D, which means a diffusivity everywhere else
+    with pytest.raises(InputTypeError, match=r"graetz\(\).*it takes \(Re, Pr, diameter, x\)"):
+        surface.graetz(Re=100.0, Pr=0.7, D=0.01, x=1.0)

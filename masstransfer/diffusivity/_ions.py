@@ -111,7 +111,8 @@ def ionic_kind(sp: Species) -> Kind | None:
       (``[Na+].[OH-]``), the way ``chemicals`` writes ionic compounds;
     * a single ion by a SMILES of one fragment with a net charge (``[O-]S(=O)(=O)[O-]``), or
       a charge in a formula given without SMILES;
-    * an inorganic compound of a metal (no carbon: CuSO4, FeCl3, NaOH written covalently);
+    * an inorganic compound of a metal with another element (no carbon: CuSO4, FeCl3, NaOH
+      written covalently; not the element itself, such as mercury);
     * a species given without SMILES whose formula is an alkali or alkaline-earth metal salt
       of the ion table (a hand-built ``Species(formula="C2H3NaO2", ...)``).
 
@@ -131,7 +132,7 @@ def ionic_kind(sp: Species) -> Kind | None:
     elif "+" in (sp.formula or "") or "-" in (sp.formula or ""):
         return "ion"
     elements = set(sp.atoms)
-    if elements & _METALS and "C" not in elements:
+    if len(elements) > 1 and elements & _METALS and "C" not in elements:
         return "electrolyte"  # an inorganic metal compound: salt, hydroxide (CuSO4, FeCl3, NaOH)
     if not smiles and elements & _SALT_METALS and salt_ions(sp) is not None:
         return "electrolyte"  # a hand-built salt given by its formula (sodium acetate)

@@ -1083,6 +1083,14 @@ def _electrolyte_default(a: Species, b: Species) -> str | None:
         raise _no_electrolyte_data(
             a, f"the library holds limiting ionic diffusivities in water only, none in {b.name!r}"
         )
+    if salt_ions(a) is None:  # one reason, not the same refusal repeated by every molecular method
+        if dict(a.atoms) == {"N": 1, "H": 5, "O": 1}:
+            raise InputValueError(
+                f"solute={a.name!r} is ammonia dissolved in water, a weak base that stays mostly "
+                "molecular; pass 'ammonia' as the solute"
+            )
+        known = ", ".join(data.LIMITING_ION_DIFFUSIVITY)
+        raise _no_electrolyte_data(a, f"its formula {a.formula} is not made of the tabulated ions ({known})")
     return "nernst-haskell"
 
 

@@ -59,16 +59,17 @@ _MEASURED = [
 def test_electrolytes_in_water_against_measured(solute, measured):
     with _DILUTE:
         D = mt.liquid_diffusivity(solute, "water", 298.15)
-    assert pytest.approx(measured, rel=0.03) == D
+    # the ion table and these limits come from the same conductance data: they agree closely
+    assert pytest.approx(measured, rel=0.005) == D
 
 
 def test_user_reported_values_are_now_the_nernst_haskell_limits():
     # the molecular estimate for NaOH was 1.24e-9 (Hayduk-Minhas); the ionic limit is 2.13e-9
     # (CRC Handbook, from memory) and HCl 3.34e-9 (Robinson & Stokes 1959, from memory)
     with _DILUTE:
-        assert mt.liquid_diffusivity("NaOH", "water", 298.15) == pytest.approx(2.13e-9, rel=0.03)
+        assert mt.liquid_diffusivity("NaOH", "water", 298.15) == pytest.approx(2.13e-9, rel=0.005)
     with _DILUTE:
-        assert mt.liquid_diffusivity("HCl", "water", 298.15) == pytest.approx(3.34e-9, rel=0.03)
+        assert mt.liquid_diffusivity("HCl", "water", 298.15) == pytest.approx(3.34e-9, rel=0.005)
 
 
 def test_temperature_scaling_uses_the_water_viscosity():
@@ -78,7 +79,8 @@ def test_temperature_scaling_uses_the_water_viscosity():
     with _DILUTE:
         d50 = mt.liquid_diffusivity("sodium chloride", "water", 323.15)
     assert d50 / d25 == pytest.approx((323.15 / 298.15) * mu(298.15) / mu(323.15), rel=1e-9)
-    assert d50 > d25
+    # water's viscosity 0.8900 mPa s at 25 C and 0.5465 at 50 C (IAPWS 2008, from memory)
+    assert d50 / d25 == pytest.approx((323.15 / 298.15) * 0.8900 / 0.5465, rel=0.01)
 
 
 # --- detection -------------------------------------------------------------------------------
@@ -97,8 +99,10 @@ def test_strong_electrolytes_are_recognised(name):
 
 
 @pytest.mark.parametrize(
-    "name", ["acetic acid", "formic acid", "propionic acid", "ammonia", "methylamine", "ethanol", "urea"]
-)
+    "name",
+    ["acetic acid", "formic acid", "propionic acid", "ammonia", "methylamine", "ethanol", "urea",
+     "carbon dioxide", "sulfur dioxide", "hydrogen sulfide", "chlorine", "MEA", "MDEA", "phenol"],
+)  # fmt: skip
 def test_weak_acids_bases_and_molecules_stay_molecular(name):
     sp = mt.species(name)
     assert ionic_kind(sp) is None
@@ -211,3 +215,19 @@ def test_cli_names_the_phase_option_for_a_method_of_the_other_phase(capsys):
 def test_a_pressure_in_the_method_position_gets_a_hint():
     with pytest.raises(InputTypeError, match=r"by keyword, as P=101325"):
         mt.liquid_diffusivity("ethanol", "water", 300.0, 101325)  # type: ignore[arg-type]
+
+
+def test_an_element_is_not_taken_for_a_salt():
+    # elemental mercury (Hg0) dissolves as atoms: not an electrolyte, whatever it lacks otherwise
+    assert ionic_kind(mt.species("mercury")) is None
+
+
+def test_ammonium_hydroxide_is_sent_to_ammonia():
+    with pytest.raises(InputValueError, match="pass 'ammonia'"):
+        mt.liquid_diffusivity("ammonium hydroxide", "water", 298.15)
+
+
+def test_an_electrolyte_without_tabulated_ions_gets_one_reason():
+    with pytest.raises(MissingConstantError) as info:
+        mt.liquid_diffusivity("copper(II) sulfate", "water", 298.15)
+    assert "wilke-chang" not in str(info.value)
