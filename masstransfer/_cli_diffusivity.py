@@ -125,7 +125,10 @@ def run(args: argparse.Namespace) -> str:
     for cells in rows:
         lines.append("  ".join(c.rjust(w) for c, w in zip(cells, widths, strict=True)))
     if u is not None:
-        lines.append("± one standard deviation, from the method's stated accuracy")
+        lines.append(
+            f"± one standard deviation, {100 * u:.1f} %: the stated average absolute deviation, "
+            f"{report.accuracy_pct:g} %, times sqrt(pi/2) (normally distributed errors)"
+        )
     if args.explain:
         lines += ["", report.summary()]
     else:

@@ -175,3 +175,12 @@ def test_mixture_carrier_takes_the_binary_methods_uncertainty():
     r = mt.mass_transfer_from_heat(35.0, "water", {"nitrogen": 0.79, "oxygen": 0.21}, 320.0)
     u_D = 0.05 * math.sqrt(math.pi / 2)  # Fuller binaries; Blanc's law adds none of its own
     assert r.relative_uncertainty == pytest.approx(2.0 / 3.0 * u_D, rel=1e-12)
+
+
+def test_cli_says_how_the_spread_follows_from_the_stated_accuracy(capsys):
+    from masstransfer.cli import main
+
+    assert main(["diffusivity", "toluene", "air", "-T", "300"]) == 0
+    out = capsys.readouterr().out
+    # Fuller's stated 5 % average absolute deviation times sqrt(pi/2) = 6.27 %
+    assert "± one standard deviation, 6.3 %: the stated average absolute deviation, 5 %" in out

@@ -16,10 +16,10 @@ Estimates only: check designs that affect safety against measured data.
 from __future__ import annotations
 
 import math
-from collections.abc import Mapping
+from collections.abc import Callable, Mapping
 from dataclasses import dataclass
 from types import MappingProxyType
-from typing import Final, Literal, overload
+from typing import Any, Final, Literal, overload
 
 import numpy as np
 
@@ -1339,14 +1339,20 @@ def available_methods(
     a, b = species(solute), species(medium)
     if phase is None:
         phase = "liquid" if medium_state(phase_limits(b), 298.15, 101325.0) == "liquid" else "gas"
+    records: Mapping[str, DiffusivityMethod]
+    ready: Callable[[Species, Species, None], Any]
     if phase == "gas":
-        records, default = GAS_METHODS, ready_gas(a, b, None).record.name
+        records, ready = GAS_METHODS, ready_gas
     elif phase == "liquid":
         from ._liquid import LIQUID_METHODS, ready_liquid
 
-        records, default = LIQUID_METHODS, ready_liquid(a, b, None).record.name
+        records, ready = LIQUID_METHODS, ready_liquid
     else:
         raise InputValueError(f"phase={phase!r} must be 'gas' or 'liquid'")
+    try:
+        default = ready(a, b, None).record.name
+    except MissingConstantError:  # no method applies: list each with its reason, none as default
+        default = ""
     out = []
     for name, rec in records.items():
         blocked, cautions = rec.class_verdict(classify(a), classify(b))

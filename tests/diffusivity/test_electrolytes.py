@@ -231,3 +231,10 @@ def test_an_electrolyte_without_tabulated_ions_gets_one_reason():
     with pytest.raises(MissingConstantError) as info:
         mt.liquid_diffusivity("copper(II) sulfate", "water", 298.15)
     assert "wilke-chang" not in str(info.value)
+
+
+def test_available_methods_lists_every_method_for_an_electrolyte_none_can_estimate():
+    avail = mt.diffusivity.available_methods("copper(II) sulfate", "water", "liquid")
+    assert {m.method for m in avail} >= {"wilke-chang", "hayduk-minhas", "nernst-haskell"}
+    assert not any(m.applies or m.default for m in avail)
+    assert any("tabulated ions" in r for m in avail for r in m.reasons)
